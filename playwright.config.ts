@@ -1,0 +1,31 @@
+import { defineConfig, devices } from '@playwright/test'
+
+const port = Number(process.env.E2E_PORT ?? 3217)
+const dataDir = `${process.cwd()}/.data-e2e/db`
+
+export default defineConfig({
+  testDir: './e2e',
+  workers: 1,
+  timeout: 30_000,
+  reporter: [['list']],
+  use: {
+    baseURL: `http://127.0.0.1:${port}`,
+    trace: 'off',
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    },
+  },
+  projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'], channel: undefined } }],
+  webServer: {
+    // The built server on its own port and a fresh data directory, seeded with the demo shop.
+    command: `rm -rf .data-e2e && node .output/server/index.mjs`,
+    url: `http://127.0.0.1:${port}/api/health`,
+    reuseExistingServer: false,
+    timeout: 60_000,
+    env: {
+      PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: dataDir, DATABASE_URL: '',
+      AUTH_ORIGIN: `http://127.0.0.1:${port}/api/auth`, AUTH_SECRET: 'e2e-secret-for-rootface-browser-tests',
+    },
+  },
+})

@@ -1,0 +1,64 @@
+import { existsSync } from 'node:fs'
+import { dirname, join, resolve } from 'node:path'
+import { PGlite } from '@electric-sql/pglite'
+import { drizzle as drizzlePglite, type PgliteDatabase } from 'drizzle-orm/pglite'
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator'
+import { drizzle as drizzlePg } from 'drizzle-orm/node-postgres'
+import { migrate as migratePg } from 'drizzle-orm/node-postgres/migrator'
+import pg from 'pg'
+import * as schema from './schema'
+import { lockDataDir } from './lock'
+
+// Both drivers expose the same query builder; the app is typed against one of them.
+export type Db = PgliteDatabase<typeof schema>
+
+export interface Database {
+  db: Db
+  driver: 'pglite' | 'postgres'
+  close: () => Promise<void>
+}
+
+export interface OpenOptions {
+  databaseUrl?: string
+  dataDir: string
+  holder?: string
+}
+
+/** Migrations sit beside the built server entry, or in the source tree in dev and scripts. */
+export function migrationsFolder() {
+  const entry = process.argv[1]
+  const built = entry ? join(dirname(entry), 'migrations') : ''
+  if (built && existsSync(join(built, 'meta/_journal.json'))) return built
+  return resolve('server/database/migrations')
+}
+
+export async function openDatabase(options: OpenOptions): Promise<Database> {
+  if (options.databaseUrl) {
+    const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 })
+    const db = drizzlePg(pool, { schema })
+    await migratePg(db, { migrationsFolder: migrationsFolder() })
+    return { db: db as unknown as Db, driver: 'postgres', close: () => pool.end() }
+  }
+  const release = lockDataDir(options.dataDir, options.holder)
+  try {
+    const client = await PGlite.create(options.dataDir)
+    const db = drizzlePglite(client, { schema })
+    await migratePglite(db, { migrationsFolder: migrationsFolder() })
+    return {
+      db,
+      driver: 'pglite',
+      close: async () => {
+        try {
+          await client.close()
+        }
+        finally {
+          release()
+        }
+      },
+    }
+  }
+  catch (error) {
+    release()
+    throw error
+  }
+}

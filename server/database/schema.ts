@@ -1,0 +1,333 @@
+import { sql } from 'drizzle-orm'
+import {
+  boolean, check, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
+} from 'drizzle-orm/pg-core'
+
+// Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
+const created = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow()
+const updated = () => timestamp('updated_at', { withTimezone: true }).notNull().defaultNow()
+const unit = () => text('unit').notNull().default('in')
+const unitCheck = (name: string, column: unknown) => check(name, sql`${column} in ('in', 'mm')`)
+
+export const welders = pgTable('welders', {
+  id: serial('id').primaryKey(),
+  name: text('name').notNull(),
+  stamp: text('stamp').notNull(),
+  employeeNumber: text('employee_number'),
+  status: text('status').notNull().default('active'),
+  email: text('email'),
+  version: integer('version').notNull().default(1),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  uniqueIndex('welders_stamp_key').on(t.stamp),
+  index('welders_name_idx').on(t.name),
+  check('welders_status_check', sql`${t.status} in ('active', 'inactive')`),
+])
+
+export const accounts = pgTable('accounts', {
+  id: serial('id').primaryKey(),
+  email: text('email').notNull(),
+  name: text('name').notNull(),
+  role: text('role').notNull(),
+  passwordHash: text('password_hash'),
+  welderId: integer('welder_id').references(() => welders.id),
+  active: boolean('active').notNull().default(true),
+  createdAt: created(),
+}, t => [
+  uniqueIndex('accounts_email_key').on(sql`lower(${t.email})`),
+  check('accounts_role_check', sql`${t.role} in ('supervisor', 'inspector', 'welder', 'auditor')`),
+  // A welder account must point at its roster entry; no other role may.
+  check('accounts_welder_link_check', sql`(${t.role} = 'welder') = (${t.welderId} is not null)`),
+])
+
+export const baseMetals = pgTable('base_metals', {
+  id: serial('id').primaryKey(),
+  specification: text('specification').notNull(),
+  grade: text('grade').notNull(),
+  pNumber: text('p_number').notNull(),
+  groupNumber: integer('group_number'),
+  // Specified minimum tensile strength, psi (the tensile acceptance of QW-153)
+  minTensilePsi: integer('min_tensile_psi'),
+}, t => [uniqueIndex('base_metals_spec_grade_key').on(t.specification, t.grade)])
+
+export const fillerMetals = pgTable('filler_metals', {
+  id: serial('id').primaryKey(),
+  specification: text('specification').notNull(),
+  classification: text('classification').notNull(),
+  fNumber: text('f_number').notNull(),
+  aNumber: text('a_number'),
+}, t => [uniqueIndex('filler_metals_spec_class_key').on(t.specification, t.classification)])
+
+export const procedures = pgTable('procedures', {
+  id: serial('id').primaryKey(),
+  number: text('number').notNull(),
+  revision: integer('revision').notNull().default(0),
+  title: text('title').notNull(),
+  code: text('code').notNull(),
+  edition: text('edition').notNull(),
+  status: text('status').notNull().default('draft'),
+  unit: unit(),
+  process: text('process').notNull(),
+  transfer: text('transfer'),
+  // Searchable ranges; the rest of the variables live in `variables`.
+  pNumberA: text('p_number_a'),
+  pNumberB: text('p_number_b'),
+  thicknessMin: doublePrecision('thickness_min'),
+  thicknessMax: doublePrecision('thickness_max'),
+  diameterMin: doublePrecision('diameter_min'),
+  positions: text('positions').array().notNull().default(sql`'{}'::text[]`),
+  fNumbers: text('f_numbers').array().notNull().default(sql`'{}'::text[]`),
+  variables: jsonb('variables').notNull().default({}),
+  version: integer('version').notNull().default(1),
+  createdBy: integer('created_by').references(() => accounts.id),
+  approvedAt: timestamp('approved_at', { withTimezone: true }),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  uniqueIndex('procedures_number_revision_key').on(t.number, t.revision),
+  index('procedures_status_idx').on(t.status, t.process),
+  check('procedures_status_check', sql`${t.status} in ('draft', 'approved', 'superseded')`),
+  check('procedures_code_check', sql`${t.code} in ('asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1')`),
+  check('procedures_revision_check', sql`${t.revision} >= 0`),
+  check('procedures_thickness_check', sql`${t.thicknessMin} is null or ${t.thicknessMax} is null or ${t.thicknessMin} <= ${t.thicknessMax}`),
+  unitCheck('procedures_unit_check', t.unit),
+])
+
+export const pqrs = pgTable('pqrs', {
+  id: serial('id').primaryKey(),
+  number: text('number').notNull(),
+  testDate: date('test_date', { mode: 'string' }).notNull(),
+  code: text('code').notNull(),
+  edition: text('edition').notNull(),
+  unit: unit(),
+  process: text('process').notNull(),
+  transfer: text('transfer'),
+  couponThickness: doublePrecision('coupon_thickness').notNull(),
+  depositThickness: doublePrecision('deposit_thickness'),
+  baseMetalId: integer('base_metal_id').references(() => baseMetals.id),
+  fillerMetalId: integer('filler_metal_id').references(() => fillerMetals.id),
+  toughnessRequired: boolean('toughness_required').notNull().default(false),
+  // The values actually used on the coupon (amps, volts, travel, gas, preheat...)
+  actuals: jsonb('actuals').notNull().default({}),
+  toughness: jsonb('toughness'),
+  labReportNumber: text('lab_report_number'),
+  status: text('status').notNull().default('recorded'),
+  version: integer('version').notNull().default(1),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  uniqueIndex('pqrs_number_key').on(t.number),
+  check('pqrs_status_check', sql`${t.status} in ('recorded', 'certified', 'failed')`),
+  check('pqrs_coupon_check', sql`${t.couponThickness} > 0`),
+  unitCheck('pqrs_unit_check', t.unit),
+])
+
+export const pqrTensileSpecimens = pgTable('pqr_tensile_specimens', {
+  id: serial('id').primaryKey(),
+  pqrId: integer('pqr_id').notNull().references(() => pqrs.id, { onDelete: 'cascade' }),
+  label: text('label').notNull(),
+  width: doublePrecision('width').notNull(),
+  thickness: doublePrecision('thickness').notNull(),
+  load: doublePrecision('load').notNull(),
+  strength: doublePrecision('strength').notNull(),
+  breakLocation: text('break_location').notNull(),
+  accepted: boolean('accepted').notNull(),
+}, t => [
+  index('pqr_tensile_pqr_idx').on(t.pqrId),
+  check('pqr_tensile_positive_check', sql`${t.width} > 0 and ${t.thickness} > 0 and ${t.load} > 0`),
+])
+
+export const pqrBendSpecimens = pgTable('pqr_bend_specimens', {
+  id: serial('id').primaryKey(),
+  pqrId: integer('pqr_id').notNull().references(() => pqrs.id, { onDelete: 'cascade' }),
+  type: text('type').notNull(),
+  largestIndication: doublePrecision('largest_indication').notNull().default(0),
+  atCorner: boolean('at_corner').notNull().default(false),
+  accepted: boolean('accepted').notNull(),
+}, t => [
+  index('pqr_bend_pqr_idx').on(t.pqrId),
+  check('pqr_bend_type_check', sql`${t.type} in ('face', 'root', 'side', 'longitudinal-face', 'longitudinal-root')`),
+  check('pqr_bend_indication_check', sql`${t.largestIndication} >= 0`),
+])
+
+export const procedurePqrs = pgTable('procedure_pqrs', {
+  procedureId: integer('procedure_id').notNull().references(() => procedures.id, { onDelete: 'cascade' }),
+  pqrId: integer('pqr_id').notNull().references(() => pqrs.id),
+}, t => [primaryKey({ columns: [t.procedureId, t.pqrId] })])
+
+export const welderTests = pgTable('welder_tests', {
+  id: serial('id').primaryKey(),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  procedureId: integer('procedure_id').references(() => procedures.id),
+  testDate: date('test_date', { mode: 'string' }).notNull(),
+  code: text('code').notNull(),
+  edition: text('edition').notNull(),
+  unit: unit(),
+  process: text('process').notNull(),
+  transfer: text('transfer'),
+  form: text('form').notNull(),
+  weld: text('weld').notNull(),
+  couponThickness: doublePrecision('coupon_thickness'),
+  depositThickness: doublePrecision('deposit_thickness'),
+  layers: integer('layers'),
+  outsideDiameter: doublePrecision('outside_diameter'),
+  pNumber: text('p_number'),
+  fNumber: text('f_number'),
+  backing: boolean('backing').notNull().default(true),
+  positions: text('positions').array().notNull(),
+  progression: text('progression'),
+  visualAccepted: boolean('visual_accepted'),
+  visualNotes: text('visual_notes'),
+  examination: text('examination').notNull().default('bend'),
+  radiography: jsonb('radiography'),
+  // Ranges qualified as computed by shared/rules when the test was last saved
+  ranges: jsonb('ranges'),
+  status: text('status').notNull().default('recorded'),
+  inspectorId: integer('inspector_id').references(() => accounts.id),
+  certifiedAt: timestamp('certified_at', { withTimezone: true }),
+  version: integer('version').notNull().default(1),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  index('welder_tests_welder_idx').on(t.welderId, t.process),
+  index('welder_tests_status_idx').on(t.status, t.testDate),
+  check('welder_tests_status_check', sql`${t.status} in ('recorded', 'certified', 'failed')`),
+  check('welder_tests_form_check', sql`${t.form} in ('plate', 'pipe')`),
+  check('welder_tests_weld_check', sql`${t.weld} in ('groove', 'fillet')`),
+  check('welder_tests_exam_check', sql`${t.examination} in ('bend', 'radiography', 'macro-fracture')`),
+  check('welder_tests_sizes_check', sql`coalesce(${t.couponThickness}, 1) > 0 and coalesce(${t.outsideDiameter}, 1) > 0 and coalesce(${t.depositThickness}, 1) > 0`),
+  unitCheck('welder_tests_unit_check', t.unit),
+])
+
+export const welderTestBends = pgTable('welder_test_bends', {
+  id: serial('id').primaryKey(),
+  testId: integer('test_id').notNull().references(() => welderTests.id, { onDelete: 'cascade' }),
+  type: text('type').notNull(),
+  largestIndication: doublePrecision('largest_indication').notNull().default(0),
+  atCorner: boolean('at_corner').notNull().default(false),
+  accepted: boolean('accepted').notNull(),
+}, t => [
+  index('welder_test_bends_test_idx').on(t.testId),
+  check('welder_test_bends_type_check', sql`${t.type} in ('face', 'root', 'side')`),
+  check('welder_test_bends_indication_check', sql`${t.largestIndication} >= 0`),
+])
+
+export const continuityEntries = pgTable('continuity_entries', {
+  id: serial('id').primaryKey(),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  process: text('process').notNull(),
+  weldedOn: date('welded_on', { mode: 'string' }).notNull(),
+  reference: text('reference').notNull(),
+  recordedBy: integer('recorded_by').references(() => accounts.id),
+  createdAt: created(),
+}, t => [
+  index('continuity_welder_process_idx').on(t.welderId, t.process, t.weldedOn),
+  index('continuity_date_idx').on(t.weldedOn),
+])
+
+export const customers = pgTable('customers', {
+  id: serial('id').primaryKey(),
+  name: text('name').notNull(),
+  contact: text('contact'),
+  createdAt: created(),
+}, t => [uniqueIndex('customers_name_key').on(t.name)])
+
+export const projects = pgTable('projects', {
+  id: serial('id').primaryKey(),
+  customerId: integer('customer_id').notNull().references(() => customers.id),
+  number: text('number').notNull(),
+  name: text('name').notNull(),
+  startsOn: date('starts_on', { mode: 'string' }).notNull(),
+  endsOn: date('ends_on', { mode: 'string' }),
+  createdAt: created(),
+}, t => [
+  uniqueIndex('projects_number_key').on(t.number),
+  check('projects_period_check', sql`${t.endsOn} is null or ${t.endsOn} >= ${t.startsOn}`),
+])
+
+export const projectProcedures = pgTable('project_procedures', {
+  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+  procedureId: integer('procedure_id').notNull().references(() => procedures.id),
+}, t => [primaryKey({ columns: [t.projectId, t.procedureId] })])
+
+export const projectWelders = pgTable('project_welders', {
+  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+}, t => [primaryKey({ columns: [t.projectId, t.welderId] })])
+
+export const auditorGrants = pgTable('auditor_grants', {
+  accountId: integer('account_id').notNull().references(() => accounts.id, { onDelete: 'cascade' }),
+  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+  grantedAt: created(),
+}, t => [primaryKey({ columns: [t.accountId, t.projectId] })])
+
+export const packets = pgTable('packets', {
+  id: serial('id').primaryKey(),
+  projectId: integer('project_id').notNull().references(() => projects.id),
+  requestedBy: integer('requested_by').references(() => accounts.id),
+  status: text('status').notNull().default('queued'),
+  progress: integer('progress').notNull().default(0),
+  pageCount: integer('page_count'),
+  storageKey: text('storage_key'),
+  sha256: text('sha256'),
+  error: text('error'),
+  createdAt: created(),
+}, t => [check('packets_status_check', sql`${t.status} in ('queued', 'building', 'ready', 'failed')`)])
+
+export const signatures = pgTable('signatures', {
+  id: serial('id').primaryKey(),
+  recordType: text('record_type').notNull(),
+  recordId: integer('record_id').notNull(),
+  recordVersion: integer('record_version').notNull(),
+  signerId: integer('signer_id').notNull().references(() => accounts.id),
+  signerName: text('signer_name').notNull(),
+  meaning: text('meaning').notNull(),
+  signedAt: timestamp('signed_at', { withTimezone: true }).notNull().defaultNow(),
+  sha256: text('sha256').notNull(),
+  // Short code printed beside the QR code; the public verification page looks it up.
+  verifyCode: text('verify_code').notNull(),
+}, t => [
+  uniqueIndex('signatures_verify_code_key').on(t.verifyCode),
+  index('signatures_record_idx').on(t.recordType, t.recordId),
+  check('signatures_meaning_check', sql`${t.meaning} in ('prepared', 'witnessed', 'approved', 'certified')`),
+  check('signatures_record_type_check', sql`${t.recordType} in ('procedure', 'pqr', 'welder-test')`),
+  check('signatures_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
+])
+
+export const attachments = pgTable('attachments', {
+  id: serial('id').primaryKey(),
+  recordType: text('record_type').notNull(),
+  recordId: integer('record_id').notNull(),
+  fileName: text('file_name').notNull(),
+  contentType: text('content_type').notNull(),
+  size: integer('size').notNull(),
+  sha256: text('sha256').notNull(),
+  storageKey: text('storage_key').notNull(),
+  uploadedBy: integer('uploaded_by').references(() => accounts.id),
+  createdAt: created(),
+}, t => [
+  index('attachments_record_idx').on(t.recordType, t.recordId),
+  check('attachments_size_check', sql`${t.size} > 0`),
+])
+
+export const readings = pgTable('readings', {
+  id: serial('id').primaryKey(),
+  procedureId: integer('procedure_id').notNull().references(() => procedures.id),
+  welderId: integer('welder_id').references(() => welders.id),
+  takenAt: timestamp('taken_at', { withTimezone: true }).notNull().defaultNow(),
+  values: jsonb('values').notNull(),
+  outOfWindow: boolean('out_of_window').notNull(),
+  recordedBy: integer('recorded_by').references(() => accounts.id),
+}, t => [index('readings_procedure_idx').on(t.procedureId, t.takenAt)])
+
+export const auditEvents = pgTable('audit_events', {
+  id: serial('id').primaryKey(),
+  accountId: integer('account_id').references(() => accounts.id),
+  action: text('action').notNull(),
+  recordType: text('record_type').notNull(),
+  recordId: integer('record_id'),
+  before: jsonb('before'),
+  after: jsonb('after'),
+  at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [index('audit_events_record_idx').on(t.recordType, t.recordId, t.at)])

@@ -1,0 +1,32 @@
+import { openDatabase, type Database, type Db } from '../database/client'
+
+const globalKey = Symbol.for('rootface.database')
+type Holder = { [globalKey]?: Promise<Database> }
+
+/**
+ * The one database of this process. The server starts listening before migrations finish,
+ * so every route awaits the same promise.
+ */
+export function useDatabase(): Promise<Database> {
+  const holder = globalThis as Holder
+  if (!holder[globalKey]) {
+    const config = useRuntimeConfig()
+    holder[globalKey] = openDatabase({
+      databaseUrl: process.env.DATABASE_URL || config.databaseUrl || undefined,
+      dataDir: config.dataDir,
+      holder: `rootface server (pid ${process.pid})`,
+    })
+  }
+  return holder[globalKey]
+}
+
+export async function useDb(): Promise<Db> {
+  return (await useDatabase()).db
+}
+
+export async function closeDatabase() {
+  const holder = globalThis as Holder
+  const pending = holder[globalKey]
+  holder[globalKey] = undefined
+  if (pending) await (await pending).close()
+}

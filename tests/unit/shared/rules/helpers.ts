@@ -1,0 +1,17 @@
+import { expect } from 'vitest'
+import { evaluate } from '../../../../shared/rules/index'
+import type { EvaluationResult } from '../../../../shared/rules/index'
+
+/** Evaluate a request that must succeed, and return its result. */
+export function ok(request: unknown): EvaluationResult {
+  const result = evaluate(request)
+  if ('error' in result) throw new Error(`unexpected error: ${String(result.error)}`)
+  return result
+}
+
+/** Evaluate a request that must be refused, and return its message. */
+export function refused(request: unknown): string {
+  const result = evaluate(request)
+  expect(result).toHaveProperty('error')
+  return String((result as { error: unknown }).error)
+}
