@@ -32,8 +32,11 @@ export default defineNuxtConfig({
   dir: { shared: 'shared', public: 'public' },
   srcDir: '.',
   serverDir: 'server',
+  // Separate build and output folders let several builds run side by side (tests, benchmarks).
+  buildDir: process.env.NUXT_BUILD_DIR || '.nuxt',
   compatibilityDate: '2026-11-01',
   nitro: {
+    output: { dir: process.env.NUXT_OUTPUT_DIR || '.output' },
     experimental: { tasks: true },
     hooks: {
       // The built server reads its migrations from beside its entry file.

@@ -1,7 +1,8 @@
 import { defineConfig, devices } from '@playwright/test'
 
 const port = Number(process.env.E2E_PORT ?? 3217)
-const dataDir = `${process.cwd()}/.data-e2e/db`
+const dataRoot = `${process.cwd()}/.data-e2e-${port}`
+const output = process.env.NUXT_OUTPUT_DIR || '.output'
 
 export default defineConfig({
   testDir: './e2e',
@@ -19,12 +20,12 @@ export default defineConfig({
   projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'], channel: undefined } }],
   webServer: {
     // The built server on its own port and a fresh data directory, seeded with the demo shop.
-    command: `rm -rf .data-e2e && node .output/server/index.mjs`,
+    command: `rm -rf ${dataRoot} && node ${output}/server/index.mjs`,
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,
     env: {
-      PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: dataDir, DATABASE_URL: '',
+      PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: `${dataRoot}/db`, DATABASE_URL: '',
       AUTH_ORIGIN: `http://127.0.0.1:${port}/api/auth`, AUTH_SECRET: 'e2e-secret-for-rootface-browser-tests',
     },
   },

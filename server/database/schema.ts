@@ -331,3 +331,63 @@ export const auditEvents = pgTable('audit_events', {
   after: jsonb('after'),
   at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
 }, t => [index('audit_events_record_idx').on(t.recordType, t.recordId, t.at)])
+
+export const shopSettings = pgTable('shop_settings', {
+  id: integer('id').primaryKey().default(1),
+  name: text('name').notNull(),
+  // Whether welders may log their own continuity (DESIGN.md: "only if the shop allows it")
+  welderLogsOwnContinuity: boolean('welder_logs_own_continuity').notNull().default(false),
+  updatedAt: updated(),
+}, t => [check('shop_settings_single_row_check', sql`${t.id} = 1`)])
+
+export const signoffRequests = pgTable('signoff_requests', {
+  id: serial('id').primaryKey(),
+  recordType: text('record_type').notNull(),
+  recordId: integer('record_id').notNull(),
+  // What is asked: an inspector to certify, or a supervisor to approve
+  meaning: text('meaning').notNull(),
+  requestedBy: integer('requested_by').notNull().references(() => accounts.id),
+  requestedOf: integer('requested_of').references(() => accounts.id),
+  note: text('note'),
+  status: text('status').notNull().default('open'),
+  createdAt: created(),
+  resolvedAt: timestamp('resolved_at', { withTimezone: true }),
+}, t => [
+  index('signoff_requests_open_idx').on(t.status, t.requestedOf),
+  check('signoff_requests_status_check', sql`${t.status} in ('open', 'done', 'withdrawn')`),
+  check('signoff_requests_meaning_check', sql`${t.meaning} in ('approved', 'certified', 'witnessed')`),
+])
+
+export const accountTokens = pgTable('account_tokens', {
+  id: serial('id').primaryKey(),
+  accountId: integer('account_id').notNull().references(() => accounts.id, { onDelete: 'cascade' }),
+  purpose: text('purpose').notNull(),
+  // Only the SHA-256 of the token is stored; the token itself is in the link sent by e-mail.
+  tokenHash: text('token_hash').notNull(),
+  expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+  usedAt: timestamp('used_at', { withTimezone: true }),
+  createdAt: created(),
+}, t => [
+  uniqueIndex('account_tokens_hash_key').on(t.tokenHash),
+  check('account_tokens_purpose_check', sql`${t.purpose} in ('invitation', 'password-reset')`),
+])
+
+export const mailMessages = pgTable('mail_messages', {
+  id: serial('id').primaryKey(),
+  // One key per message that must go out once (e.g. 'lapse:12:GMAW:2027-01-15:14'); a re-run finds it and skips.
+  dedupeKey: text('dedupe_key').notNull(),
+  kind: text('kind').notNull(),
+  to: text('to').notNull(),
+  subject: text('subject').notNull(),
+  text: text('text').notNull(),
+  html: text('html').notNull(),
+  status: text('status').notNull().default('queued'),
+  attempts: integer('attempts').notNull().default(0),
+  lastError: text('last_error'),
+  sentAt: timestamp('sent_at', { withTimezone: true }),
+  createdAt: created(),
+}, t => [
+  uniqueIndex('mail_messages_dedupe_key').on(t.dedupeKey),
+  index('mail_messages_status_idx').on(t.status, t.createdAt),
+  check('mail_messages_status_check', sql`${t.status} in ('queued', 'sent', 'failed')`),
+])

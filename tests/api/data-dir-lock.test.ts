@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { spawnSync } from 'node:child_process'
 import { afterAll, describe, expect, it } from 'vitest'
-import { removeDir, startServer, type TestServer } from './harness'
+import { removeDir, serverEntry, startServer, type TestServer } from './harness'
 
 const dataDir = mkdtempSync(join(tmpdir(), 'rootface-lock-'))
 let first: TestServer | undefined
@@ -16,7 +16,7 @@ afterAll(async () => {
 describe.skipIf(!!process.env.TEST_DATABASE_URL)('one process per PGlite data directory', () => {
   it('a second server on the same data directory stops at once, naming the holder; the first keeps working', async () => {
     first = await startServer({ dataDir })
-    const second = spawnSync(process.execPath, ['.output/server/index.mjs'], {
+    const second = spawnSync(process.execPath, [serverEntry], {
       env: { ...process.env, PORT: '0', HOST: '127.0.0.1', NUXT_DATA_DIR: join(dataDir, 'db'), AUTH_ORIGIN: 'http://127.0.0.1:1/api/auth', DATABASE_URL: '' },
       encoding: 'utf8', timeout: 30_000,
     })

@@ -14,6 +14,9 @@ export interface TestServer {
   stop: (signal?: NodeJS.Signals) => Promise<void>
 }
 
+/** The built server; NUXT_OUTPUT_DIR picks another build (parallel work, benchmarks). */
+export const serverEntry = join(process.env.NUXT_OUTPUT_DIR || '.output', 'server/index.mjs')
+
 export async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const server = createServer()
@@ -44,7 +47,7 @@ export async function startServer(options: { dataDir?: string, env?: Record<stri
   const databaseUrl = options.dataDir ? undefined : await freshPostgres()
   const url = `http://127.0.0.1:${port}`
   let log = ''
-  const child = spawn(process.execPath, ['.output/server/index.mjs'], {
+  const child = spawn(process.execPath, [serverEntry], {
     env: {
       ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: join(dataDir, 'db'),
       AUTH_ORIGIN: `${url}/api/auth`, AUTH_SECRET: 'test-secret-for-rootface-api-tests', NODE_ENV: 'production',

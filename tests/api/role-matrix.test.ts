@@ -1,23 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { Client, signedIn, startServer, type TestServer } from './harness'
 import { apiRoutes } from './routes'
+import type { MatrixEntries } from './matrix/types'
 
 type Who = 'signedOut' | 'supervisor' | 'inspector' | 'welder' | 'auditor'
 const who: Who[] = ['signedOut', 'supervisor', 'inspector', 'welder', 'auditor']
 
-// Expected status per route and role: [signed out, supervisor, inspector, welder, auditor].
-// `url` fills route parameters; welder 1 (KB-01) is not the demo welder account's own roster entry.
-const matrix: Record<string, { url?: string, expect: [number, number, number, number, number] }> = {
-  'GET /api/health': { expect: [200, 200, 200, 200, 200] },
-  'GET /api/welders': { expect: [401, 200, 200, 403, 403] },
-  'GET /api/welders/[id]': { url: '/api/welders/1', expect: [401, 200, 200, 404, 403] },
-  'GET /api/procedures': { expect: [401, 200, 200, 200, 403] },
-  'GET /api/tests': { expect: [401, 200, 200, 200, 403] },
-  'GET /api/continuity': { expect: [401, 200, 200, 200, 403] },
-  'GET /api/me/qualifications': { expect: [401, 403, 403, 200, 403] },
-  'GET /api/projects': { expect: [401, 200, 403, 403, 200] },
-  'GET /api/dashboard': { expect: [401, 200, 200, 403, 403] },
-}
+// One file per area under ./matrix; together they must name every route in server/api.
+const modules = import.meta.glob<{ entries: MatrixEntries }>('./matrix/*.ts', { eager: true })
+const matrix: MatrixEntries = Object.assign({}, ...Object.values(modules).map(m => m.entries ?? {}))
 
 let server: TestServer
 const clients = {} as Record<Who, Client>
@@ -38,8 +29,14 @@ describe('role matrix: every API route × every role', () => {
   for (const [route, entry] of Object.entries(matrix)) {
     const [method, path] = route.split(' ') as [string, string]
     it(`${route} answers ${entry.expect.join('/')}`, async () => {
+      const url = typeof entry.url === 'function' ? await entry.url({ supervisor: clients.supervisor }) : entry.url ?? path
+      const init: RequestInit = { method }
+      if (entry.body !== undefined) {
+        init.body = JSON.stringify(entry.body)
+        init.headers = { 'content-type': 'application/json' }
+      }
       const got: number[] = []
-      for (const role of who) got.push((await clients[role].fetch(entry.url ?? path, { method })).status)
+      for (const role of who) got.push((await clients[role].fetch(url, init)).status)
       expect(got).toEqual(entry.expect)
     })
   }

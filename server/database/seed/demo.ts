@@ -8,7 +8,7 @@ import { qualifiedRangesOf } from '../../../shared/qualification/test-ranges'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
 import {
-  demoAccounts, demoBaseMetals, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
+  demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
 } from './demo-data'
 
@@ -21,6 +21,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
   const passwordHash = await bcrypt.hash(demoPassword, 10)
 
   await db.transaction(async (tx) => {
+    await tx.insert(t.shopSettings).values({ id: 1, name: demoShopName }).onConflictDoNothing()
     const welders = await tx.insert(t.welders).values(demoWelders.map(w => ({ ...w, status: 'status' in w ? w.status : 'active' }))).returning()
     const welderId = new Map(welders.map(w => [w.stamp, w.id]))
     const accounts = await tx.insert(t.accounts).values(demoAccounts.map(a => ({
