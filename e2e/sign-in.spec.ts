@@ -1,11 +1,5 @@
-import { expect, test, type Page } from '@playwright/test'
-
-async function signIn(page: Page, email: string, password = 'rootface-demo') {
-  await page.goto('/sign-in')
-  await page.getByLabel('E-mail').fill(email)
-  await page.getByLabel('Password').fill(password)
-  await page.getByRole('button', { name: 'Sign in' }).click()
-}
+import { expect, test } from '@playwright/test'
+import { signIn } from './support/sign-in'
 
 const roles = [
   { email: 'supervisor@demo.rootface.test', lands: '/dashboard', badge: 'Quality manager', nav: ['Procedures', 'Roster', 'Projects'], heading: 'Dashboard' },
