@@ -16,11 +16,14 @@ export const welders = pgTable('welders', {
   employeeNumber: text('employee_number'),
   status: text('status').notNull().default('active'),
   email: text('email'),
+  // Secret of the welder's subscribable calendar feed of lapse dates; null until the welder asks for one.
+  calendarToken: text('calendar_token'),
   version: integer('version').notNull().default(1),
   createdAt: created(),
   updatedAt: updated(),
 }, t => [
   uniqueIndex('welders_stamp_key').on(t.stamp),
+  uniqueIndex('welders_calendar_token_key').on(t.calendarToken),
   index('welders_name_idx').on(t.name),
   check('welders_status_check', sql`${t.status} in ('active', 'inactive')`),
 ])
