@@ -5,7 +5,7 @@ import { join } from 'node:path'
 const rootDir = fileURLToPath(new URL('.', import.meta.url))
 
 export default defineNuxtConfig({
-  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', '@sidebase/nuxt-auth', '@nuxt/eslint'],
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', '@sidebase/nuxt-auth', '@nuxt/eslint', 'nuxt-security'],
   devtools: { enabled: false },
   app: {
     head: {
@@ -27,6 +27,12 @@ export default defineNuxtConfig({
     authSecret: 'rootface-development-secret-change-me',
     // NUXT_SEED_DEMO=false keeps an empty database empty
     seedDemo: true,
+    // NUXT_FILES_DIR: where uploaded files live on local disk (default: 'files' beside the data directory); S3_* env switches to a bucket
+    filesDir: '',
+    // NUXT_APP_URL: the public address put in e-mailed links (default: the origin of AUTH_ORIGIN)
+    appUrl: '',
+    // NUXT_MAIL_TEST_CLOCK=true lets a supervisor run the reminder job for another day (development and tests only)
+    mailTestClock: false,
     public: { shopName: 'Rootface demo shop' },
   },
   dir: { shared: 'shared', public: 'public' },
@@ -38,6 +44,10 @@ export default defineNuxtConfig({
   nitro: {
     output: { dir: process.env.NUXT_OUTPUT_DIR || '.output' },
     experimental: { tasks: true },
+    // Lapse reminders and the weekly digest once a day at 06:00; the outbox retries queued mail every minute.
+    scheduledTasks: { '0 6 * * *': ['mail:reminders'], '* * * * *': ['mail:send'] },
+    // The sheet fonts travel with the server build (read with useStorage('assets:sheet-fonts')).
+    serverAssets: [{ baseName: 'sheet-fonts', dir: join(rootDir, 'node_modules/source-sans/TTF'), pattern: 'SourceSans3-{Regular,Semibold,Bold,It}.ttf' }],
     hooks: {
       // The built server reads its migrations from beside its entry file.
       async compiled(nitro) {
@@ -55,5 +65,21 @@ export default defineNuxtConfig({
     sessionRefresh: { enablePeriodically: false, enableOnWindowFocus: false },
   },
   eslint: { config: { stylistic: true } },
+  // Security headers (CSP with per-request nonces, no inline scripts), size limits; sign-in slowing is our own.
+  security: {
+    rateLimiter: false,
+    xssValidator: false,
+    corsHandler: false,
+    requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 21_000_000 },
+    headers: {
+      contentSecurityPolicy: {
+        'img-src': ['\'self\'', 'data:', 'blob:'],
+        'script-src': ['\'self\'', '\'strict-dynamic\'', '\'nonce-{{nonce}}\''],
+        'frame-ancestors': ['\'none\''],
+        'upgrade-insecure-requests': false,
+      },
+      crossOriginEmbedderPolicy: false,
+    },
+  },
   tailwindcss: { cssPath: false, viewer: false },
 })

@@ -41,8 +41,8 @@ async function freshPostgres(): Promise<string | undefined> {
   return url.toString()
 }
 
-export async function startServer(options: { dataDir?: string, env?: Record<string, string> } = {}): Promise<TestServer> {
-  const port = await freePort()
+export async function startServer(options: { dataDir?: string, port?: number, env?: Record<string, string> } = {}): Promise<TestServer> {
+  const port = options.port ?? await freePort()
   const dataDir = options.dataDir ?? mkdtempSync(join(tmpdir(), 'rootface-api-'))
   const databaseUrl = options.dataDir ? undefined : await freshPostgres()
   const url = `http://127.0.0.1:${port}`
