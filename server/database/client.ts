@@ -16,6 +16,8 @@ export interface Database {
   db: Db
   driver: 'pglite' | 'postgres'
   close: () => Promise<void>
+  /** A gzip tarball of the embedded database's files, taken while it runs (PGlite only). */
+  backup?: () => Promise<Blob>
 }
 
 export interface OpenOptions {
@@ -30,6 +32,19 @@ export function migrationsFolder() {
   const built = entry ? join(dirname(entry), 'migrations') : ''
   if (built && existsSync(join(built, 'meta/_journal.json'))) return built
   return resolve('server/database/migrations')
+}
+
+/** Opens a PGlite data directory from a backup tarball (the directory must not exist yet). */
+export async function restorePglite(dataDir: string, archive: Blob, holder = 'restore') {
+  const release = lockDataDir(dataDir, holder)
+  try {
+    const client = await PGlite.create({ dataDir, loadDataDir: archive })
+    await client.query('select 1')
+    await client.close()
+  }
+  finally {
+    release()
+  }
 }
 
 export async function openDatabase(options: OpenOptions): Promise<Database> {
@@ -47,6 +62,7 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
     return {
       db,
       driver: 'pglite',
+      backup: () => client.dumpDataDir('gzip'),
       close: async () => {
         try {
           await client.close()

@@ -1,13 +1,8 @@
 import { DataDirLockedError } from '../database/lock'
-import { seedDemoShop } from '../database/seed/demo'
 
-/** Opens the database at start-up, seeds the demo shop into an empty one, closes it on shutdown. */
+/** Opens the database at start-up (see useDatabase), stops at once when that fails, closes it on shutdown. */
 export default defineNitroPlugin((nitroApp) => {
-  const config = useRuntimeConfig()
   useDatabase()
-    .then(async ({ db }) => {
-      if (String(config.seedDemo) !== 'false') await seedDemoShop(db)
-    })
     .catch((error: unknown) => {
       if (error instanceof DataDirLockedError) {
         console.error(`\n[rootface] ${error.message}\n`)

@@ -1,11 +1,12 @@
 import { openDatabase, type Database, type Db } from '../database/client'
+import { seedDemoShop } from '../database/seed/demo'
 
 const globalKey = Symbol.for('rootface.database')
 type Holder = { [globalKey]?: Promise<Database> }
 
 /**
- * The one database of this process. The server starts listening before migrations finish,
- * so every route awaits the same promise.
+ * The one database of this process, migrated and (on an empty database) seeded with the demo shop.
+ * The server starts listening before that ends, so every route awaits the same promise.
  */
 export function useDatabase(): Promise<Database> {
   const holder = globalThis as Holder
@@ -15,6 +16,9 @@ export function useDatabase(): Promise<Database> {
       databaseUrl: process.env.DATABASE_URL || config.databaseUrl || undefined,
       dataDir: config.dataDir,
       holder: `rootface server (pid ${process.pid})`,
+    }).then(async (database) => {
+      if (String(config.seedDemo) !== 'false') await seedDemoShop(database.db)
+      return database
     })
   }
   return holder[globalKey]

@@ -11,7 +11,7 @@ export interface TestServer {
   databaseUrl?: string
   process: ChildProcess
   output: () => string
-  stop: (signal?: NodeJS.Signals) => Promise<void>
+  stop: (signal?: NodeJS.Signals, options?: { keepData?: boolean }) => Promise<void>
 }
 
 /** The built server; NUXT_OUTPUT_DIR picks another build (parallel work, benchmarks). */
@@ -41,10 +41,11 @@ async function freshPostgres(): Promise<string | undefined> {
   return url.toString()
 }
 
-export async function startServer(options: { dataDir?: string, port?: number, env?: Record<string, string> } = {}): Promise<TestServer> {
+export async function startServer(options: { dataDir?: string, databaseUrl?: string, port?: number, env?: Record<string, string> } = {}): Promise<TestServer> {
   const port = options.port ?? await freePort()
   const dataDir = options.dataDir ?? mkdtempSync(join(tmpdir(), 'rootface-api-'))
-  const databaseUrl = options.dataDir ? undefined : await freshPostgres()
+  // A given data directory means PGlite on purpose (unless a database URL is given too).
+  const databaseUrl = options.databaseUrl ?? (options.dataDir ? undefined : await freshPostgres())
   const url = `http://127.0.0.1:${port}`
   let log = ''
   const child = spawn(process.execPath, [serverEntry], {
@@ -74,13 +75,13 @@ export async function startServer(options: { dataDir?: string, port?: number, en
   }
   return {
     url, dataDir, databaseUrl, process: child, output: () => log,
-    stop: async (signal: NodeJS.Signals = 'SIGTERM') => {
+    stop: async (signal: NodeJS.Signals = 'SIGTERM', stopOptions: { keepData?: boolean } = {}) => {
       if (child.exitCode === null) {
         const exited = new Promise(r => child.once('exit', r))
         child.kill(signal)
         await exited
       }
-      if (!options.dataDir) rmSync(dataDir, { recursive: true, force: true })
+      if (!options.dataDir && !stopOptions.keepData) rmSync(dataDir, { recursive: true, force: true })
     },
   }
 }
