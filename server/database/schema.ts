@@ -307,6 +307,8 @@ export const attachments = pgTable('attachments', {
   size: integer('size').notNull(),
   sha256: text('sha256').notNull(),
   storageKey: text('storage_key').notNull(),
+  // What the file is to its record: lab report, radiography report, coupon photo, joint sketch, mill test report...
+  kind: text('kind').notNull().default('other'),
   uploadedBy: integer('uploaded_by').references(() => accounts.id),
   createdAt: created(),
 }, t => [
@@ -387,6 +389,8 @@ export const mailMessages = pgTable('mail_messages', {
   status: text('status').notNull().default('queued'),
   attempts: integer('attempts').notNull().default(0),
   lastError: text('last_error'),
+  // A send claims the row until then; after a failure it is the earliest time of the next attempt.
+  notBefore: timestamp('not_before', { withTimezone: true }),
   sentAt: timestamp('sent_at', { withTimezone: true }),
   createdAt: created(),
 }, t => [

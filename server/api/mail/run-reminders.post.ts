@@ -1,0 +1,13 @@
+import { runRemindersSchema } from '#shared/schemas/mail'
+
+/** POST /api/mail/run-reminders {today?}: run the daily reminder job now, through the same Nitro task (supervisor) */
+export default defineEventHandler(async (event) => {
+  await requireRole(event, ['supervisor'])
+  const body = await validBody(event, runRemindersSchema)
+  const testClock = String(useRuntimeConfig().mailTestClock) === 'true'
+  if (body.today && !testClock) {
+    throw createError({ statusCode: 400, statusMessage: 'Invalid body', message: 'today: another day can be set only with NUXT_MAIL_TEST_CLOCK=true', data: { formErrors: [], fieldErrors: { today: ['Another day can be set only when the server runs with NUXT_MAIL_TEST_CLOCK=true'] } } })
+  }
+  const { result } = await runTask('mail:reminders', { payload: body.today ? { today: body.today } : {} })
+  return result
+})

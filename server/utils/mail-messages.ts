@@ -1,0 +1,86 @@
+import { format } from 'date-fns'
+import type { ProcessStanding } from '#shared/qualification/process-standing'
+import { codeName } from '#shared/rules/caution'
+import type { ReminderStep } from '#shared/mail/reminder-steps'
+import type { OutgoingMail } from './mail'
+import { renderLetter } from './mail-letter'
+
+// The words of each message Rootface sends. Builders are pure: the caller queues what they return.
+
+const caution = 'Rootface computes lapse dates from the continuity log and the code edition named on each test. It helps; it does not qualify anyone: '
+  + 'the governing code edition, your shop\'s quality manual and the inspector have the final word.'
+
+const roleWords: Record<string, string> = { supervisor: 'quality manager', inspector: 'inspector', welder: 'welder', auditor: 'auditor' }
+
+const when = (date: Date) => format(date, 'yyyy-MM-dd HH:mm')
+
+export function invitationMail(input: { tokenId: number, accountId: number, to: string, name: string, role: string, invitedBy: string, link: string, expiresAt: Date, shopName: string }): OutgoingMail {
+  const body = renderLetter({
+    greeting: `Hello ${input.name},`,
+    paragraphs: [
+      `${input.invitedBy} has opened a Rootface account for you at ${input.shopName}, as ${roleWords[input.role] ?? input.role}.`,
+      `Choose your password with the link below. It works once and until ${when(input.expiresAt)} (server time); after that, ask for a new invitation.`,
+    ],
+    action: { label: 'Choose your password', href: input.link },
+    footnotes: ['You receive this because someone at the shop entered your address. If you did not expect it, ignore it: no account is usable until a password is chosen.'],
+  }, input.shopName)
+  return { dedupeKey: `invitation:${input.accountId}:${input.tokenId}`, kind: 'invitation', to: input.to, subject: `Your Rootface account at ${input.shopName}`, ...body }
+}
+
+export function passwordResetMail(input: { dedupeKey: string, to: string, name: string, link: string, expiresAt: Date, shopName: string }): OutgoingMail {
+  const body = renderLetter({
+    greeting: `Hello ${input.name},`,
+    paragraphs: [
+      'Someone asked to reset the password of your Rootface account. If it was you, choose a new password with the link below.',
+      `The link works once and until ${when(input.expiresAt)} (server time). Your current password keeps working until you choose a new one.`,
+    ],
+    action: { label: 'Choose a new password', href: input.link },
+    footnotes: ['If you did not ask for this, ignore this message; nothing changes.'],
+  }, input.shopName)
+  return { dedupeKey: input.dedupeKey, kind: 'password-reset', to: input.to, subject: 'Reset your Rootface password', ...body }
+}
+
+export function lapseReminderMail(input: { welder: { id: number, name: string, stamp: string }, to: string, standing: ProcessStanding, step: ReminderStep, link: string, shopName: string }): OutgoingMail {
+  const s = input.standing
+  const days = s.daysLeft === 1 ? '1 day' : `${s.daysLeft} days`
+  const body = renderLetter({
+    greeting: `Hello ${input.welder.name},`,
+    paragraphs: [
+      `Your ${s.process} qualification (stamp ${input.welder.stamp}) lapses on ${s.lapsesOn}, in ${days}. The last use on record is ${s.lastUse}.`,
+      `Welding with ${s.process} before that day, logged in the continuity log, keeps it current. Once it has lapsed you need a new test.`,
+      `${codeName(s.code)} ${s.edition}: ${s.rule}`,
+    ],
+    action: { label: 'See your qualifications', href: input.link },
+    closing: ['If you have welded with this process recently and it is not in the log, tell your inspector or quality manager.'],
+    footnotes: [caution, `Reminders go out ${[30, 14, 7].join(', ')} days before a qualification lapses; this is the ${input.step}-day reminder.`],
+  }, input.shopName)
+  return {
+    dedupeKey: `lapse:${input.welder.id}:${s.process}:${s.lapsesOn}:${input.step}`, kind: 'lapse-reminder', to: input.to,
+    subject: `${s.process} qualification lapses on ${s.lapsesOn} (${days})`, ...body,
+  }
+}
+
+export interface DigestRow { stamp: string, name: string, standing: ProcessStanding }
+
+export function weeklyDigestMail(input: { week: string, account: { id: number, name: string, email: string }, today: string, windowDays: number, rows: DigestRow[], link: string, shopName: string }): OutgoingMail {
+  const count = input.rows.length
+  const body = renderLetter({
+    greeting: `Hello ${input.account.name},`,
+    paragraphs: [count
+      ? `${count} welder ${count === 1 ? 'qualification lapses' : 'qualifications lapse'} in the ${input.windowDays} days from ${input.today} unless the process is used and logged before then:`
+      : `No welder qualification lapses in the ${input.windowDays} days from ${input.today}.`],
+    table: count
+      ? {
+          head: ['Lapses on', 'Days', 'Stamp', 'Welder', 'Process', 'Last use'],
+          rows: input.rows.map(r => [r.standing.lapsesOn, String(r.standing.daysLeft), r.stamp, r.name, r.standing.process, r.standing.lastUse]),
+        }
+      : undefined,
+    action: { label: 'Open the roster', href: input.link },
+    footnotes: [caution, 'This digest goes to every active quality manager account once a week.'],
+  }, input.shopName)
+  return {
+    dedupeKey: `digest:${input.week}:${input.account.id}`, kind: 'weekly-digest', to: input.account.email,
+    subject: count ? `Lapsing in the next ${input.windowDays} days: ${count} ${count === 1 ? 'qualification' : 'qualifications'} (${input.week})` : `Nothing lapses in the next ${input.windowDays} days (${input.week})`,
+    ...body,
+  }
+}

@@ -1,0 +1,13 @@
+import { z } from 'zod'
+import { listQuerySchema } from './list'
+
+export const mailListQuerySchema = listQuerySchema(['createdAt', 'to', 'subject', 'status', 'kind']).extend({
+  status: z.enum(['queued', 'sent', 'failed']).optional(),
+  kind: z.string().trim().max(40).optional(),
+  dir: z.enum(['asc', 'desc']).default('desc'),
+})
+
+/** Run the reminder job now; `today` (for a test clock) is honoured only when the server allows it. */
+export const runRemindersSchema = z.object({
+  today: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'A day as YYYY-MM-DD').optional(),
+})
