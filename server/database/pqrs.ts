@@ -1,0 +1,112 @@
+import { and, asc, eq, inArray } from 'drizzle-orm'
+import type { Db } from './client'
+import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, signatures } from './schema'
+import { evaluate } from '#shared/rules'
+import { bendAcceptance } from '#shared/qualification/bend-acceptance'
+import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
+import { tensileOf } from '#shared/qualification/tensile-acceptance'
+import { psiToMpa, type PqrActuals, type PqrDraft, type PqrResults } from '#shared/schemas/pqr'
+import type { CodeId, Unit } from '#shared/rules/types'
+
+export type PqrRow = typeof pqrs.$inferSelect
+
+/** Heat input of the coupon: as recorded, or from volts, amps and travel speed (QW-409.1(a) for ASME). */
+export function pqrHeatInput(row: Pick<PqrRow, 'code' | 'unit' | 'edition' | 'actuals'>): number | null {
+  const a = row.actuals as PqrActuals
+  if (typeof a.heatInput === 'number') return a.heatInput
+  if (typeof a.volts !== 'number' || typeof a.amps !== 'number' || typeof a.travelSpeed !== 'number') return null
+  const result = evaluate({ code: row.code, check: 'heat-input', unit: row.unit, edition: row.edition, input: { volts: a.volts, amps: a.amps, travelSpeed: a.travelSpeed } })
+  return 'error' in result ? null : (result as unknown as { heatInput: number }).heatInput
+}
+
+/** The PQRs as the support check reads them, with their base-metal P-No., filler F-No. and whether every result passed. */
+export async function supportPqrs(db: Db, ids: number[]): Promise<SupportPqr[]> {
+  if (!ids.length) return []
+  const rows = await db.select({ pqr: pqrs, pNumber: baseMetals.pNumber, fNumber: fillerMetals.fNumber }).from(pqrs)
+    .leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
+    .where(inArray(pqrs.id, ids)).orderBy(asc(pqrs.number))
+  const [tensile, bends] = await Promise.all([
+    db.select({ pqrId: pqrTensileSpecimens.pqrId, accepted: pqrTensileSpecimens.accepted }).from(pqrTensileSpecimens).where(inArray(pqrTensileSpecimens.pqrId, ids)),
+    db.select({ pqrId: pqrBendSpecimens.pqrId, accepted: pqrBendSpecimens.accepted }).from(pqrBendSpecimens).where(inArray(pqrBendSpecimens.pqrId, ids)),
+  ])
+  return rows.map(({ pqr, pNumber, fNumber }) => {
+    const t = tensile.filter(s => s.pqrId === pqr.id)
+    const b = bends.filter(s => s.pqrId === pqr.id)
+    return {
+      id: pqr.id, number: pqr.number, code: pqr.code, edition: pqr.edition, unit: pqr.unit as Unit, process: pqr.process, transfer: pqr.transfer,
+      couponThickness: pqr.couponThickness, depositThickness: pqr.depositThickness, toughnessTested: pqr.toughnessRequired,
+      heatInput: pqrHeatInput(pqr), fNumber: fNumber ?? null, pNumber: pNumber ?? null, status: pqr.status,
+      resultsPass: t.length > 0 && b.length > 0 && t.every(s => s.accepted) && b.every(s => s.accepted),
+    }
+  })
+}
+
+export async function findPqr(db: Db, id: number) {
+  const [row] = await db.select().from(pqrs).where(eq(pqrs.id, id)).limit(1)
+  return row ?? null
+}
+
+/** One PQR with its metals, results, signatures, the procedures it supports and the ranges it qualifies. */
+export async function pqrDetail(db: Db, id: number) {
+  const row = await findPqr(db, id)
+  if (!row) return null
+  const [[base], [filler], tensile, bends, signed, supports, [support]] = await Promise.all([
+    row.baseMetalId ? db.select().from(baseMetals).where(eq(baseMetals.id, row.baseMetalId)) : Promise.resolve([]),
+    row.fillerMetalId ? db.select().from(fillerMetals).where(eq(fillerMetals.id, row.fillerMetalId)) : Promise.resolve([]),
+    db.select().from(pqrTensileSpecimens).where(eq(pqrTensileSpecimens.pqrId, id)).orderBy(asc(pqrTensileSpecimens.id)),
+    db.select().from(pqrBendSpecimens).where(eq(pqrBendSpecimens.pqrId, id)).orderBy(asc(pqrBendSpecimens.id)),
+    db.select({ id: signatures.id, signerName: signatures.signerName, meaning: signatures.meaning, signedAt: signatures.signedAt, sha256: signatures.sha256, verifyCode: signatures.verifyCode, recordVersion: signatures.recordVersion })
+      .from(signatures).where(and(eq(signatures.recordType, 'pqr'), eq(signatures.recordId, id))).orderBy(asc(signatures.signedAt)),
+    db.select({ id: procedures.id, number: procedures.number, revision: procedures.revision, status: procedures.status, title: procedures.title })
+      .from(procedurePqrs).innerJoin(procedures, eq(procedures.id, procedurePqrs.procedureId)).where(eq(procedurePqrs.pqrId, id))
+      .orderBy(asc(procedures.number), asc(procedures.revision)),
+    supportPqrs(db, [id]),
+  ])
+  const qualifies = support ? pqrQualifies(support, { code: row.code, edition: row.edition, unit: row.unit as Unit }) : null
+  const specimensNeeded = specimensRequired(row)
+  return {
+    pqr: { ...row, heatInput: pqrHeatInput(row) },
+    baseMetal: base ?? null, fillerMetal: filler ?? null, tensile, bends, signatures: signed, procedures: supports,
+    qualifies, specimensNeeded, resultsPass: support?.resultsPass ?? false,
+    minimumStrength: base?.minTensilePsi ? minimumStrengthOf(base.minTensilePsi, row.unit as Unit) : null,
+  }
+}
+
+/** The base metal's specified minimum in the record's stress unit: psi, or MPa for a millimetre record. */
+export function minimumStrengthOf(psi: number, unit: Unit) {
+  return unit === 'in' ? psi : psiToMpa(psi)
+}
+
+/** Specimens Table QW-451.1 asks of this coupon (ASME IX); null when the code carries no procedure table here. */
+export function specimensRequired(row: Pick<PqrRow, 'code' | 'edition' | 'unit' | 'process' | 'transfer' | 'couponThickness' | 'depositThickness'>) {
+  const result = evaluate({
+    code: row.code, check: 'procedure-ranges', unit: row.unit, edition: row.edition,
+    input: Object.fromEntries(Object.entries({ process: row.process, transfer: row.transfer ?? undefined, couponThickness: row.couponThickness, depositThickness: row.depositThickness ?? undefined }).filter(([, v]) => v !== undefined)),
+  })
+  if ('error' in result) return null
+  return (result as unknown as { specimens: { tension: number, face: number, root: number, side: number } }).specimens
+}
+
+export function pqrColumns(draft: PqrDraft) {
+  return {
+    number: draft.number, testDate: draft.testDate, code: draft.code, edition: draft.edition, unit: draft.unit, process: draft.process,
+    transfer: draft.transfer, couponThickness: draft.couponThickness, depositThickness: draft.depositThickness, baseMetalId: draft.baseMetalId,
+    fillerMetalId: draft.fillerMetalId, toughnessRequired: draft.toughnessRequired, actuals: draft.actuals, labReportNumber: draft.labReportNumber,
+  }
+}
+
+/** The tensile and bend rows as the rules judge them: strength from load and area, bends by the code's bend rule. */
+export function judgedResults(row: Pick<PqrRow, 'id' | 'code' | 'unit'>, results: PqrResults, minimumStrength: number) {
+  const unit = row.unit as Unit
+  const code = row.code as CodeId
+  const tensile = results.tensile.map((s) => {
+    const judged = tensileOf({ width: s.width, thickness: s.thickness, load: s.load, minimumStrength, unit, code })
+    return { ...s, pqrId: row.id, strength: judged.strength, accepted: judged.accepted }
+  })
+  const bends = results.bends.map(b => ({
+    ...b, pqrId: row.id, accepted: bendAcceptance(code, unit, [{ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner }]).accepted,
+  }))
+  return { tensile, bends }
+}
+
+export { pqrBendSpecimens, pqrTensileSpecimens }

@@ -1,0 +1,213 @@
+import { evaluate } from '../rules'
+import { convertLength } from '../rules/units'
+import type { Basis, CodeId, Range, Unit } from '../rules/types'
+
+/** A supporting PQR as the support check needs it (lengths in the PQR's own unit). */
+export interface SupportPqr {
+  id: number
+  number: string
+  code: string
+  edition: string
+  unit: Unit
+  process: string
+  transfer: string | null
+  couponThickness: number
+  depositThickness: number | null
+  toughnessTested: boolean
+  heatInput: number | null
+  fNumber: string | null
+  pNumber: string | null
+  status: string
+  /** Every tensile and bend specimen recorded and accepted. */
+  resultsPass: boolean
+}
+
+/** The WPS variables the support check reads; a half-filled form is fine. */
+export interface SupportWps {
+  code: string
+  edition: string
+  unit: Unit
+  process: string
+  transfer?: string | null
+  thickness?: { groove?: Partial<Range> }
+  depositMax?: number | null
+  toughnessRequired?: boolean
+  baseMetals?: { a?: { pNumber?: string | null }, b?: { pNumber?: string | null } }
+  fillers?: { fNumber?: string | null }[]
+  electrical?: { heatInputMax?: number | null }
+}
+
+export interface SupportFinding {
+  met: boolean
+  clause: string
+  text: string
+  basis: Basis
+  /** The form field the finding is about (dot path), so the clause can sit beside the value. */
+  field: string | null
+}
+
+export interface PqrQualifies {
+  pqrId: number
+  number: string
+  baseMetal: Range | null
+  depositMax: number | null
+  reasons: { clause: string, text: string, basis: Basis }[]
+  error: string | null
+}
+
+export interface SupportCheck {
+  /** The rules could evaluate the WPS against its PQRs. */
+  checked: boolean
+  supported: boolean
+  findings: SupportFinding[]
+  violations: SupportFinding[]
+  /** What stops approval besides the violations (no passing PQR, nothing to check). */
+  blockers: string[]
+  qualifies: PqrQualifies[]
+  caution: string | null
+}
+
+const fieldOfClause: [RegExp, string][] = [
+  [/^QW-200\.2/, 'process'],
+  [/^QW-409\.2/, 'transfer'],
+  [/^QW-403\.6/, 'toughnessRequired'],
+  [/^QW-403\.8/, 'thickness.groove'],
+  [/^QW-404\.30/, 'depositMax'],
+  [/^QW-409\.1/, 'electrical.heatInputMax'],
+  [/^QW-404\.4/, 'fillers'],
+  [/^QW-424\.1/, 'baseMetals'],
+]
+
+export function fieldOf(clause: string): string | null {
+  return fieldOfClause.find(([pattern]) => pattern.test(clause))?.[1] ?? null
+}
+
+const isNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v)
+
+function inUnit(value: number, from: Unit, to: Unit) {
+  return convertLength(value, from, to)
+}
+
+/** The PQR as a rules record, its lengths converted exactly (25.4 mm/in) into the WPS's unit. */
+function pqrRecord(pqr: SupportPqr, unit: Unit) {
+  const fNumber = pqr.fNumber !== null && /^\d+$/.test(pqr.fNumber) ? Number(pqr.fNumber) : undefined
+  const transfer = pqr.transfer && ['short-circuit', 'globular', 'spray', 'pulse'].includes(pqr.transfer) ? pqr.transfer : undefined
+  // Heat input per length: J/in ÷ 25.4 = J/mm.
+  const heat = pqr.heatInput === null ? undefined : pqr.unit === unit ? pqr.heatInput : pqr.unit === 'in' ? pqr.heatInput / 25.4 : pqr.heatInput * 25.4
+  return strip({
+    id: pqr.number, process: pqr.process, transfer, couponThickness: inUnit(pqr.couponThickness, pqr.unit, unit),
+    depositThickness: pqr.depositThickness === null ? undefined : inUnit(pqr.depositThickness, pqr.unit, unit),
+    toughness: pqr.toughnessTested, heatInput: heat, fNumber,
+  })
+}
+
+function strip<T extends Record<string, unknown>>(o: T): T {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined && v !== null)) as T
+}
+
+/** What one PQR qualifies for a procedure, in the WPS's code, edition and unit (Table QW-451.1 and its notes). */
+export function pqrQualifies(pqr: SupportPqr, context: { code: string, edition: string, unit: Unit }, toughness = pqr.toughnessTested): PqrQualifies {
+  const record = pqrRecord(pqr, context.unit)
+  const result = evaluate({
+    code: context.code, check: 'procedure-ranges', unit: context.unit, edition: context.edition,
+    input: strip({ process: record.process, transfer: record.transfer, couponThickness: record.couponThickness, depositThickness: record.depositThickness, toughness }),
+  })
+  if ('error' in result) return { pqrId: pqr.id, number: pqr.number, baseMetal: null, depositMax: null, reasons: [], error: String(result.error) }
+  const r = result as unknown as { baseMetal: Range, depositMax?: number | null, reasons: PqrQualifies['reasons'] }
+  return { pqrId: pqr.id, number: pqr.number, baseMetal: r.baseMetal, depositMax: r.depositMax ?? null, reasons: r.reasons, error: null }
+}
+
+/**
+ * Whether a WPS stays inside what its supporting PQRs qualify: the rules' wps-support check, run once per
+ * F-No. of its fillers, plus the base-metal P-No. rule; and what else stops its approval.
+ */
+export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck {
+  const findings: SupportFinding[] = []
+  const blockers: string[] = []
+  const context = { code: wps.code, edition: wps.edition, unit: wps.unit }
+  const result = (checked: boolean, caution: string | null): SupportCheck => {
+    const violations = findings.filter(f => !f.met)
+    return { checked, supported: checked && violations.length === 0, findings, violations, blockers, qualifies: pqrs.map(p => pqrQualifies(p, context, wps.toughnessRequired ?? false)), caution }
+  }
+  if (pqrs.length === 0) {
+    blockers.push('Pick at least one supporting PQR.')
+    return result(false, null)
+  }
+  const passing = pqrs.filter(p => p.status === 'certified' && p.resultsPass)
+  if (passing.length === 0) blockers.push('No supporting PQR has certified results that pass (tensile and bends accepted).')
+  for (const p of pqrs) {
+    if (p.status === 'recorded') blockers.push(`${p.number}: its results are not certified by an inspector yet.`)
+    if (p.status === 'failed') blockers.push(`${p.number}: its certified results failed; it cannot support a WPS.`)
+  }
+  const sameCode = pqrs.filter(p => p.code === wps.code)
+  for (const p of pqrs.filter(q => q.code !== wps.code)) {
+    findings.push({ met: false, clause: 'code', text: `${p.number} was qualified to ${p.code}; this WPS is written to ${wps.code}.`, basis: 'convention', field: 'supportingPqrIds' })
+  }
+  if (sameCode.length === 0) return result(false, null)
+
+  const groove = wps.thickness?.groove ?? {}
+  const fNumbers = [...new Set((wps.fillers ?? []).map(f => f.fNumber?.trim()).filter((f): f is string => !!f))]
+  const runs: (number | undefined)[] = fNumbers.length ? [] : [undefined]
+  for (const f of fNumbers) {
+    if (/^\d+$/.test(f)) runs.push(Number(f))
+    else findings.push({ met: false, clause: 'QW-404.4', text: `F-No. "${f}" is not a number the rules can compare.`, basis: 'convention', field: 'fillers' })
+  }
+  let caution: string | null = null
+  const seen = new Set<string>()
+  for (const fNumber of runs) {
+    const evaluated = evaluate({
+      code: wps.code, check: 'wps-support', unit: wps.unit, edition: wps.edition,
+      input: {
+        wps: strip({
+          process: wps.process, transfer: wps.transfer ?? undefined,
+          thickness: { min: isNumber(groove.min) ? groove.min : null, max: isNumber(groove.max) ? groove.max : null },
+          depositMax: isNumber(wps.depositMax) ? wps.depositMax : undefined, toughness: wps.toughnessRequired ?? false,
+          heatInputMax: isNumber(wps.electrical?.heatInputMax) ? wps.electrical.heatInputMax : undefined, fNumber,
+        }),
+        pqrs: sameCode.map(p => pqrRecord(p, wps.unit)),
+      },
+    })
+    if ('error' in evaluated) {
+      findings.push({ met: false, clause: 'rules', text: String(evaluated.error), basis: 'convention', field: null })
+      return result(false, null)
+    }
+    caution = String((evaluated as { caution?: string }).caution ?? '')
+    for (const r of (evaluated as unknown as { reasons: { met: boolean, clause: string, text: string, basis: Basis }[] }).reasons) {
+      const key = `${r.clause}|${r.text}`
+      if (seen.has(key)) continue
+      seen.add(key)
+      findings.push({ ...r, field: fieldOf(r.clause) })
+    }
+  }
+  if (wps.code === 'asme-ix') findings.push(...pNumberFindings(wps, sameCode))
+  return result(true, caution)
+}
+
+/**
+ * QW-403.11 and QW-424.1 (from memory): base metals of the P-No. welded on the PQR qualify that P-No.;
+ * a WPS joining P-No. A to P-No. B needs a PQR welded on A to B (or each to itself where QW-424.1 allows).
+ */
+function pNumberFindings(wps: SupportWps, pqrs: SupportPqr[]): SupportFinding[] {
+  const a = wps.baseMetals?.a?.pNumber?.trim()
+  const b = wps.baseMetals?.b?.pNumber?.trim()
+  if (!a || !b) return []
+  const welded = [...new Set(pqrs.map(p => p.pNumber).filter((p): p is string => !!p))]
+  if (!welded.length) {
+    return [{ met: false, clause: 'QW-424.1', text: 'No supporting PQR names its base metal P-No.', basis: 'memory', field: 'baseMetals' }]
+  }
+  const ok = welded.includes(a) && welded.includes(b)
+  return [{
+    met: ok, clause: 'QW-424.1', basis: 'memory', field: 'baseMetals',
+    text: ok
+      ? `P-No. ${a} to P-No. ${b}: qualified by a PQR welded on P-No. ${welded.join(', ')}.`
+      : `P-No. ${a} to P-No. ${b} is outside what the PQRs qualify (welded on P-No. ${welded.join(', ')}).`,
+  }]
+}
+
+/** The findings about one form field (and the fields under it). */
+export function findingsFor(check: SupportCheck | null | undefined, field: string): SupportFinding[] {
+  if (!check) return []
+  return check.violations.filter(f => f.field !== null && (f.field === field || field.startsWith(`${f.field}.`) || f.field.startsWith(`${field}.`)))
+}
+
+export type { CodeId }

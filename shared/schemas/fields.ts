@@ -1,0 +1,81 @@
+import { z } from 'zod'
+
+/** Small field builders shared by the record schemas: form inputs give '' for an empty box, the API gives null. */
+
+const LARGEST = 1_000_000
+
+const blankToNull = (v: unknown) => (v === '' || v === undefined || (typeof v === 'number' && Number.isNaN(v)) ? null : v)
+const textToNumber = (v: unknown) => {
+  const blank = blankToNull(v)
+  if (typeof blank === 'string' && blank.trim() !== '' && Number.isFinite(Number(blank))) return Number(blank)
+  return blank
+}
+
+/** A number that may be left empty (null). */
+export function optionalNumber(what: string, options: { min?: number, positive?: boolean, max?: number } = {}) {
+  let n = z.number({ invalid_type_error: `${what} must be a number` }).finite(`${what} must be a finite number`)
+  if (options.positive) n = n.positive(`${what} must be more than 0`)
+  else n = n.min(options.min ?? 0, `${what} cannot be below ${options.min ?? 0}`)
+  n = n.max(options.max ?? LARGEST, `${what} is too large`)
+  return z.preprocess(textToNumber, n.nullable())
+}
+
+/** A number that must be given. */
+export function requiredNumber(what: string, options: { min?: number, positive?: boolean, max?: number } = {}) {
+  let n = z.number({ required_error: `Enter ${what}`, invalid_type_error: `Enter ${what}` }).finite(`${what} must be a finite number`)
+  if (options.positive) n = n.positive(`${what} must be more than 0`)
+  else n = n.min(options.min ?? 0, `${what} cannot be below ${options.min ?? 0}`)
+  n = n.max(options.max ?? LARGEST, `${what} is too large`)
+  return z.preprocess(textToNumber, n)
+}
+
+export function optionalText(what: string, max = 200) {
+  return z.preprocess(v => (typeof v === 'string' && v.trim() === '' ? null : blankToNull(v)),
+    z.string({ invalid_type_error: `${what} must be text` }).trim().max(max, `${what}: at most ${max} characters`).nullable())
+}
+
+export function requiredText(what: string, max = 200) {
+  return z.string({ required_error: `Enter ${what}`, invalid_type_error: `Enter ${what}` }).trim()
+    .min(1, `Enter ${what}`).max(max, `${what}: at most ${max} characters`)
+}
+
+/** A min–max range; either end may be open (null). */
+export function rangeOf(what: string, options: { min?: number, positive?: boolean } = {}) {
+  return z.object({
+    min: optionalNumber(`${what} minimum`, options),
+    max: optionalNumber(`${what} maximum`, options),
+  }).refine(r => r.min === null || r.max === null || r.min <= r.max, { message: `${what}: the minimum is above the maximum`, path: ['max'] })
+}
+
+/**
+ * A production window, entered either as min–max or as a set point with a trim (18.0 V ± 1.0 V);
+ * the set point is kept so the sheet can print it the way it was written.
+ */
+export function windowOf(what: string) {
+  return z.object({
+    min: optionalNumber(`${what} minimum`),
+    max: optionalNumber(`${what} maximum`),
+    setPoint: optionalNumber(`${what} set point`).optional().default(null),
+  }).refine(r => r.min === null || r.max === null || r.min <= r.max, { message: `${what}: the minimum is above the maximum`, path: ['max'] })
+    .refine(r => r.setPoint === null || ((r.min === null || r.min <= r.setPoint) && (r.max === null || r.setPoint <= r.max)),
+      { message: `${what}: the set point lies outside its window`, path: ['setPoint'] })
+}
+
+export const idSchema = z.number({ invalid_type_error: 'must be a record id' }).int('must be a record id').positive('must be a record id').max(2_147_483_647)
+export const versionSchema = z.number({ required_error: 'Send the version you edited', invalid_type_error: 'version must be a whole number' })
+  .int('version must be a whole number').positive('version must be a whole number')
+export const codeIdSchema = z.enum(['asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1'], { errorMap: () => ({ message: 'Pick a code' }) })
+export const unitIdSchema = z.enum(['in', 'mm'], { errorMap: () => ({ message: 'Pick in or mm' }) })
+export const transferIdSchema = z.enum(['short-circuit', 'globular', 'spray', 'pulse'], { errorMap: () => ({ message: 'Pick a transfer mode' }) })
+export const editionSchema = z.string({ required_error: 'Enter the edition' }).trim().regex(/^\d{4}$/, 'Enter the edition year, e.g. 2023')
+export const daySchema = z.string({ required_error: 'Enter a date' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter a date as YYYY-MM-DD')
+  .refine(d => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), 'Enter a real date')
+
+/** A body that carries only the version being acted on (approve, certify, revise). */
+export const versionBodySchema = z.object({ version: versionSchema }).strict()
+
+/** A record id picked in a form (a select gives text); empty means not picked. */
+export function pickedId(what: string) {
+  return z.preprocess(v => (v === '' || v === null ? undefined : typeof v === 'string' && /^\d+$/.test(v) ? Number(v) : v),
+    z.number({ required_error: `Pick ${what}`, invalid_type_error: `Pick ${what}` }).int().positive().max(2_147_483_647))
+}

@@ -1,0 +1,18 @@
+import { z } from 'zod'
+import { idSchema, optionalNumber, optionalText } from './fields'
+
+/** One production reading against a WPS window, in the WPS's unit (V, A, in/min or mm/min, in or mm, ft³/h or L/min). */
+export const readingSchema = z.object({
+  welderId: z.preprocess(v => (v === '' || v === undefined ? null : typeof v === 'string' ? Number(v) : v), idSchema.nullable()),
+  takenAt: z.string().datetime({ offset: true, message: 'takenAt must be a date and time (ISO 8601)' }).optional(),
+  volts: optionalNumber('Voltage', { positive: true }),
+  amps: optionalNumber('Current', { positive: true }),
+  wireFeedSpeed: optionalNumber('Wire feed speed', { positive: true }),
+  travelSpeed: optionalNumber('Travel speed', { positive: true }),
+  ctwd: optionalNumber('Contact-tip-to-work distance', { positive: true }),
+  gasFlow: optionalNumber('Gas flow', { positive: true }),
+  reference: optionalText('Weld reference', 120),
+}).strict().refine(v => [v.volts, v.amps, v.wireFeedSpeed, v.travelSpeed, v.ctwd, v.gasFlow].some(x => x !== null && x !== undefined),
+  { message: 'Enter at least one reading', path: ['volts'] })
+export type ReadingInput = z.input<typeof readingSchema>
+export type Reading = z.infer<typeof readingSchema>
