@@ -1,0 +1,12 @@
+import { z } from 'zod'
+import { detach } from '../../../../database/projects'
+
+const paramsSchema = z.object({ id: z.coerce.number().int().positive().max(2_147_483_647), accountId: z.coerce.number().int().positive().max(2_147_483_647) })
+
+/** DELETE /api/projects/:id/auditors/:accountId: revoke an auditor's access (quality manager) */
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, ['supervisor'])
+  const params = await validParams(event, paramsSchema)
+  if (!await detach(await useDb(), params.id, 'auditor', params.accountId, user.id)) throw notFound('Grant')
+  return { ok: true }
+})

@@ -1,0 +1,94 @@
+import { addDays, format, parseISO } from 'date-fns'
+import { and, asc, eq, lte } from 'drizzle-orm'
+import type { Db } from '../database/client'
+import { accounts, continuityEntries, procedures, welders, welderTests } from '../database/schema'
+import { canonicalJson, sha256Hex } from '../database/signing'
+import { processStanding, type ProcessStanding } from '#shared/qualification/process-standing'
+import type { CodeId } from '#shared/rules/types'
+
+export interface Period { from: string, to: string }
+
+interface CertifiedTest { id: number, process: string, code: string, edition: string, testDate: string, procedure: string | null }
+interface Use { process: string, weldedOn: string }
+
+/** Where the welder stands for a process on a day, from the latest certified test on or before it (null: none yet). */
+export function standingOn(tests: CertifiedTest[], uses: Use[], process: string, day: string): ProcessStanding | null {
+  const test = tests.filter(t => t.process === process && t.testDate <= day).sort((a, b) => b.testDate.localeCompare(a.testDate))[0]
+  if (!test) return null
+  return processStanding({
+    process, code: test.code as CodeId, edition: test.edition, testDate: test.testDate,
+    uses: uses.filter(u => u.process === process).map(u => u.weldedOn), today: day,
+  })
+}
+
+export interface Gap { process: string, from: string, to: string, why: 'lapsed' | 'no-test' }
+
+/**
+ * The spans of a period on which a welder was not current for a process. processStanding is the rule; this only
+ * asks it at the days where the answer can change: a lapse date, or the next certified test after a lapse.
+ */
+export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: string, period: Period): Gap[] {
+  const gaps: Gap[] = []
+  let day = period.from
+  let guard = 0
+  while (day <= period.to && guard++ < 10_000) {
+    const standing = standingOn(tests, uses, process, day)
+    if (standing && standing.standing !== 'lapsed') {
+      day = standing.lapsesOn // current until the day it lapses
+      continue
+    }
+    // Not current from `day` until the next certified test of the process.
+    const next = tests.filter(t => t.process === process && t.testDate > day).map(t => t.testDate).sort()[0]
+    const until = next && next <= period.to ? format(addDays(parseISO(next), -1), 'yyyy-MM-dd') : period.to
+    gaps.push({ process, from: day, to: until, why: standing ? 'lapsed' : 'no-test' })
+    if (!next) break
+    day = next
+  }
+  return gaps.filter(g => g.from <= g.to)
+}
+
+export async function loadCertifiedTests(db: Db, welderId: number, upTo: string): Promise<CertifiedTest[]> {
+  const rows = await db.select({
+    id: welderTests.id, process: welderTests.process, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate,
+    number: procedures.number, revision: procedures.revision,
+  }).from(welderTests).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
+    .where(and(eq(welderTests.welderId, welderId), eq(welderTests.status, 'certified'), lte(welderTests.testDate, upTo)))
+    .orderBy(asc(welderTests.testDate), asc(welderTests.id))
+  return rows.map(r => ({ ...r, procedure: r.number === null ? null : `${r.number} rev. ${r.revision}` }))
+}
+
+/** Every logged use up to the end of the period: the chain of continuity needs the uses before it starts too. */
+export async function loadUses(db: Db, welderId: number, upTo: string) {
+  return db.select({
+    id: continuityEntries.id, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn,
+    reference: continuityEntries.reference, recordedBy: accounts.name,
+  }).from(continuityEntries).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))
+    .where(and(eq(continuityEntries.welderId, welderId), lte(continuityEntries.weldedOn, upTo)))
+    .orderBy(asc(continuityEntries.weldedOn), asc(continuityEntries.id))
+}
+
+export async function loadContinuityLog(db: Db, welderId: number, period: Period) {
+  const [welder] = await db.select().from(welders).where(eq(welders.id, welderId))
+  if (!welder) return null
+  const [tests, uses] = await Promise.all([loadCertifiedTests(db, welderId, period.to), loadUses(db, welderId, period.to)])
+  const processes = [...new Set([...tests.map(t => t.process), ...uses.map(u => u.process)])].sort()
+  const inPeriod = uses.filter(u => u.weldedOn >= period.from)
+  const standings = processes.map(p => ({ process: p, standing: standingOn(tests, uses, p, period.to), gaps: gapsInPeriod(tests, uses, p, period) }))
+  // What the issued sheet vouches for: the welder, the period, the tests and the uses it prints.
+  const content = {
+    welder: { id: welder.id, name: welder.name, stamp: welder.stamp },
+    period,
+    tests: tests.map(t => ({ id: t.id, process: t.process, testDate: t.testDate, procedure: t.procedure })),
+    uses: inPeriod.map(u => ({ id: u.id, process: u.process, weldedOn: u.weldedOn, reference: u.reference, recordedBy: u.recordedBy })),
+  }
+  return { welder, period, tests, uses: inPeriod, standings, sha256: sha256Hex(canonicalJson(content)) }
+}
+export type ContinuityLog = NonNullable<Awaited<ReturnType<typeof loadContinuityLog>>>
+
+/** The first day the welder has anything on record (a test or a logged use), for a log "from the start". */
+export async function firstRecordDay(db: Db, welderId: number): Promise<string | null> {
+  const [test] = await db.select({ day: welderTests.testDate }).from(welderTests).where(eq(welderTests.welderId, welderId)).orderBy(asc(welderTests.testDate)).limit(1)
+  const [use] = await db.select({ day: continuityEntries.weldedOn }).from(continuityEntries).where(eq(continuityEntries.welderId, welderId)).orderBy(asc(continuityEntries.weldedOn)).limit(1)
+  const days = [test?.day, use?.day].filter((d): d is string => !!d).sort()
+  return days[0] ?? null
+}

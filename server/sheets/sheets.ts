@@ -1,0 +1,110 @@
+import type { H3Event } from 'h3'
+import { and, eq } from 'drizzle-orm'
+import type { Db } from '../database/client'
+import { issuedSheets, projects, signatures } from '../database/schema'
+import { newVerifyCode } from '../database/signing'
+import type { SessionUser } from '../utils/auth'
+import { loadContinuityLog, type Period } from './continuity'
+import { continuitySheet } from './continuity-sheet'
+import { verifyUrl } from './common'
+import { documentBase, PageTracker, sheetSection } from './layout'
+import { sheetReference, type SheetModel } from './model'
+import { renderPdf } from './pdf'
+import { pqrSheet } from './pqr'
+import { loadPqr, loadProcedure, loadWelderTest, shopName } from './records'
+import { wpqSheet } from './wpq'
+import { wpsSheet } from './wps'
+import { todayIso } from '../utils/standings'
+
+/** The public address the QR codes point at: AUTH_ORIGIN in production (required there), else the request's own. */
+export function publicOrigin(event: H3Event) {
+  const configured = process.env.AUTH_ORIGIN
+  if (configured) {
+    try {
+      return new URL(configured).origin
+    }
+    catch { /* fall back to the request */ }
+  }
+  return getRequestURL(event, { xForwardedHost: true, xForwardedProto: true }).origin
+}
+
+export async function procedureSheet(db: Db, id: number, origin: string) {
+  const record = await loadProcedure(db, id)
+  return record ? wpsSheet(record, await shopName(db), origin) : null
+}
+
+export async function pqrSheetOf(db: Db, id: number, origin: string) {
+  const record = await loadPqr(db, id)
+  return record ? pqrSheet(record, await shopName(db), origin) : null
+}
+
+export async function welderTestSheet(db: Db, id: number, origin: string) {
+  const record = await loadWelderTest(db, id)
+  return record ? wpqSheet(record, await shopName(db), origin) : null
+}
+
+/**
+ * A continuity log is issued, not signed: the same welder, period and content keep one code; a changed log
+ * (an entry added, changed or removed) gets a new one, and the old code then verifies as changed.
+ */
+export async function continuityLogSheet(db: Db, welderId: number, period: Period, user: Pick<SessionUser, 'id' | 'name'>, origin: string) {
+  const log = await loadContinuityLog(db, welderId, period)
+  if (!log) return null
+  const match = and(eq(issuedSheets.kind, 'continuity-log'), eq(issuedSheets.welderId, welderId), eq(issuedSheets.periodFrom, period.from),
+    eq(issuedSheets.periodTo, period.to), eq(issuedSheets.sha256, log.sha256))
+  let [issue] = await db.select().from(issuedSheets).where(match).limit(1)
+  if (!issue) {
+    const code = await unusedCode(db)
+    ;[issue] = await db.insert(issuedSheets).values({
+      kind: 'continuity-log', welderId, periodFrom: period.from, periodTo: period.to, sha256: log.sha256, verifyCode: code,
+      issuedBy: user.id, issuerName: user.name,
+    }).onConflictDoNothing().returning()
+    if (!issue) [issue] = await db.select().from(issuedSheets).where(match).limit(1)
+  }
+  return continuitySheet(log, await shopName(db), {
+    code: issue!.verifyCode, url: verifyUrl(origin, issue!.verifyCode), issuerName: issue!.issuerName, issuedAt: issue!.issuedAt.toISOString(),
+  })
+}
+
+async function unusedCode(db: Db) {
+  for (;;) {
+    const code = newVerifyCode()
+    const [a] = await db.select({ id: signatures.id }).from(signatures).where(eq(signatures.verifyCode, code)).limit(1)
+    const [b] = await db.select({ id: issuedSheets.id }).from(issuedSheets).where(eq(issuedSheets.verifyCode, code)).limit(1)
+    if (!a && !b) return code
+  }
+}
+
+/** The period of a project, closed at today when it is still open. */
+export async function projectPeriod(db: Db, projectId: number): Promise<Period | null> {
+  const [p] = await db.select({ startsOn: projects.startsOn, endsOn: projects.endsOn }).from(projects).where(eq(projects.id, projectId))
+  if (!p) return null
+  const today = todayIso()
+  return { from: p.startsOn, to: p.endsOn && p.endsOn < today ? p.endsOn : today }
+}
+
+export async function renderSheet(sheet: SheetModel) {
+  const tracker = new PageTracker()
+  const started = performance.now()
+  const pdf = await renderPdf({
+    ...documentBase(`${sheet.kindTitle} ${sheetReference(sheet)}`, sheet.shopName),
+    content: [sheetSection(sheet, 0, tracker, { shopName: sheet.shopName, documentLine: null })],
+  })
+  return { pdf, pageCount: tracker.total, ms: Math.round(performance.now() - started) }
+}
+
+export function sheetFileName(sheet: SheetModel) {
+  const safe = sheetReference(sheet).replace(/[^\w.-]+/g, '-')
+  return `${sheet.kind.toUpperCase()}-${safe}.pdf`
+}
+
+/** A PDF download: attachment, never cached by a shared cache, never sniffed. */
+export function sendPdf(event: H3Event, pdf: Buffer, fileName: string) {
+  setResponseHeaders(event, {
+    'content-type': 'application/pdf',
+    'content-disposition': `attachment; filename="${fileName.replace(/[^\w.-]/g, '_')}"; filename*=UTF-8''${encodeURIComponent(fileName)}`,
+    'cache-control': 'private, no-store',
+    'x-content-type-options': 'nosniff',
+  })
+  return pdf
+}
