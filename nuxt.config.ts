@@ -5,7 +5,7 @@ import { join } from 'node:path'
 const rootDir = fileURLToPath(new URL('.', import.meta.url))
 
 export default defineNuxtConfig({
-  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', '@sidebase/nuxt-auth', '@nuxt/eslint', 'nuxt-security'],
+  modules: ['@nuxtjs/tailwindcss', '@pinia/nuxt', '@sidebase/nuxt-auth', '@nuxt/eslint', 'nuxt-security', 'h3-compression/nuxt'],
   devtools: { enabled: false },
   app: {
     head: {
@@ -47,6 +47,8 @@ export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   nitro: {
     output: { dir: process.env.NUXT_OUTPUT_DIR || '.output' },
+    // Static assets are served pre-compressed (gzip and brotli) to browsers that accept it.
+    compressPublicAssets: { gzip: true, brotli: true },
     experimental: { tasks: true },
     // Lapse reminders and the weekly digest once a day at 06:00; the outbox retries queued mail every minute.
     scheduledTasks: { '0 6 * * *': ['mail:reminders'], '* * * * *': ['mail:send'] },
@@ -68,6 +70,8 @@ export default defineNuxtConfig({
     globalAppMiddleware: true,
     sessionRefresh: { enablePeriodically: false, enableOnWindowFocus: false },
   },
+  // Pages and JSON answers are gzipped when the browser accepts it (static assets are pre-compressed by Nitro).
+  compression: { threshold: 1024 },
   eslint: { config: { stylistic: true } },
   // Security headers (CSP with per-request nonces, no inline scripts), size limits; sign-in slowing is our own.
   security: {
