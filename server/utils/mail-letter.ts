@@ -29,8 +29,8 @@ export function renderLetter(letter: Letter, shopName: string): { text: string, 
   const text = [
     letter.greeting,
     ...letter.paragraphs,
-    ...(letter.action ? [`${letter.action.label}:\n${letter.action.href}`] : []),
     ...(letter.table ? [textTable(letter.table)] : []),
+    ...(letter.action ? [`${letter.action.label}:\n${letter.action.href}`] : []),
     ...(letter.closing ?? []),
     ...(letter.footnotes?.length ? [`--\n${letter.footnotes.join('\n')}`] : []),
     `Rootface · ${shopName}`,
@@ -45,11 +45,11 @@ export function renderLetter(letter: Letter, shopName: string): { text: string, 
 <p style="margin:0 0 18px;font-weight:700;color:#1f5f7a">Rootface · ${escapeHtml(shopName)}</p>
 ${p(letter.greeting)}
 ${letter.paragraphs.map(p).join('\n')}
+${letter.table ? `<table style="border-collapse:collapse;margin:0 0 14px;font-size:14px"><thead><tr>${letter.table.head.map(h => `<th style="${cell};font-size:12px;text-transform:uppercase;color:#545d63">${escapeHtml(h)}</th>`).join('')}</tr></thead><tbody>${letter.table.rows.map(r => `<tr>${r.map(c => `<td style="${cell}">${escapeHtml(c)}</td>`).join('')}</tr>`).join('')}</tbody></table>` : ''}
 ${letter.action
   ? `<p style="margin:18px 0"><a href="${escapeHtml(letter.action.href)}" style="display:inline-block;background:#1f5f7a;color:#ffffff;padding:10px 16px;border-radius:4px;font-weight:600;text-decoration:none">${escapeHtml(letter.action.label)}</a></p>
 <p style="margin:0 0 14px;font-size:13px;color:#545d63">Or paste this address into your browser: ${escapeHtml(letter.action.href)}</p>`
   : ''}
-${letter.table ? `<table style="border-collapse:collapse;margin:0 0 14px;font-size:14px"><thead><tr>${letter.table.head.map(h => `<th style="${cell};font-size:12px;text-transform:uppercase;color:#545d63">${escapeHtml(h)}</th>`).join('')}</tr></thead><tbody>${letter.table.rows.map(r => `<tr>${r.map(c => `<td style="${cell}">${escapeHtml(c)}</td>`).join('')}</tr>`).join('')}</tbody></table>` : ''}
 ${(letter.closing ?? []).map(p).join('\n')}
 ${letter.footnotes?.length ? `<hr style="border:0;border-top:1px solid #d4d1c7;margin:18px 0">${letter.footnotes.map(f => `<p style="margin:0 0 8px;font-size:12px;color:#545d63">${escapeHtml(f)}</p>`).join('')}` : ''}
 </div></body></html>`

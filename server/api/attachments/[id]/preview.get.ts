@@ -17,7 +17,7 @@ export default defineEventHandler(async (event) => {
   if (!data) throw notFound('Image')
   setResponseHeaders(event, {
     'content-type': row.contentType,
-    'content-length': String(data.length),
+    'content-length': data.length,
     'content-disposition': contentDisposition('inline', row.fileName),
     'x-content-type-options': 'nosniff',
     'content-security-policy': 'default-src \'none\'',
