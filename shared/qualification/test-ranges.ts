@@ -26,7 +26,9 @@ export function welderRangesInput(test: WelderTestVariables) {
   return defined({
     process: test.process, transfer: test.transfer, form: test.form, weld: test.weld, testPositions: test.positions,
     couponThickness: test.couponThickness, depositThickness: test.depositThickness, layers: test.layers,
-    outsideDiameter: test.outsideDiameter, backing: test.backing, fNumber: test.fNumber, pNumber: test.pNumber,
+    outsideDiameter: test.outsideDiameter, backing: test.backing, pNumber: test.pNumber,
+    // Stored as text ("4"); the rules take the F-Number as a number.
+    fNumber: test.fNumber === null || test.fNumber === undefined || test.fNumber === '' ? undefined : Number(test.fNumber),
   })
 }
 

@@ -1,13 +1,16 @@
-import { desc, eq } from 'drizzle-orm'
-import { welders, welderTests } from '../../database/schema'
+import { ownQualifications } from '../../database/me'
+import { renewalOf } from '#shared/qualification/renewal'
 
-/** GET /api/me/qualifications: the signed-in welder's own tests and where each process stands */
+/** GET /api/me/qualifications: the signed-in welder's tests, what each covers in plain words, standings and usable WPSs */
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['welder'])
   const db = await useDb()
-  const [welder] = await db.select().from(welders).where(eq(welders.id, user.welderId ?? -1)).limit(1)
-  if (!welder) throw createError({ statusCode: 404, statusMessage: 'No roster entry is linked to this account' })
-  const tests = await db.select().from(welderTests).where(eq(welderTests.welderId, welder.id)).orderBy(desc(welderTests.testDate))
-  const standings = (await standingsOfWelders(db, [welder.id])).get(welder.id) ?? []
-  return { welder, tests, standings, today: todayIso() }
+  const welderId = user.welderId ?? -1
+  const standings = (await standingsOfWelders(db, [welderId])).get(welderId) ?? []
+  const own = await ownQualifications(db, welderId, standings)
+  if (!own) throw notFound('Roster entry')
+  return {
+    ...own, today: todayIso(),
+    standings: standings.map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),
+  }
 })

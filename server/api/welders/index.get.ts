@@ -20,7 +20,10 @@ export default defineEventHandler(async (event) => {
   if (query.status) filters.push(eq(welders.status, query.status))
   const where = filters.length ? and(...filters) : undefined
   const [items, [totals]] = await Promise.all([
-    db.select().from(welders).where(where).orderBy(orderOf(welders[query.sort], query.dir), welders.id)
+    db.select({
+      id: welders.id, name: welders.name, stamp: welders.stamp, employeeNumber: welders.employeeNumber, status: welders.status,
+      email: welders.email, version: welders.version, createdAt: welders.createdAt, updatedAt: welders.updatedAt,
+    }).from(welders).where(where).orderBy(orderOf(welders[query.sort], query.dir), welders.id)
       .limit(pageWindow(query).limit).offset(pageWindow(query).offset),
     db.select({ total: count() }).from(welders).where(where),
   ])

@@ -1,0 +1,37 @@
+import { performance } from 'node:perf_hooks'
+import { coverageCandidates } from '../../database/coverage'
+import { judgeProcedures, judgeWelders, resolveJoint } from '#shared/qualification/joint-coverage'
+import { jointSchema } from '#shared/schemas/coverage'
+
+/**
+ * GET /api/coverage?process=…&position=…: who can weld this joint today: the approved WPSs that cover it and the
+ * active welders whose certified tests cover it and who are current, each with the findings behind the answer.
+ */
+export default defineEventHandler(async (event) => {
+  await requireRole(event, staff)
+  const query = await validQuery(event, jointSchema)
+  const joint = resolveJoint(query)
+  if ('error' in joint) throw fieldError('gauge', joint.error)
+  const db = await useDb()
+  const started = performance.now()
+  const rows = await coverageCandidates(db, joint.process)
+  const queried = performance.now()
+  const today = todayIso()
+  const procedures = judgeProcedures(rows.procedures, joint)
+  const welders = judgeWelders(rows.welders, joint, today)
+  const judged = performance.now()
+  const timing = { queryMs: Math.round((queried - started) * 10) / 10, rulesMs: Math.round((judged - queried) * 10) / 10, candidates: rows.welders.length }
+  setResponseHeader(event, 'server-timing', `db;dur=${timing.queryMs}, rules;dur=${timing.rulesMs}`)
+  return {
+    today, joint, timing,
+    procedures: procedures.sort((a, b) => Number(b.covered) - Number(a.covered)),
+    welders: {
+      // Covered and current today: may weld it (with a WPS that covers it)
+      able: welders.filter(w => w.covered && w.current),
+      // Covered by their tests, but the process has lapsed: renewal needed first
+      lapsed: welders.filter(w => w.covered && !w.current),
+      notCovered: welders.filter(w => !w.covered).slice(0, 100),
+      notCoveredCount: welders.filter(w => !w.covered).length,
+    },
+  }
+})

@@ -1,0 +1,19 @@
+import { RecordError, updateWelderTest } from '../../database/welder-tests'
+import { idParamSchema } from '#shared/schemas/list'
+import { welderTestPatchSchema } from '#shared/schemas/welder-test'
+
+/** PATCH /api/tests/:id: the inspector edits a test not yet certified (409 when frozen or stale) */
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, ['inspector'])
+  const { id } = await validParams(event, idParamSchema)
+  const input = await validBody(event, welderTestPatchSchema)
+  try {
+    const row = await updateWelderTest(await useDb(), id, input, user.id)
+    if (!row) throw notFound('Test')
+    return row
+  }
+  catch (error) {
+    if (error instanceof RecordError) throw fieldError(error.field, error.message)
+    throw error
+  }
+})

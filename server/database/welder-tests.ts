@@ -1,0 +1,155 @@
+import { and, asc, eq } from 'drizzle-orm'
+import type { Db } from './client'
+import { accounts, procedures, signatures, welders, welderTestBends, welderTests } from './schema'
+import { contentHash, newVerifyCode } from './signing'
+import { testOutcome, type TestRecord } from '../../shared/qualification/test-outcome'
+import type { WelderTestInput } from '../../shared/schemas/welder-test'
+import type { CodeId, Unit } from '../../shared/rules/types'
+import { recordAudit } from '../utils/audit'
+import { conflict } from '../utils/errors'
+import { todayIso } from '../utils/standings'
+
+type Row = typeof welderTests.$inferSelect
+type Bend = typeof welderTestBends.$inferSelect
+
+// The jsonb column `radiography` holds the record of a non-bend examination: a radiograph or a macro/fracture result.
+type ExamRecord = { kind: 'radiography', indications: { kind: string, length: number }[], reportNumber: string | null }
+  | { kind: 'macro-fracture', accepted: boolean, notes: string | null }
+
+export function examRecordOf(input: Pick<WelderTestInput, 'examination' | 'radiography' | 'macro'>): ExamRecord | null {
+  if (input.examination === 'radiography' && input.radiography) return { kind: 'radiography', ...input.radiography }
+  if (input.examination === 'macro-fracture' && input.macro) return { kind: 'macro-fracture', ...input.macro }
+  return null
+}
+
+/** The rules' view of a stored test. */
+export function recordOf(row: Row, bends: Pick<Bend, 'type' | 'largestIndication' | 'atCorner'>[]): TestRecord {
+  const exam = row.radiography as ExamRecord | null
+  return {
+    code: row.code as CodeId, edition: row.edition, unit: row.unit as Unit, process: row.process, transfer: row.transfer,
+    form: row.form as 'plate' | 'pipe', weld: row.weld as 'groove' | 'fillet', couponThickness: row.couponThickness,
+    depositThickness: row.depositThickness, layers: row.layers, outsideDiameter: row.outsideDiameter, pNumber: row.pNumber,
+    fNumber: row.fNumber, backing: row.backing, positions: row.positions, visualAccepted: row.visualAccepted, visualNotes: row.visualNotes,
+    examination: row.examination as TestRecord['examination'],
+    bends: bends.map(b => ({ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner })),
+    radiography: exam?.kind === 'radiography' ? { indications: exam.indications } : null,
+    macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,
+  }
+}
+
+/** The columns of a test from its input, with the ranges and bend verdicts the rules give. */
+function columnsOf(input: WelderTestInput) {
+  const { bends, radiography: _r, macro: _m, ...variables } = input
+  const record: TestRecord = { ...variables, bends, radiography: input.radiography, macro: input.macro }
+  const outcome = testOutcome(record)
+  const verdicts = outcome.bend?.specimens ?? []
+  return {
+    values: { ...variables, radiography: examRecordOf(input), ranges: outcome.ranges ?? (outcome.rangesError ? { error: outcome.rangesError } : null) },
+    bends: bends.map((b, i) => ({ ...b, accepted: verdicts[i]?.accepted ?? false })),
+    outcome,
+  }
+}
+
+export class RecordError extends Error {
+  constructor(readonly field: string, message: string) {
+    super(message)
+  }
+}
+
+async function checkReferences(db: Db, input: WelderTestInput) {
+  if (input.testDate > todayIso()) throw new RecordError('testDate', 'The test date is after today')
+  const [welder] = await db.select({ id: welders.id }).from(welders).where(eq(welders.id, input.welderId))
+  if (!welder) throw new RecordError('welderId', 'No such welder on the roster')
+  if (input.procedureId) {
+    const [wps] = await db.select({ id: procedures.id }).from(procedures).where(eq(procedures.id, input.procedureId))
+    if (!wps) throw new RecordError('procedureId', 'No such procedure')
+  }
+}
+
+export async function insertWelderTest(db: Db, input: WelderTestInput, accountId: number) {
+  await checkReferences(db, input)
+  const { values, bends, outcome } = columnsOf(input)
+  if (outcome.rangesError) throw new RecordError('ranges', outcome.rangesError)
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(welderTests).values({ ...values, status: 'recorded', inspectorId: accountId }).returning()
+    if (bends.length) await tx.insert(welderTestBends).values(bends.map(b => ({ ...b, testId: row!.id })))
+    await recordAudit(tx as unknown as Db, { accountId, action: 'create', recordType: 'welder-test', recordId: row!.id, after: { ...values, bends } })
+    return row!
+  })
+}
+
+/** Replace a test's content; null when missing. Frozen (certified or failed) and stale versions are conflicts. */
+export async function updateWelderTest(db: Db, id: number, input: WelderTestInput & { version: number }, accountId: number) {
+  await checkReferences(db, input)
+  const { values, bends, outcome } = columnsOf(input)
+  if (outcome.rangesError) throw new RecordError('ranges', outcome.rangesError)
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select().from(welderTests).where(eq(welderTests.id, id)).for('update')
+    if (!before) return null
+    if (before.status !== 'recorded') throw conflict(`This test was ${before.status === 'failed' ? 'certified as failed' : 'certified'} and is frozen; record a new test instead.`)
+    if (before.version !== input.version) throw conflict(`Someone saved this test after you opened it (version ${before.version}, yours ${input.version}). Reload and enter your change again.`)
+    const { version: _v, ...changes } = values as typeof values & { version?: number }
+    const [row] = await tx.update(welderTests).set({ ...changes, version: before.version + 1, updatedAt: new Date() })
+      .where(and(eq(welderTests.id, id), eq(welderTests.version, input.version))).returning()
+    await tx.delete(welderTestBends).where(eq(welderTestBends.testId, id))
+    if (bends.length) await tx.insert(welderTestBends).values(bends.map(b => ({ ...b, testId: id })))
+    await recordAudit(tx as unknown as Db, { accountId, action: 'update', recordType: 'welder-test', recordId: id, before, after: { ...values, bends } })
+    return row!
+  })
+}
+
+/**
+ * The inspector certifies the result: a passed test becomes 'certified', a failed one 'failed'; either way it is
+ * signed over its content hash and frozen. A test without a result yet cannot be certified.
+ */
+export async function certifyWelderTest(db: Db, id: number, version: number, signer: { id: number, name: string }) {
+  return db.transaction(async (tx) => {
+    const t = tx as unknown as Db
+    const [row] = await tx.select().from(welderTests).where(eq(welderTests.id, id)).for('update')
+    if (!row) return null
+    if (row.status !== 'recorded') throw conflict('This test is already certified and frozen.')
+    if (row.version !== version) throw conflict(`Someone saved this test after you opened it (version ${row.version}, yours ${version}). Reload before certifying.`)
+    const bends = await tx.select().from(welderTestBends).where(eq(welderTestBends.testId, id)).orderBy(asc(welderTestBends.id))
+    const outcome = testOutcome(recordOf(row, bends))
+    if (outcome.outcome === 'pending') throw conflict(`The test has no result yet: ${outcome.steps.at(-1)?.text ?? 'record the examinations first'}`)
+    const status = outcome.outcome === 'passed' ? 'certified' : 'failed'
+    const [updated] = await tx.update(welderTests).set({ status, inspectorId: signer.id, certifiedAt: new Date(), version: row.version + 1, updatedAt: new Date() })
+      .where(eq(welderTests.id, id)).returning()
+    const sha256 = (await contentHash(t, 'welder-test', id))!
+    const [signature] = await tx.insert(signatures).values({
+      recordType: 'welder-test', recordId: id, recordVersion: updated!.version, signerId: signer.id, signerName: signer.name,
+      meaning: 'certified', sha256, verifyCode: newVerifyCode(),
+    }).returning()
+    await recordAudit(t, { accountId: signer.id, action: 'certify', recordType: 'welder-test', recordId: id, before: { status: row.status }, after: { status, sha256, verifyCode: signature!.verifyCode } })
+    return { test: updated!, signature: signature! }
+  })
+}
+
+/** One test with its welder, WPS, bends, signatures and the rules' verdict; null when missing. */
+export async function loadWelderTest(db: Db, id: number) {
+  const [found] = await db.select({
+    test: welderTests, welder: { id: welders.id, name: welders.name, stamp: welders.stamp },
+    procedure: { id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, status: procedures.status },
+    inspectorName: accounts.name,
+  }).from(welderTests)
+    .innerJoin(welders, eq(welders.id, welderTests.welderId))
+    .leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
+    .leftJoin(accounts, eq(accounts.id, welderTests.inspectorId))
+    .where(eq(welderTests.id, id))
+  if (!found) return null
+  const [bends, signed] = await Promise.all([
+    db.select().from(welderTestBends).where(eq(welderTestBends.testId, id)).orderBy(asc(welderTestBends.id)),
+    db.select().from(signatures).where(and(eq(signatures.recordType, 'welder-test'), eq(signatures.recordId, id))).orderBy(asc(signatures.signedAt)),
+  ])
+  const record = recordOf(found.test, bends)
+  const exam = found.test.radiography as ExamRecord | null
+  return {
+    ...found.test,
+    radiography: exam?.kind === 'radiography' ? { indications: exam.indications, reportNumber: exam.reportNumber } : null,
+    macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,
+    bends: bends.map(b => ({ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner, accepted: b.accepted })),
+    welder: found.welder, procedure: found.procedure?.id ? found.procedure : null, inspectorName: found.inspectorName,
+    signatures: signed.map(s => ({ id: s.id, meaning: s.meaning, signerName: s.signerName, signedAt: s.signedAt, sha256: s.sha256, verifyCode: s.verifyCode, recordVersion: s.recordVersion })),
+    evaluation: testOutcome(record),
+  }
+}

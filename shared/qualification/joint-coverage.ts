@@ -1,0 +1,119 @@
+import { evaluate } from '../rules'
+import type { CoverReason } from '../rules/results'
+import type { CodeId, Unit } from '../rules/types'
+import { convertLength } from '../rules/units'
+import { processStanding } from './process-standing'
+import { procedureCovers } from './wps-coverage'
+import { welderRangesInput } from './test-ranges'
+import type { Joint } from '../schemas/coverage'
+
+/** Rows of the coverage query (snake_case, as the database returns them). */
+export interface ProcedureRow {
+  id: number
+  number: string
+  revision: number
+  title: string
+  code: string
+  edition: string
+  unit: string
+  process: string
+  transfer: string | null
+  p_number_a: string | null
+  p_number_b: string | null
+  thickness_min: number | null
+  thickness_max: number | null
+  diameter_min: number | null
+  positions: string[]
+  f_numbers: string[]
+}
+export interface TestRow {
+  id: number
+  test_date: string
+  code: string
+  edition: string
+  unit: string
+  process: string
+  transfer: string | null
+  form: string
+  weld: string
+  coupon_thickness: number | null
+  deposit_thickness: number | null
+  layers: number | null
+  outside_diameter: number | null
+  p_number: string | null
+  f_number: string | null
+  backing: boolean
+  positions: string[]
+}
+export interface CandidateRow { id: number, name: string, stamp: string, tests: TestRow[], uses: string[] }
+
+export type ResolvedJoint = Omit<Joint, 'gauge'> & { thickness?: number, gaugeNote?: string }
+
+/** A gauge becomes a decimal thickness by the rules (steel sheet); the joint then carries the thickness. */
+export function resolveJoint(joint: Joint): ResolvedJoint | { error: string } {
+  const { gauge, ...rest } = joint
+  if (gauge === undefined) return rest
+  const result = evaluate({ code: 'asme-ix', check: 'gauge', unit: joint.unit, input: { gauge, material: 'steel' } })
+  if ('error' in result) return { error: String(result.error) }
+  const thickness = result.thickness as number
+  return { ...rest, thickness, gaugeNote: `${gauge} ga sheet steel is ${thickness} ${joint.unit} thick.` }
+}
+
+export function judgeProcedures(rows: ProcedureRow[], joint: ResolvedJoint) {
+  return rows.map((p) => {
+    const verdict = procedureCovers({
+      code: p.code as CodeId, unit: p.unit as Unit, process: p.process, transfer: p.transfer, pNumberA: p.p_number_a, pNumberB: p.p_number_b,
+      thicknessMin: p.thickness_min, thicknessMax: p.thickness_max, diameterMin: p.diameter_min, positions: p.positions, fNumbers: p.f_numbers,
+    }, joint)
+    return { id: p.id, number: p.number, revision: p.revision, title: p.title, code: p.code, edition: p.edition, ...verdict }
+  })
+}
+
+function productionIn(joint: ResolvedJoint, unit: Unit) {
+  const len = (v: number | undefined) => (v === undefined ? undefined : convertLength(v, joint.unit, unit))
+  return Object.fromEntries(Object.entries({
+    form: joint.form, weld: joint.weld, position: joint.position, process: joint.process, transfer: joint.transfer,
+    thickness: len(joint.thickness), outsideDiameter: len(joint.outsideDiameter), pNumber: joint.pNumber,
+    fNumber: joint.fNumber, backing: joint.fNumber !== undefined || joint.backing === false ? joint.backing : undefined,
+  }).filter(([, v]) => v !== undefined))
+}
+
+const variablesOf = (t: TestRow) => ({
+  code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit, process: t.process, transfer: t.transfer, form: t.form as 'plate' | 'pipe',
+  weld: t.weld as 'groove' | 'fillet', couponThickness: t.coupon_thickness, depositThickness: t.deposit_thickness, layers: t.layers,
+  outsideDiameter: t.outside_diameter, pNumber: t.p_number, fNumber: t.f_number, backing: t.backing, positions: t.positions,
+})
+
+/**
+ * For each welder: where the process stands today (the newest certified test starts the chain, continuity keeps it),
+ * and whether their certified tests of the process, taken together per code, cover the joint.
+ */
+export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: string) {
+  return rows.map((w) => {
+    const newest = w.tests[0]!
+    const standing = processStanding({ process: newest.process, code: newest.code as CodeId, edition: newest.edition, testDate: newest.test_date, uses: w.uses, today })
+    const byCode = new Map<string, TestRow[]>()
+    for (const t of w.tests) byCode.set(`${t.code}|${t.edition}|${t.unit}`, [...(byCode.get(`${t.code}|${t.edition}|${t.unit}`) ?? []), t])
+    let covered = false
+    let reasons: CoverReason[] = []
+    let testIds: number[] = []
+    for (const tests of byCode.values()) {
+      const first = tests[0]!
+      const result = evaluate({
+        code: first.code, check: 'covers', unit: first.unit, edition: first.edition,
+        input: { test: tests.map(t => welderRangesInput(variablesOf(t))), production: productionIn(joint, first.unit as Unit) },
+      })
+      if ('error' in result) {
+        reasons = [{ met: false, clause: 'rules', text: `Cannot judge from the ${first.code} tests: ${result.error}`, basis: 'convention' }]
+        continue
+      }
+      reasons = result.reasons as CoverReason[]
+      testIds = tests.map(t => t.id)
+      if (result.covered) {
+        covered = true
+        break
+      }
+    }
+    return { id: w.id, name: w.name, stamp: w.stamp, covered, current: standing.standing !== 'lapsed', standing, reasons, testIds }
+  })
+}

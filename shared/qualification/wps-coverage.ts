@@ -1,0 +1,82 @@
+import type { CoverReason } from '../rules/results'
+import type { CodeId, Unit } from '../rules/types'
+import { convertLength, formatRange, toMicro } from '../rules/units'
+
+export interface ProcedureRanges {
+  code: CodeId
+  unit: Unit
+  process: string
+  transfer: string | null
+  pNumberA: string | null
+  pNumberB: string | null
+  thicknessMin: number | null
+  thicknessMax: number | null
+  diameterMin: number | null
+  positions: string[]
+  fNumbers: string[]
+}
+
+export interface JointToWeld {
+  process: string
+  transfer?: string
+  unit: Unit
+  pNumber?: string
+  thickness?: number
+  form: 'plate' | 'pipe'
+  outsideDiameter?: number
+  weld: 'groove' | 'fillet'
+  position: string
+  fNumber?: number
+}
+
+const asmeClauses = { process: 'QW-401', transfer: 'QW-409.2', pNumber: 'QW-403.11, QW-424', thickness: 'QW-403.8, QW-451.1', fillet: 'QW-202.2(c)', position: 'QW-405.1', fNumber: 'QW-404.4', diameter: 'WPS stated range' }
+const clausesOf = (code: CodeId) => (code === 'asme-ix'
+  ? asmeClauses
+  : {
+      process: 'WPS process', transfer: 'WPS transfer mode', pNumber: 'WPS base metals', thickness: 'WPS thickness range', fillet: 'WPS fillet range',
+      position: 'WPS positions', fNumber: 'WPS filler metals', diameter: 'WPS stated range',
+    })
+
+/**
+ * Whether an approved WPS's stated ranges take in a production joint, one finding per variable.
+ * Lengths of the joint are converted into the WPS's unit before they are compared.
+ */
+export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { covered: boolean, reasons: CoverReason[] } {
+  const c = clausesOf(wps.code)
+  const u = wps.unit
+  const reasons: CoverReason[] = []
+  const add = (met: boolean, clause: string, text: string) => reasons.push({ met, clause, text, basis: 'convention' })
+  const inUnit = (v: number) => convertLength(v, joint.unit, u)
+
+  add(wps.process === joint.process, c.process, `Process ${wps.process}${wps.process === joint.process ? '' : `, not ${joint.process}`}.`)
+  if (joint.transfer && wps.transfer) {
+    const sameFamily = (wps.transfer === 'short-circuit') === (joint.transfer === 'short-circuit')
+    add(sameFamily, c.transfer, `Transfer ${wps.transfer}; the joint calls for ${joint.transfer}.`)
+  }
+  if (joint.pNumber) {
+    const listed = [wps.pNumberA, wps.pNumberB].filter(Boolean).map(p => p!.toUpperCase())
+    const ok = listed.includes(joint.pNumber.toUpperCase())
+    add(ok, c.pNumber, `Base metals P-No. ${wps.pNumberA ?? '—'} to P-No. ${wps.pNumberB ?? '—'}; the joint is P-No. ${joint.pNumber}.`)
+  }
+  if (joint.thickness !== undefined) {
+    if (joint.weld === 'fillet' && wps.code === 'asme-ix') {
+      add(true, c.fillet, 'Fillet welds: a groove-qualified WPS takes in all fillet sizes on all base metal thicknesses.')
+    }
+    else {
+      const t = inUnit(joint.thickness)
+      const ok = (wps.thicknessMin === null || toMicro(t) >= toMicro(wps.thicknessMin)) && (wps.thicknessMax === null || toMicro(t) <= toMicro(wps.thicknessMax))
+      const range = formatRange(wps.thicknessMin === null ? null : toMicro(wps.thicknessMin), wps.thicknessMax === null ? null : toMicro(wps.thicknessMax), u)
+      add(ok, c.thickness, `Thickness ${t} ${u}: the WPS covers ${range}.`)
+    }
+  }
+  if (joint.form === 'pipe' && joint.outsideDiameter !== undefined && wps.diameterMin !== null) {
+    const od = inUnit(joint.outsideDiameter)
+    add(toMicro(od) >= toMicro(wps.diameterMin), c.diameter, `Pipe OD ${od} ${u}: the WPS states ${wps.diameterMin} ${u} and over.`)
+  }
+  const position = joint.position.toUpperCase()
+  add(wps.positions.includes(position), c.position, `Position ${position}: the WPS lists ${wps.positions.join(', ') || 'none'}.`)
+  if (joint.fNumber !== undefined) {
+    add(wps.fNumbers.includes(String(joint.fNumber)), c.fNumber, `F-No. ${joint.fNumber}: the WPS lists F-No. ${wps.fNumbers.join(', ') || 'none'}.`)
+  }
+  return { covered: reasons.every(r => r.met), reasons }
+}

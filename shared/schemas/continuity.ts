@@ -1,0 +1,55 @@
+import { z } from 'zod'
+import { processSchema } from './list'
+
+/** A calendar date as YYYY-MM-DD that exists (2026-02-30 does not). */
+export const calendarDay = z.string({ required_error: 'Date is required' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+  .refine((s) => {
+    const [y, m, d] = s.split('-').map(Number) as [number, number, number]
+    const date = new Date(Date.UTC(y, m - 1, d))
+    return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d
+  }, 'Not a calendar date')
+
+const reference = z.string({ required_error: 'Reference is required (job, weld or WPS)' }).trim()
+  .min(1, 'Reference is required (job, weld or WPS)').max(200, 'At most 200 characters')
+
+export const continuityEntrySchema = z.object({
+  welderId: z.number({ required_error: 'Pick the welder' }).int().positive('Pick the welder'),
+  process: processSchema,
+  weldedOn: calendarDay,
+  reference,
+})
+export type ContinuityEntryInput = z.infer<typeof continuityEntrySchema>
+
+/** Many welders, one process and one date (a shift's work on one job). */
+export const continuityBulkSchema = z.object({
+  welderIds: z.array(z.number().int().positive(), { required_error: 'Pick at least one welder' })
+    .min(1, 'Pick at least one welder').max(1000, 'At most 1000 welders at once')
+    .refine(ids => new Set(ids).size === ids.length, 'A welder is picked twice'),
+  process: processSchema,
+  weldedOn: calendarDay,
+  reference,
+})
+export type ContinuityBulkInput = z.infer<typeof continuityBulkSchema>
+
+export const maxImportBytes = 1_500_000
+
+export const continuityImportSchema = z.object({
+  csv: z.string({ required_error: 'csv is required' }).min(1, 'The file is empty').max(maxImportBytes, 'The file is larger than 1.5 MB; split it'),
+  commit: z.boolean().default(false),
+})
+
+/** One CSV row after its header names are mapped: stamp, process, date, reference. */
+export const continuityImportRowSchema = z.object({
+  stamp: z.string({ required_error: 'Stamp is missing' }).trim().min(1, 'Stamp is missing').max(20, 'Stamp is too long'),
+  process: z.string({ required_error: 'Process is missing' }).trim().toUpperCase().pipe(processSchema),
+  weldedOn: calendarDay,
+  reference,
+})
+
+/** Header names accepted for each column (lower case, spaces and underscores alike). */
+export const importHeaders: Record<keyof z.infer<typeof continuityImportRowSchema>, string[]> = {
+  stamp: ['stamp', 'welder stamp', 'welder'],
+  process: ['process'],
+  weldedOn: ['date', 'welded on', 'weldedon', 'welded'],
+  reference: ['reference', 'job', 'ref'],
+}

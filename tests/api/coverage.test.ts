@@ -1,0 +1,69 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { signedIn, startServer, type Client, type TestServer } from './harness'
+
+let server: TestServer
+let inspector: Client
+
+beforeAll(async () => {
+  server = await startServer()
+  inspector = await signedIn(server.url, 'inspector')
+})
+afterAll(async () => server?.stop())
+
+interface Answer {
+  procedures: { number: string, revision: number, covered: boolean, reasons: { met: boolean, clause: string }[] }[]
+  welders: { able: { stamp: string, covered: boolean, current: boolean, reasons: { met: boolean, clause: string, text: string }[] }[], lapsed: { stamp: string }[], notCovered: { stamp: string, reasons: { met: boolean }[] }[] }
+  timing: { queryMs: number, rulesMs: number }
+}
+const ask = (query: string) => inspector.json<Answer>(`/api/coverage?${query}`)
+
+describe('who can weld this joint?', () => {
+  it('answers approved WPSs and current, covered welders, each with the findings', async () => {
+    const res = await ask('process=SMAW&unit=in&pNumber=1&thickness=0.5&form=plate&weld=groove&position=V&fNumber=4&backing=true')
+    expect(res.status).toBe(200)
+    expect(res.body.welders.able.length).toBeGreaterThan(0)
+    const covering = res.body.procedures.filter(p => p.covered)
+    // Demo: only the approved revision of the SMAW WPS is offered (the superseded one is not)
+    expect(covering.map(p => `${p.number}@${p.revision}`)).toEqual(['KB-W02@1'])
+    for (const w of res.body.welders.able) {
+      expect(w.covered && w.current).toBe(true)
+      expect(w.reasons.every(r => r.met)).toBe(true)
+      // A vertical groove weld needs a 3G or 4G... test: QW-461.9 is the clause that decides it (ASME BPVC IX-2023, Table QW-461.9)
+      expect(w.reasons.map(r => r.clause)).toContain('QW-461.9')
+    }
+    for (const w of res.body.welders.notCovered) expect(w.reasons.some(r => !r.met)).toBe(true)
+    expect(res.body.timing.queryMs).toBeGreaterThanOrEqual(0)
+  })
+
+  it('vertical groove on plate needs a 3G, 5G or 6G test (ASME BPVC IX-2023, Table QW-461.9)', async () => {
+    const res = await ask('process=SMAW&thickness=0.25&position=V')
+    const able = res.body.welders.able as unknown as { stamp: string, testIds: number[] }[]
+    expect(able.length).toBeGreaterThan(0) // the demo seeds current SMAW welders with 3G tests
+    for (const w of able) {
+      const positions = new Set<string>()
+      for (const id of w.testIds) for (const p of (await inspector.json<{ positions: string[] }>(`/api/tests/${id}`)).body.positions) positions.add(p)
+      // Table QW-461.9: 1G gives F; 2G gives F, H; 4G gives F, O — none of them V
+      expect(['3G', '5G', '6G'].some(p => positions.has(p)), w.stamp).toBe(true)
+    }
+    const flatOnly = res.body.welders.notCovered.find(w => w.reasons.some(r => !r.met && /Groove V/.test((r as { text?: string }).text ?? '')))
+    expect(flatOnly).toBeDefined()
+  })
+
+  it('a gauge is turned into a thickness by the rules; bad joints are 400 per field', async () => {
+    const gauge = await ask('process=GMAW&transfer=short-circuit&gauge=14&position=H&weld=fillet')
+    expect(gauge.status).toBe(200)
+    const cases: [string, string][] = [
+      ['process=SMAW', 'position'],
+      ['process=WELDING&position=F', 'process'],
+      ['process=SMAW&position=F&form=pipe', 'outsideDiameter'],
+      ['process=SMAW&position=F&thickness=-2', 'thickness'],
+      ['process=SMAW&position=F&thickness=0.5&gauge=10', 'gauge'],
+      ['process=SMAW&position=F&gauge=99', 'gauge'],
+    ]
+    for (const [query, field] of cases) {
+      const res = await inspector.json<{ data?: { fieldErrors: Record<string, string[]> } }>(`/api/coverage?${query}`)
+      expect(res.status, query).toBe(400)
+      expect(Object.keys(res.body.data?.fieldErrors ?? {}), query).toContain(field)
+    }
+  })
+})
