@@ -84,3 +84,32 @@ export function weeklyDigestMail(input: { week: string, account: { id: number, n
     ...body,
   }
 }
+
+const meaningWords: Record<string, { ask: string, subject: string }> = {
+  approved: { ask: 'approve', subject: 'Approval asked' },
+  certified: { ask: 'certify', subject: 'Certification asked' },
+  witnessed: { ask: 'witness', subject: 'Witness signature asked' },
+}
+
+export function signoffRequestMail(input: {
+  notice: { requestId: number, meaning: string, record: { label: string }, requestedBy: { name: string }, note: string | null }
+  recipient: { id: number, name: string, email: string }
+  link: string
+  shopName: string
+}): OutgoingMail {
+  const words = meaningWords[input.notice.meaning] ?? { ask: `sign (${input.notice.meaning})`, subject: 'Sign-off asked' }
+  const body = renderLetter({
+    greeting: `Hello ${input.recipient.name},`,
+    paragraphs: [
+      `${input.notice.requestedBy.name} asks you to ${words.ask} ${input.notice.record.label}.`,
+      ...(input.notice.note ? [`Their note: “${input.notice.note}”`] : []),
+      'The request waits on your dashboard until it is signed or withdrawn.',
+    ],
+    action: { label: 'Open your dashboard', href: input.link },
+    footnotes: ['A signature freezes the signed version of the record; review it in Rootface before you sign.'],
+  }, input.shopName)
+  return {
+    dedupeKey: `signoff:${input.notice.requestId}:${input.recipient.id}`, kind: 'signoff-request', to: input.recipient.email,
+    subject: `${words.subject}: ${input.notice.record.label}`, ...body,
+  }
+}
