@@ -78,3 +78,46 @@ test('an inspector checks production readings against an approved WPS', async ({
   // ASME BPVC IX QW-409.1(a): 21 V × 120 A × 60 / 14 in/min = 10800 J/in.
   await expect(result).toContainText('= 10800 J/in')
 })
+
+test('the supervisor records a PQR coupon; the inspector records its results and certifies them', async ({ page }) => {
+  await signIn(page, 'supervisor@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/pqrs')
+  await page.getByRole('link', { name: 'New PQR' }).click()
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText('New PQR')
+  await expect(page.getByLabel('Base metal')).toContainText('SA-516 70')
+  await page.getByLabel('PQR number').fill('PQR-K120')
+  await page.getByLabel('Process').selectOption('SMAW')
+  await page.getByLabel('Transfer mode').selectOption('')
+  await page.getByLabel('Coupon thickness').fill('0.375')
+  await page.getByLabel('Base metal').selectOption({ label: 'SA-516 70 · P-No. 1 · min 70000 psi' })
+  await page.getByLabel('Filler metal').selectOption({ label: 'SFA-5.1 E7018 · F-No. 4' })
+  await page.getByRole('button', { name: 'Save PQR' }).click()
+  await expect(page).toHaveURL(/\/pqrs\/\d+$/)
+  // ASME BPVC IX, Table QW-451.1: T from 1/16 to 3/8 in inclusive qualifies 1/16 in to 2T = 0.75 in.
+  await expect(page.getByTestId('pqr-qualifies')).toContainText('Base metal 0.0625 in to 0.75 in')
+  const address = page.url()
+
+  await page.context().clearCookies()
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto(address)
+  for (const n of [0, 1]) {
+    await page.getByRole('button', { name: 'Add a tensile specimen' }).click()
+    await page.locator(`#f-tensile-${n}-width`).fill('0.75')
+    await page.locator(`#f-tensile-${n}-thickness`).fill('0.375')
+    await page.locator(`#f-tensile-${n}-load`).fill('22500')
+  }
+  // 22500 lbf / (0.75 in × 0.375 in) = 80000 psi, not less than SA-516 70's 70000 psi (QW-153.1).
+  await expect(page.getByText('80000 psi against the specified minimum of 70000 psi: accepted').first()).toBeVisible()
+  for (const type of ['face', 'face', 'root', 'root']) {
+    await page.getByRole('button', { name: 'Add a bend specimen' }).click()
+    await page.locator('select[id^="f-bends-"][id$="-type"]').last().selectOption(type)
+  }
+  await page.getByRole('button', { name: 'Save results' }).click()
+  await expect(page.getByRole('cell', { name: '80000 psi' }).first()).toBeVisible()
+  await page.getByRole('button', { name: 'Certify results' }).click()
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('certified')
+  await expect(page.getByText(/certified by Tobias Lindqvist-Hale/)).toBeVisible()
+  await expect(page.getByRole('button', { name: 'Save results' })).toHaveCount(0)
+})
