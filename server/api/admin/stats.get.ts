@@ -2,7 +2,7 @@ import { count, getTableName, is } from 'drizzle-orm'
 import { PgTable } from 'drizzle-orm/pg-core'
 import * as schema from '../../database/schema'
 
-const tables = Object.values(schema).filter((value): value is PgTable => is(value, PgTable))
+const tables = (Object.values(schema) as unknown[]).filter((value): value is PgTable => is(value, PgTable))
 
 /** GET /api/admin/stats: how many rows each table holds, for the quality manager's view of the database */
 export default defineEventHandler(async (event) => {
