@@ -58,6 +58,12 @@ export default defineNuxtConfig({
       // The built server reads its migrations from beside its entry file.
       async compiled(nitro) {
         await cp(join(rootDir, 'server/database/migrations'), join(nitro.options.output.serverDir, 'migrations'), { recursive: true })
+        // Packets are laid out in a worker thread (server/sheets/packet-render.ts); its bundle sits beside the entry.
+        const { build } = await import('esbuild')
+        await build({
+          entryPoints: [join(rootDir, 'server/sheets/render-worker.ts')], outfile: join(nitro.options.output.serverDir, 'sheet-worker.cjs'),
+          bundle: true, platform: 'node', format: 'cjs', target: 'node20', alias: { '#shared': join(rootDir, 'shared') }, logLevel: 'warning',
+        })
       },
     },
   },

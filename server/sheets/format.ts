@@ -27,6 +27,8 @@ export function length(value: number | null | undefined, unit: Unit): string {
 
 export function rangeText(range: Range | { min: number | null, max: number | null } | null | undefined, unit: Unit): string {
   if (!range) return dash
+  if (range.min === null && range.max === null) return 'all'
+  if (range.max === null) return `${length(range.min, unit)} and over`
   const low = range.min === null ? 'no minimum' : length(range.min, unit)
   const high = range.max === null ? 'unlimited' : length(range.max, unit)
   return `${low} to ${high}`

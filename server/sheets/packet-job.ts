@@ -35,7 +35,8 @@ async function runPacket(db: Db, packetId: number, projectId: number, user: Sess
     await db.update(packets).set({ status: 'building', updatedAt: new Date() }).where(eq(packets.id, packetId))
     const plan = await packetPlan(db, projectId)
     if (!plan) throw new Error('The project no longer exists')
-    const { pdf, pageCount } = await buildPacket(db, plan, user, origin, progress)
+    const { pdf, pageCount, sheets, timing } = await buildPacket(db, plan, user, origin, progress)
+    console.info(`[rootface] packet ${packetId}: ${sheets} sheets, ${pageCount} pages; sheets read in ${timing.modelsMs} ms, laid out and rendered in ${timing.renderMs} ms`)
     const sha256 = createHash('sha256').update(pdf).digest('hex')
     await db.transaction(async (tx) => {
       await tx.insert(packetFiles).values({ packetId, content: new Uint8Array(pdf) })

@@ -3,10 +3,9 @@ import type { Db } from '../database/client'
 import { customers, procedures, projectProcedures, projectWelders, projects, welders, welderTests } from '../database/schema'
 import type { SessionUser } from '../utils/auth'
 import { gapsInPeriod, loadCertifiedTests, loadUses, type Gap, type Period } from './continuity'
-import { groupedCode } from './format'
-import { documentBase, PageTracker, pageFooter, pageHeader, sheetSection, styles } from './layout'
-import { sheetReference, type SheetModel } from './model'
-import { renderPdf } from './pdf'
+import type { SheetModel } from './model'
+import type { PacketDocumentInput, PacketEntry } from './packet-document'
+import { renderPacket } from './packet-render'
 import { pqrIdsOf, shopName } from './records'
 import { continuityLogSheet, pqrSheetOf, procedureSheet, projectPeriod, welderTestSheet } from './sheets'
 import { todayIso } from '../utils/standings'
@@ -69,12 +68,11 @@ export async function gapsOfProject(db: Db, plan: PacketPlan): Promise<WelderGap
   return found
 }
 
-interface Entry { sheet: SheetModel, group: string }
-
 /** Builds the packet's sheets (0..0.6 of the progress) and renders the one PDF (0.6..1). */
 export async function buildPacket(db: Db, plan: PacketPlan, user: Pick<SessionUser, 'id' | 'name'>, origin: string, progress: (fraction: number) => Promise<void> | void) {
+  const began = performance.now()
   const total = sheetCount(plan)
-  const entries: Entry[] = []
+  const entries: PacketEntry[] = []
   let done = 0
   const add = async (sheet: SheetModel | null, group: string) => {
     if (sheet) entries.push({ sheet, group })
@@ -88,125 +86,11 @@ export async function buildPacket(db: Db, plan: PacketPlan, user: Pick<SessionUs
     for (const id of w.testIds) await add(await welderTestSheet(db, id, origin), `${w.name} (${w.stamp})`)
     await add(await continuityLogSheet(db, w.id, plan.period, user, origin), `${w.name} (${w.stamp})`)
   }
+  const modelsDone = performance.now()
   const gaps = await gapsOfProject(db, plan)
   const shop = await shopName(db)
-  const tracker = new PageTracker()
-  const furniture = { shopName: shop, documentLine: `Packet ${plan.project.number}` }
-  const front = (content: unknown[], section: number, anchor?: string) => ({
-    section: anchor ? [{ text: '', id: anchor }, ...content] : content,
-    header: (page: number) => {
-      tracker.seen(page, section)
-      return pageHeader(shop, `Project ${plan.project.number}`, furniture.documentLine)
-    },
-    footer: (page: number, pages: number) => {
-      tracker.total = pages
-      return pageFooter(`Project ${plan.project.number} · ${plan.project.name}`, `Packet page ${page} of ${pages}`)
-    },
-  })
-  const definition = {
-    ...documentBase(`Packet ${plan.project.number}`, shop),
-    content: [
-      front(coverContent(plan, shop, entries.length, gaps, user), 0),
-      front(indexContent(entries), 1),
-      front(gapContent(plan, gaps), 2, 'not-current'),
-      ...entries.map((e, i) => sheetSection(e.sheet, i + 3, tracker, furniture, `sheet-${i}`)),
-    ],
-    styles,
-  }
-  const pdf = await renderPdf(definition, (f) => {
-    void progress(0.6 + 0.4 * f)
-  })
-  return { pdf, pageCount: tracker.total, sheets: entries.length, gaps: gaps.length }
-}
-
-function coverContent(plan: PacketPlan, shop: string, sheets: number, gaps: WelderGap[], user: Pick<SessionUser, 'name'>) {
-  const row = (label: string, value: string) => [{ text: label, style: 'label', margin: [0, 3, 0, 3] }, { text: value, style: 'value', margin: [0, 2, 0, 2] }]
-  return [
-    { text: shop, fontSize: 13, bold: true, margin: [0, 60, 0, 4] },
-    { text: 'PROJECT PACKET', style: 'kind', margin: [0, 30, 0, 2] },
-    { text: plan.project.number, fontSize: 30, bold: true },
-    { text: plan.project.name, fontSize: 14, margin: [0, 2, 0, 24] },
-    {
-      table: {
-        widths: [130, '*'],
-        body: [
-          row('Customer', plan.project.customer),
-          row('Period', `${plan.period.from} to ${plan.period.to}`),
-          row('Procedures (WPS)', String(plan.procedureIds.length)),
-          row('Procedure qualifications (PQR)', String(plan.pqrIds.length)),
-          row('Welders', String(plan.welders.length)),
-          row('Sheets', String(sheets)),
-          row('Welders not current on a day of the period', gaps.length ? `${new Set(gaps.map(g => g.stamp)).size} (see the summary)` : 'none'),
-          row('Prepared', `${todayIso()} by ${user.name}`),
-        ],
-      },
-      layout: { hLineWidth: () => 0.5, vLineWidth: () => 0, hLineColor: () => '#d4d1c7' },
-    },
-    {
-      text: 'Each sheet carries its own signatures, the SHA-256 of its signed content and a code with a QR code: '
-        + 'the verification page tells whether the record is still as it was signed.',
-      style: 'value', margin: [0, 24, 0, 8],
-    },
-    { table: { widths: ['*'], body: [[{ text: genericCaution, style: 'caution', fillColor: '#f7ecd2', margin: [6, 5, 6, 5] }]] }, layout: 'noBorders' },
-  ]
-}
-
-const genericCaution = 'Rootface helps; it does not qualify anyone. Each sheet names the code edition its ranges follow; the governing code '
-  + 'edition, the shop\'s quality manual, the contract and the Authorized Inspector or certified welding inspector have the final word.'
-
-function indexContent(entries: Entry[]) {
-  const body: unknown[][] = [[
-    { text: 'Sheet', style: 'th' }, { text: 'Reference', style: 'th' }, { text: 'Subject', style: 'th' }, { text: 'Code', style: 'th' }, { text: 'Page', style: 'th', alignment: 'right' },
-  ]]
-  body.push([{ text: 'Welders not current in the period', style: 'cell', colSpan: 4, bold: true }, {}, {}, {}, { text: '00', pageReference: 'not-current', style: 'cell', alignment: 'right' }])
-  let group = ''
-  entries.forEach((e, i) => {
-    if (e.group !== group) {
-      group = e.group
-      body.push([{ text: group, style: 'cell', bold: true, colSpan: 5, margin: [0, 4, 0, 0] }, {}, {}, {}, {}])
-    }
-    body.push([
-      { text: e.sheet.kindTitle.replace(/ \(.*\)$/, ''), style: 'cell' },
-      { text: sheetReference(e.sheet), style: 'cell', bold: true },
-      { text: e.sheet.subtitle, style: 'cell' },
-      { text: e.sheet.verify ? groupedCode(e.sheet.verify.code) : 'not signed', style: 'cell' },
-      { text: '00', pageReference: `sheet-${i}`, style: 'cell', alignment: 'right' },
-    ])
-  })
-  return [
-    { text: 'INDEX', style: 'kind', margin: [0, 0, 0, 2] },
-    { text: 'Sheets in this packet', style: 'number', fontSize: 16, margin: [0, 0, 0, 8] },
-    {
-      table: { headerRows: 1, widths: [110, 80, '*', 62, 28], body, dontBreakRows: true },
-      layout: { hLineWidth: (i: number) => (i === 0 ? 0 : 0.4), vLineWidth: () => 0, hLineColor: () => '#d4d1c7', paddingTop: () => 2, paddingBottom: () => 2 },
-    },
-  ]
-}
-
-function gapContent(plan: PacketPlan, gaps: WelderGap[]) {
-  const rows = gaps.map(g => [
-    { text: `${g.welder} (${g.stamp})`, style: 'cell' }, { text: g.process, style: 'cell' },
-    { text: g.from, style: 'cell' }, { text: g.to, style: 'cell' },
-    { text: g.why === 'no-test' ? 'no certified test of this process on record yet' : 'qualification lapsed (no use within six months, or not renewed)', style: 'cell' },
-  ])
-  return [
-    { text: 'SUMMARY', style: 'kind', margin: [0, 0, 0, 2] },
-    { text: 'Welders not current on a day of the period', style: 'number', fontSize: 16, margin: [0, 0, 0, 4] },
-    {
-      text: `For each welder of the project and each process of its WPSs (${plan.processes.join(', ') || 'none'}), the days from ${plan.period.from} to ${plan.period.to} `
-        + 'on which the welder was not current, from the certified tests and the continuity log (ASME IX QW-322). A welder who did not weld a process '
-        + 'on the project need not hold it: read each line with the project\'s weld map.',
-      style: 'value', margin: [0, 0, 0, 8],
-    },
-    gaps.length
-      ? {
-          table: {
-            headerRows: 1, widths: [120, 40, 58, 58, '*'],
-            body: [[{ text: 'Welder', style: 'th' }, { text: 'Process', style: 'th' }, { text: 'From', style: 'th' }, { text: 'To', style: 'th' }, { text: 'Why', style: 'th' }], ...rows],
-          },
-          layout: { hLineWidth: (i: number) => (i === 0 ? 0 : 0.4), vLineWidth: () => 0, hLineColor: () => '#d4d1c7' },
-        }
-      : { text: 'Every welder was current for every process of the project on every day of the period.', bold: true },
-    { table: { widths: ['*'], body: [[{ text: genericCaution, style: 'caution', fillColor: '#f7ecd2', margin: [6, 5, 6, 5] }]] }, layout: 'noBorders', margin: [0, 14, 0, 0] },
-  ]
+  const input: PacketDocumentInput = { plan, shop, entries, gaps, preparedBy: user.name, preparedOn: todayIso() }
+  const { pdf, pageCount } = await renderPacket(input, f => progress(0.6 + 0.4 * f))
+  const timing = { modelsMs: Math.round(modelsDone - began), renderMs: Math.round(performance.now() - modelsDone) }
+  return { pdf, pageCount, sheets: entries.length, gaps: gaps.length, timing }
 }

@@ -102,7 +102,7 @@ function rangeBlocks(record: WelderTestRecord): SheetBlock[] {
   if (ranges.depositMax !== undefined) fields.push({ label: 'Deposited weld metal, maximum', value: ranges.depositMax === null ? 'maximum to be welded' : length(ranges.depositMax, unit) })
   if (ranges.thickness) fields.push({ label: 'Base metal thickness', value: rangeText(ranges.thickness, unit) })
   if (ranges.filletSizeMax !== undefined) fields.push({ label: 'Fillet size, maximum', value: ranges.filletSizeMax === null ? 'all sizes' : length(ranges.filletSizeMax, unit) })
-  if (ranges.diameter) fields.push({ label: 'Outside diameter', value: rangeText(ranges.diameter, unit).replace('no minimum', 'any') })
+  if (ranges.diameter) fields.push({ label: 'Outside diameter', value: rangeText(ranges.diameter, unit) })
   fields.push({ label: 'Groove positions (plate and large pipe)', value: list(pos.groove) })
   if (pos.groovePipe) fields.push({ label: 'Groove positions (small pipe)', value: list(pos.groovePipe) })
   fields.push({ label: 'Fillet positions', value: list(pos.fillet) })

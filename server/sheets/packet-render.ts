@@ -1,0 +1,41 @@
+import { existsSync } from 'node:fs'
+import { dirname, join } from 'node:path'
+import { Worker } from 'node:worker_threads'
+import { renderDefinition } from './fonts'
+import { packetDefinition, type PacketDocumentInput } from './packet-document'
+import { fontBuffers } from './pdf'
+
+/** The render worker, bundled beside the built server entry (see nuxt.config.ts); absent in `nuxt dev`. */
+function workerFile() {
+  const entry = process.argv[1]
+  const file = entry ? join(dirname(entry), 'sheet-worker.cjs') : ''
+  return file && existsSync(file) ? file : null
+}
+
+export interface RenderedPacket { pdf: Buffer, pageCount: number }
+
+/**
+ * Lays out and renders a packet. pdfmake's layout is one synchronous run (seconds for a hundred sheets), so it runs
+ * in a worker thread: the server keeps answering, the progress polling included.
+ */
+export async function renderPacket(input: PacketDocumentInput, progress: (fraction: number) => void | Promise<void>): Promise<RenderedPacket> {
+  const fonts = await fontBuffers()
+  const file = workerFile()
+  if (!file) {
+    const { definition, tracker } = packetDefinition(input)
+    const pdf = await renderDefinition(definition, f => void progress(f))
+    return { pdf, pageCount: tracker.total }
+  }
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(file, { workerData: { input, fonts } })
+    worker.on('message', (message: { progress?: number, pdf?: Uint8Array, pageCount?: number, error?: string }) => {
+      if (message.progress !== undefined) void progress(message.progress)
+      else if (message.error) reject(new Error(message.error))
+      else if (message.pdf) resolve({ pdf: Buffer.from(message.pdf), pageCount: message.pageCount ?? 0 })
+    })
+    worker.once('error', reject)
+    worker.once('exit', (code) => {
+      if (code !== 0) reject(new Error(`the packet renderer stopped (exit ${code})`))
+    })
+  })
+}
