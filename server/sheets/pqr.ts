@@ -24,7 +24,7 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
         { label: 'Process', value: q.process },
         { label: 'Transfer mode', value: orDash(q.transfer) },
         { label: 'Laboratory report', value: orDash(q.labReportNumber) },
-        { label: 'Supports WPS', value: list(record.supports.map(s => `${s.number} rev. ${s.revision} (${s.status})`)) },
+        { label: 'Supports WPS', value: list(record.supports.filter(s => s.status !== 'draft').map(s => `${s.number} rev. ${s.revision} (${s.status})`)) },
       ],
     },
     {
