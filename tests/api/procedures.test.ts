@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signedIn, startServer, type Client, type TestServer } from './harness'
-import type { ProcedureDraft } from '#shared/schemas/procedure'
+import { procedureDraftSchema, type ProcedureDraft } from '#shared/schemas/procedure'
 
 interface Finding { met: boolean, clause: string, text: string, field: string | null }
 interface Detail {
@@ -63,6 +63,8 @@ describe('reading procedures', () => {
     const rev1 = await byNumber('KB-W02', 1)
     expect(rev0).toMatchObject({ status: 'superseded', current: false })
     expect(rev1).toMatchObject({ status: 'approved', current: true })
+    expect(await byNumber('KB-W01', 0)).toMatchObject({ status: 'approved', current: true })
+    expect(await byNumber('KB-W04', 0)).toMatchObject({ status: 'draft', current: false })
   })
 
   it('one WPS carries its variables, supporting PQRs, signature and a passing support check', async () => {
@@ -78,6 +80,15 @@ describe('reading procedures', () => {
     // ASME BPVC IX-2019, Table QW-451.1 (T from 1/16 to 3/8 in: 1/16 in to 2T) with QW-403.10 (GMAW-S, T under 1/2 in: 1.1T):
     // a 0.1345 in coupon qualifies 0.0625 in to 0.14795 in.
     expect(body.support.qualifies[0]!.baseMetal).toEqual({ min: 0.0625, max: 0.14795 })
+  })
+
+  it('every stored WPS reads back as a draft the form and the route accept', async () => {
+    const list = await supervisor.json<{ items: ListRow[] }>('/api/procedures?pageSize=50')
+    expect(list.body.items.length).toBeGreaterThan(0)
+    for (const row of list.body.items) {
+      const parsed = procedureDraftSchema.safeParse((await detail(supervisor, row.id)).body.draft)
+      expect(parsed.success, `${row.number} rev. ${row.revision}: ${parsed.error?.issues.map(i => `${i.path.join('.')} ${i.message}`).join('; ')}`).toBe(true)
+    }
   })
 
   it('welders read approved procedures only, without the PQR records; auditors not at all', async () => {
@@ -203,6 +214,7 @@ describe('drafting, approving and revising', () => {
     expect((await send(supervisor, 'POST', `/api/procedures/${revised.body.id}/approve`, { version: saved.body.version })).status).toBe(200)
     const old = await detail(supervisor, id)
     expect(old.body.procedure).toMatchObject({ status: 'superseded', current: false })
+    expect(await byNumber('KB-T01', 0)).toMatchObject({ status: 'superseded', current: false })
     expect(old.body.signatures).toHaveLength(1)
     expect(old.body.revisions.map(r => `${r.revision}:${r.status}`)).toEqual(['1:approved', '0:superseded'])
     expect((await byNumber('KB-T01', 1)).current).toBe(true)

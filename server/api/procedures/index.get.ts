@@ -25,9 +25,10 @@ export default defineEventHandler(async (event) => {
   if (query.thickness) filters.push(sql`${procedures.thicknessMin} <= ${query.thickness} and ${procedures.thicknessMax} >= ${query.thickness}`)
   if (query.q) filters.push(or(ilike(procedures.number, containsPattern(query.q)), ilike(procedures.title, containsPattern(query.q)))!)
   const where = filters.length ? and(...filters) : undefined
-  // The current revision of a number is its highest approved one.
+  // The current revision of a number is its highest approved one. The outer row is named in full: drizzle prints
+  // columns of a one-table query unqualified, which inside the subquery would bind to p2.
   const current = sql<boolean>`${procedures.status} = 'approved' and ${procedures.revision} = (
-    select max(p2.revision) from procedures p2 where p2.number = ${procedures.number} and p2.status = 'approved')`
+    select max(p2.revision) from procedures p2 where p2.number = "procedures"."number" and p2.status = 'approved')`
   const window = pageWindow(query)
   const [items, [totals]] = await Promise.all([
     db.select({
