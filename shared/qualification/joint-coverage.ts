@@ -1,4 +1,5 @@
-import { evaluate } from '../rules'
+import { evaluate, getRuleSet, RuleRefusal } from '../rules'
+import type { ProductionWeld, WelderTestInput } from '../rules/inputs'
 import type { CoverReason } from '../rules/results'
 import type { CodeId, Unit } from '../rules/types'
 import { convertLength } from '../rules/units'
@@ -86,34 +87,36 @@ const variablesOf = (t: TestRow) => ({
 
 /**
  * For each welder: where the process stands today (the newest certified test starts the chain, continuity keeps it),
- * and whether their certified tests of the process, taken together per code, cover the joint.
+ * and whether one of their certified tests of the process covers the joint (the rules' covers check takes a set of
+ * tests the same way: covered when one test covers it all). Identical coupons are judged once per request.
  */
 export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: string) {
+  const productions = new Map<Unit, ProductionWeld>()
+  const productionOf = (unit: Unit) => productions.get(unit) ?? productions.set(unit, productionIn(joint, unit) as unknown as ProductionWeld).get(unit)!
+  const verdicts = new Map<string, { covered: boolean, reasons: CoverReason[] }>()
+  const judge = (t: TestRow) => {
+    const test = welderRangesInput(variablesOf(t)) as unknown as WelderTestInput
+    const key = `${t.code}|${t.edition}|${t.unit}|${JSON.stringify(test)}`
+    const known = verdicts.get(key)
+    if (known) return known
+    let verdict: { covered: boolean, reasons: CoverReason[] }
+    try {
+      // Stored tests passed the same schemas when they were saved, so the rule is called without re-parsing them.
+      verdict = getRuleSet(t.code as CodeId).covers({ test, production: productionOf(t.unit as Unit) }, { code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit })
+    }
+    catch (error) {
+      if (!(error instanceof RuleRefusal)) throw error
+      verdict = { covered: false, reasons: [{ met: false, clause: 'rules', text: `Cannot judge this test: ${error.message}`, basis: 'convention' }] }
+    }
+    verdicts.set(key, verdict)
+    return verdict
+  }
   return rows.map((w) => {
     const newest = w.tests[0]!
     const standing = processStanding({ process: newest.process, code: newest.code as CodeId, edition: newest.edition, testDate: newest.test_date, uses: w.uses, today })
-    const byCode = new Map<string, TestRow[]>()
-    for (const t of w.tests) byCode.set(`${t.code}|${t.edition}|${t.unit}`, [...(byCode.get(`${t.code}|${t.edition}|${t.unit}`) ?? []), t])
-    let covered = false
-    let reasons: CoverReason[] = []
-    let testIds: number[] = []
-    for (const tests of byCode.values()) {
-      const first = tests[0]!
-      const result = evaluate({
-        code: first.code, check: 'covers', unit: first.unit, edition: first.edition,
-        input: { test: tests.map(t => welderRangesInput(variablesOf(t))), production: productionIn(joint, first.unit as Unit) },
-      })
-      if ('error' in result) {
-        reasons = [{ met: false, clause: 'rules', text: `Cannot judge from the ${first.code} tests: ${result.error}`, basis: 'convention' }]
-        continue
-      }
-      reasons = result.reasons as CoverReason[]
-      testIds = tests.map(t => t.id)
-      if (result.covered) {
-        covered = true
-        break
-      }
-    }
-    return { id: w.id, name: w.name, stamp: w.stamp, covered, current: standing.standing !== 'lapsed', standing, reasons, testIds }
+    const judged = w.tests.map(t => ({ id: t.id, ...judge(t) }))
+    const covering = judged.find(j => j.covered)
+    const shown = covering ?? judged[0]!
+    return { id: w.id, name: w.name, stamp: w.stamp, covered: Boolean(covering), current: standing.standing !== 'lapsed', standing, reasons: shown.reasons, testIds: covering ? [covering.id] : judged.map(j => j.id) }
   })
 }

@@ -64,7 +64,7 @@ const variables = {
   macro: macroRecordSchema.nullish().transform(v => v ?? null),
 }
 
-type Draft = { code: z.infer<typeof codeSchema>, edition?: string, form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+type Draft = { code: z.infer<typeof codeSchema>, edition?: string, unit?: 'in' | 'mm', process?: string, transfer?: string | null, form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
 
 /** Cross-field rules a record must keep whatever the code. */
 function consistent(v: Draft, ctx: z.RefinementCtx) {
@@ -72,6 +72,7 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   if (v.edition !== undefined && !getRuleSet(v.code).editions.includes(v.edition)) {
     issue('edition', `Editions carried for this code: ${getRuleSet(v.code).editions.join(', ')}`)
   }
+  if (v.unit !== undefined && !getRuleSet(v.code).units.includes(v.unit)) issue('unit', `This code prints its ranges in ${getRuleSet(v.code).units.join(' and ')}`)
   if (v.form === 'pipe' && !v.outsideDiameter) issue('outsideDiameter', 'A pipe coupon needs its outside diameter')
   if (v.weld === 'groove' && v.positions?.some(p => p.endsWith('F'))) issue('positions', 'A groove test is welded in 1G to 6G')
   if (v.weld === 'fillet' && v.positions?.some(p => p.endsWith('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
@@ -82,6 +83,9 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   if ((v.bends?.length ?? 0) > 0 && v.examination !== 'bend') issue('bends', 'Bend specimens belong to a bend-tested coupon')
   if (v.radiography && v.examination !== 'radiography') issue('radiography', 'Radiography belongs to a radiographed coupon')
   if (v.macro && v.examination !== 'macro-fracture') issue('macro', 'A macro or fracture result belongs to a fillet coupon')
+  if (v.examination === 'radiography' && v.process === 'GMAW' && v.transfer === 'short-circuit') {
+    issue('examination', 'Short-circuit GMAW is qualified by bend tests, not radiography (ASME IX QW-304)')
+  }
   if (v.examination === 'radiography' && v.radiography && !v.couponThickness) issue('couponThickness', 'Radiographic acceptance needs the coupon thickness')
 }
 

@@ -22,16 +22,20 @@ export default defineEventHandler(async (event) => {
   const judged = performance.now()
   const timing = { queryMs: Math.round((queried - started) * 10) / 10, rulesMs: Math.round((judged - queried) * 10) / 10, candidates: rows.welders.length }
   setResponseHeader(event, 'server-timing', `db;dur=${timing.queryMs}, rules;dur=${timing.rulesMs}`)
+  const lapsed = welders.filter(w => w.covered && !w.current)
+  const notCovered = welders.filter(w => !w.covered)
   return {
     today, joint, timing,
     procedures: procedures.sort((a, b) => Number(b.covered) - Number(a.covered)),
     welders: {
       // Covered and current today: may weld it (with a WPS that covers it)
       able: welders.filter(w => w.covered && w.current),
-      // Covered by their tests, but the process has lapsed: renewal needed first
-      lapsed: welders.filter(w => w.covered && !w.current),
-      notCovered: welders.filter(w => !w.covered).slice(0, 100),
-      notCoveredCount: welders.filter(w => !w.covered).length,
+      // Covered by their tests, but the process has lapsed: renewal needed first (names and dates only)
+      lapsed: lapsed.slice(0, 100).map(({ id, name, stamp, standing }) => ({ id, name, stamp, standing })),
+      lapsedCount: lapsed.length,
+      // Tested in the process but no test covers the joint: the findings that are not met
+      notCovered: notCovered.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => !r.met) })),
+      notCoveredCount: notCovered.length,
     },
   }
 })
