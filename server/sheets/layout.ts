@@ -216,10 +216,15 @@ export interface Furniture {
 
 const shortKind = { wps: 'WPS', pqr: 'PQR', wpq: 'WPQ', continuity: 'Continuity log' } as const
 
+/** "WPS KB-W02 rev. 1", but "PQR-K101" rather than "PQR PQR-K101". */
+export function labelled(kind: string, reference: string) {
+  return reference.toUpperCase().startsWith(kind.toUpperCase()) ? reference : `${kind} ${reference}`
+}
+
 /** One sheet as a section: its own header, footer and banner watermark on every page it takes. */
 /** `anchor` names the sheet's first line, for the page numbers of a packet's index. */
 export function sheetSection(sheet: SheetModel, section: number, tracker: PageTracker, furniture: Furniture, anchor?: string) {
-  const reference = `${shortKind[sheet.kind]} ${sheetReference(sheet)}`
+  const reference = labelled(shortKind[sheet.kind], sheetReference(sheet))
   return {
     section: sheetContent(sheet, anchor),
     header: (page: number) => {

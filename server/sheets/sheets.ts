@@ -7,7 +7,7 @@ import type { SessionUser } from '../utils/auth'
 import { loadContinuityLog, type Period } from './continuity'
 import { continuitySheet } from './continuity-sheet'
 import { verifyUrl } from './common'
-import { documentBase, PageTracker, sheetSection } from './layout'
+import { documentBase, labelled, PageTracker, sheetSection } from './layout'
 import { sheetReference, type SheetModel } from './model'
 import { renderPdf } from './pdf'
 import { pqrSheet } from './pqr'
@@ -94,8 +94,7 @@ export async function renderSheet(sheet: SheetModel) {
 }
 
 export function sheetFileName(sheet: SheetModel) {
-  const safe = sheetReference(sheet).replace(/[^\w.-]+/g, '-')
-  return `${sheet.kind.toUpperCase()}-${safe}.pdf`
+  return `${labelled(sheet.kind === 'continuity' ? 'CL' : sheet.kind.toUpperCase(), sheetReference(sheet)).replace(/[^\w.-]+/g, '-')}.pdf`
 }
 
 /** A PDF download: attachment, never cached by a shared cache, never sniffed. */
