@@ -79,19 +79,25 @@ export async function updateDraft(db: Db, id: number, patch: ProcedurePatch, use
 }
 
 /** Approval: the supervisor signs the draft, which freezes it, and the earlier approved revision is superseded. */
-export async function approveProcedure(db: Db, id: number, version: number, user: SessionUser) {
+export async function approveProcedure(db: Db, id: number, version: number, user: SessionUser, handCheck?: string | null) {
   return db.transaction(async (tx) => {
     const [row] = await tx.select().from(procedures).where(eq(procedures.id, id)).for('update')
     if (!row) return null
     assertEditable(row, version)
     const { check } = await supportOf(tx, row, await supportingPqrIdsOf(tx, id))
-    if (check.blockers.length || !check.supported) {
+    const byHand = check.rulesMissing && check.violations.every(v => v.clause === 'rules')
+    if (check.blockers.length || (!check.supported && !byHand)) {
       const reasons = [...check.blockers, ...check.violations.map(v => `${v.clause}: ${v.text}`)]
       throw createError({
         statusCode: 422, statusMessage: 'Not supported',
         message: `${row.number} rev. ${row.revision} cannot be approved: ${reasons.join(' ')}`,
         data: { blockers: check.blockers, violations: check.violations },
       })
+    }
+    if (byHand) {
+      if (!handCheck || handCheck.length < 10) throw fieldError('handCheck', 'This code\'s support rules are not carried here: say how the ranges were checked against the PQRs (at least 10 characters)')
+      // The statement is part of what the signature covers.
+      await tx.update(procedures).set({ variables: { ...(row.variables as Record<string, unknown>), handCheck } }).where(eq(procedures.id, id))
     }
     const older = await tx.update(procedures).set({ status: 'superseded', updatedAt: new Date() })
       .where(and(eq(procedures.number, row.number), eq(procedures.status, 'approved'), ne(procedures.id, id)))
@@ -107,7 +113,7 @@ export async function approveProcedure(db: Db, id: number, version: number, user
       recordType: 'procedure', recordId: id, recordVersion: approved!.version, signerId: user.id, signerName: user.name,
       meaning: 'approved', sha256: sha256!, verifyCode: newVerifyCode(),
     }).returning()
-    await recordAudit(tx, { accountId: user.id, action: 'procedure.approve', recordType: 'procedure', recordId: id, before: { status: 'draft' }, after: { status: 'approved', sha256, superseded: older.map(o => o.id) } })
+    await recordAudit(tx, { accountId: user.id, action: 'procedure.approve', recordType: 'procedure', recordId: id, before: { status: 'draft' }, after: { status: 'approved', sha256, superseded: older.map(o => o.id), handCheck: byHand ? handCheck : undefined } })
     return { procedure: approved!, signature: signature!, superseded: older }
   })
 }

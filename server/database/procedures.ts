@@ -107,7 +107,7 @@ export async function procedureDetail(db: Db, row: ProcedureRow) {
     procedure: {
       id: row.id, number: row.number, revision: row.revision, title: row.title, code: row.code, edition: row.edition, status: row.status,
       unit: row.unit, process: row.process, transfer: row.transfer, version: row.version, approvedAt: row.approvedAt, createdAt: row.createdAt,
-      updatedAt: row.updatedAt, createdBy: author?.name ?? null, current,
+      updatedAt: row.updatedAt, createdBy: author?.name ?? null, current, handCheck: str(obj(row.variables).handCheck),
     },
     draft: draftOf(row, pqrIds),
     pqrs, support: check, signatures: signed, revisions,

@@ -1,4 +1,4 @@
-import { evaluate } from '../rules'
+import { codes, evaluate, getRuleSet } from '../rules'
 import { convertLength } from '../rules/units'
 import type { Basis, CodeId, Range, Unit } from '../rules/types'
 
@@ -58,6 +58,8 @@ export interface PqrQualifies {
 export interface SupportCheck {
   /** The rules could evaluate the WPS against its PQRs. */
   checked: boolean
+  /** The WPS's code carries no procedure-support rules here: its ranges are checked by hand. */
+  rulesMissing: boolean
   supported: boolean
   findings: SupportFinding[]
   violations: SupportFinding[]
@@ -125,9 +127,11 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
   const findings: SupportFinding[] = []
   const blockers: string[] = []
   const context = { code: wps.code, edition: wps.edition, unit: wps.unit }
+  const ruleSet = codes.includes(wps.code as CodeId) ? getRuleSet(wps.code as CodeId) : null
+  const rulesMissing = ruleSet !== null && !ruleSet.wpsSupport
   const result = (checked: boolean, caution: string | null): SupportCheck => {
     const violations = findings.filter(f => !f.met)
-    return { checked, supported: checked && violations.length === 0, findings, violations, blockers, qualifies: pqrs.map(p => pqrQualifies(p, context, wps.toughnessRequired ?? false)), caution }
+    return { checked, rulesMissing, supported: checked && violations.length === 0, findings, violations, blockers, qualifies: pqrs.map(p => pqrQualifies(p, context, wps.toughnessRequired ?? false)), caution }
   }
   if (pqrs.length === 0) {
     blockers.push('Pick at least one supporting PQR.')
@@ -144,6 +148,11 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
     findings.push({ met: false, clause: 'code', text: `${p.number} was qualified to ${p.code}; this WPS is written to ${wps.code}.`, basis: 'convention', field: 'supportingPqrIds' })
   }
   if (sameCode.length === 0) return result(false, null)
+  if (rulesMissing) {
+    findings.push({ met: false, clause: 'rules', basis: 'convention', field: null,
+      text: `Rootface carries no procedure-support rules for ${ruleSet!.title}: check each range against the PQRs by hand and say how when approving.` })
+    return result(false, null)
+  }
 
   const groove = wps.thickness?.groove ?? {}
   const fNumbers = [...new Set((wps.fillers ?? []).map(f => f.fNumber?.trim()).filter((f): f is string => !!f))]

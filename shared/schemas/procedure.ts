@@ -115,3 +115,9 @@ export function blankProcedureDraft(): ProcedureDraft {
     technique: { bead: 'stringer', ctwd: { ...emptyWindow }, cleaning: null },
   }
 }
+
+/** POST approve: the version being signed; for a code whose support rules this program does not carry, how the ranges were checked. */
+export const approveBodySchema = z.object({
+  version: versionSchema,
+  handCheck: optionalText('How the ranges were checked', 500).optional(),
+}).strict()

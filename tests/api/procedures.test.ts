@@ -222,6 +222,37 @@ describe('drafting, approving and revising', () => {
   })
 })
 
+describe('a code whose support rules are not carried', () => {
+  it('approves only with a statement of how the ranges were checked, which the signature covers', async () => {
+    const bases = await supervisor.json<{ id: number, specification: string, grade: string }[]>('/api/catalogue/base-metals')
+    const fillers = await supervisor.json<{ id: number, classification: string }[]>('/api/catalogue/filler-metals')
+    const pqr = await send(supervisor, 'POST', '/api/pqrs', {
+      number: 'PQR-D11', testDate: '2026-05-04', code: 'aws-d1.1', edition: '2020', unit: 'in', process: 'SMAW', transfer: null,
+      couponThickness: 0.375, depositThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id,
+      fillerMetalId: fillers.body.find(f => f.classification === 'E7018')!.id, actuals: {},
+    })
+    expect(pqr.status).toBe(201)
+    const results = await send(inspector, 'PUT', `/api/pqrs/${pqr.body.id}/results`, {
+      version: 1,
+      tensile: [1, 2].map(n => ({ label: `T${n}`, width: 0.75, thickness: 0.375, load: 19000, breakLocation: 'base metal' })),
+      bends: ['side', 'side', 'side', 'side'].map(type => ({ type, largestIndication: 0 })),
+    })
+    expect(results.status).toBe(200)
+    expect((await send(inspector, 'POST', `/api/pqrs/${pqr.body.id}/certify`, { version: results.body.version })).body.status).toBe('certified')
+    const w02 = await detail(supervisor, (await byNumber('KB-W02', 1)).id)
+    const created = await send(supervisor, 'POST', '/api/procedures', { ...w02.body.draft, number: 'KB-S11', code: 'aws-d1.1', edition: '2020', supportingPqrIds: [pqr.body.id] })
+    expect(created.status).toBe(201)
+    const { body } = await detail(supervisor, created.body.id)
+    expect(body.support).toMatchObject({ checked: false, supported: false, rulesMissing: true, blockers: [] })
+    const unstated = await send(supervisor, 'POST', `/api/procedures/${created.body.id}/approve`, { version: 1 })
+    expect(unstated.status).toBe(400)
+    expect((unstated.body as Errors).data!.fieldErrors.handCheck).toBeDefined()
+    const approved = await send(supervisor, 'POST', `/api/procedures/${created.body.id}/approve`, { version: 1, handCheck: 'Ranges checked by hand against the D1.1 procedure tables for PQR-D11' })
+    expect(approved.status).toBe(200)
+    expect((await detail(supervisor, created.body.id)).body.procedure.status).toBe('approved')
+  })
+})
+
 describe('production readings', () => {
   it('checks each reading against the window and computes heat input', async () => {
     const w01 = await byNumber('KB-W01', 0)

@@ -1,13 +1,13 @@
 import { idParamSchema } from '#shared/schemas/list'
-import { versionBodySchema } from '#shared/schemas/fields'
+import { approveBodySchema } from '#shared/schemas/procedure'
 import { approveProcedure } from '../../../database/procedure-writes'
 
 /** POST /api/procedures/:id/approve: sign and freeze a supported draft, superseding the earlier approved revision (supervisor) */
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
-  const { version } = await validBody(event, versionBodySchema)
-  const result = await approveProcedure(await useDb(), id, version, user)
+  const { version, handCheck } = await validBody(event, approveBodySchema)
+  const result = await approveProcedure(await useDb(), id, version, user, handCheck)
   if (!result) throw notFound('Procedure')
   const { procedure, signature, superseded } = result
   return {

@@ -67,7 +67,8 @@ describe('supportCheck: a WPS against its supporting PQRs', () => {
     const check = supportCheck(wps({ code: 'aws-d1.3', edition: '2018' }), [coupon({ code: 'aws-d1.3', edition: '2018' })])
     expect(check.checked).toBe(false)
     expect(check.supported).toBe(false)
-    expect(check.violations[0]!.text).toMatch(/no wps-support rules/)
+    expect(check.rulesMissing).toBe(true)
+    expect(check.violations[0]!.text).toMatch(/no procedure-support rules for AWS D1.3/)
   })
 
   it('a PQR of another code does not support the WPS', () => {
