@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm'
 import {
-  boolean, check, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
+  boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
 } from 'drizzle-orm/pg-core'
 
 // Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
@@ -233,6 +233,7 @@ export const customers = pgTable('customers', {
   id: serial('id').primaryKey(),
   name: text('name').notNull(),
   contact: text('contact'),
+  version: integer('version').notNull().default(1),
   createdAt: created(),
 }, t => [uniqueIndex('customers_name_key').on(t.name)])
 
@@ -243,6 +244,7 @@ export const projects = pgTable('projects', {
   name: text('name').notNull(),
   startsOn: date('starts_on', { mode: 'string' }).notNull(),
   endsOn: date('ends_on', { mode: 'string' }),
+  version: integer('version').notNull().default(1),
   createdAt: created(),
 }, t => [
   uniqueIndex('projects_number_key').on(t.number),
@@ -276,6 +278,8 @@ export const packets = pgTable('packets', {
   sha256: text('sha256'),
   error: text('error'),
   createdAt: created(),
+  // Touched as a build progresses; a build not touched for minutes was interrupted (its process stopped).
+  updatedAt: updated(),
 }, t => [check('packets_status_check', sql`${t.status} in ('queued', 'building', 'ready', 'failed')`)])
 
 export const signatures = pgTable('signatures', {
@@ -398,3 +402,51 @@ export const mailMessages = pgTable('mail_messages', {
   index('mail_messages_status_idx').on(t.status, t.createdAt),
   check('mail_messages_status_check', sql`${t.status} in ('queued', 'sent', 'failed')`),
 ])
+
+// The PDF of a finished packet, kept in the database so every app server behind a balancer can hand it out.
+const bytea = customType<{ data: Uint8Array, driverData: Uint8Array }>({ dataType: () => 'bytea' })
+export const packetFiles = pgTable('packet_files', {
+  packetId: integer('packet_id').primaryKey().references(() => packets.id, { onDelete: 'cascade' }),
+  content: bytea('content').notNull(),
+})
+
+// Sheets that are issued rather than signed (a welder's continuity log for a period): the hash of the content
+// as printed and the code of its QR, so the verification page can tell whether the log has changed since.
+export const issuedSheets = pgTable('issued_sheets', {
+  id: serial('id').primaryKey(),
+  kind: text('kind').notNull(),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  periodFrom: date('period_from', { mode: 'string' }).notNull(),
+  periodTo: date('period_to', { mode: 'string' }).notNull(),
+  sha256: text('sha256').notNull(),
+  verifyCode: text('verify_code').notNull(),
+  issuedBy: integer('issued_by').references(() => accounts.id),
+  issuerName: text('issuer_name').notNull(),
+  issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [
+  uniqueIndex('issued_sheets_verify_code_key').on(t.verifyCode),
+  index('issued_sheets_subject_idx').on(t.kind, t.welderId, t.periodFrom, t.periodTo, t.sha256),
+  check('issued_sheets_kind_check', sql`${t.kind} in ('continuity-log')`),
+  check('issued_sheets_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
+])
+
+// Where each welder stands per process, kept from the continuity chain (shared/qualification/process-standing.ts).
+// Triggers on welder_tests and continuity_entries mark a welder × process in standing_refresh; the next read recomputes it.
+export const processStandings = pgTable('process_standings', {
+  welderId: integer('welder_id').notNull().references(() => welders.id, { onDelete: 'cascade' }),
+  process: text('process').notNull(),
+  code: text('code').notNull(),
+  edition: text('edition').notNull(),
+  testDate: date('test_date', { mode: 'string' }).notNull(),
+  lastUse: date('last_use', { mode: 'string' }).notNull(),
+  lapsesOn: date('lapses_on', { mode: 'string' }).notNull(),
+  rule: text('rule').notNull(),
+}, t => [
+  primaryKey({ columns: [t.welderId, t.process] }),
+  index('process_standings_lapses_idx').on(t.lapsesOn),
+])
+
+export const standingRefresh = pgTable('standing_refresh', {
+  welderId: integer('welder_id').notNull(),
+  process: text('process').notNull(),
+}, t => [primaryKey({ columns: [t.welderId, t.process] })])

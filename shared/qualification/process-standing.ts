@@ -1,6 +1,6 @@
 import { differenceInCalendarDays } from 'date-fns'
 import { parseDay } from '../rules/continuity'
-import { mustEvaluate } from './evaluate'
+import { getRuleSet } from '../rules'
 import type { CodeId } from '../rules/types'
 
 export type Standing = 'current' | 'lapsing' | 'lapsed'
@@ -19,33 +19,55 @@ export interface ProcessStanding {
 
 export const lapsingSoonDays = 30
 
-/**
- * Where a welder stands for one process today. The most recent passed test starts the chain (QW-322.2(a)
- * renewal restores the process); each logged use keeps it alive only while it is still current, so a use
- * after the qualification lapsed does not revive it (QW-322.1(a)).
- */
-export function processStanding(input: {
+export interface ChainInput {
   process: string
   code: CodeId
   edition: string
   testDate: string
   uses: readonly string[]
-  today: string
-}): ProcessStanding {
-  const lapseAfter = (lastUse: string) => mustEvaluate<{ lapsesOn: string, rule: string }>(
-    input.code, 'continuity', 'in', input.edition, { lastUse, on: lastUse })
+}
+
+export interface Chain {
+  process: string
+  code: CodeId
+  edition: string
+  testDate: string
+  lastUse: string
+  lapsesOn: string
+  rule: string
+}
+
+/**
+ * The continuity chain of one process. The most recent passed test starts it (QW-322.2(a) renewal restores
+ * the process); each logged use keeps it alive only while it is still current, so a use after the
+ * qualification lapsed does not revive it (QW-322.1(a)). Uses after `until` (a future date) are not counted.
+ */
+export function continuityChain(input: ChainInput, until = '9999-12-31'): Chain {
+  // The rule function itself, not evaluate(): a chain may hold hundreds of uses.
+  const rules = getRuleSet(input.code)
+  const context = { code: input.code, edition: input.edition, unit: 'in' as const }
+  const lapseAfter = (lastUse: string) => rules.continuity({ lastUse, on: lastUse }, context)
   let lastUse = input.testDate
   let rule = lapseAfter(lastUse)
   for (const use of [...input.uses].sort()) {
     if (use <= lastUse) continue
-    if (use >= rule.lapsesOn || use > input.today) break
+    if (use >= rule.lapsesOn || use > until) break
     lastUse = use
     rule = lapseAfter(lastUse)
   }
-  const lapsesOn = rule.lapsesOn
-  const daysLeft = differenceInCalendarDays(parseDay(lapsesOn, 'lapsesOn'), parseDay(input.today, 'today'))
+  return { process: input.process, code: input.code, edition: input.edition, testDate: input.testDate, lastUse, lapsesOn: rule.lapsesOn, rule: rule.rule }
+}
+
+/** Where a chain stands on a day: days left until it lapses, and the word for it. */
+export function standingOn(chain: Chain, today: string): ProcessStanding {
+  const daysLeft = differenceInCalendarDays(parseDay(chain.lapsesOn, 'lapsesOn'), parseDay(today, 'today'))
   const standing: Standing = daysLeft <= 0 ? 'lapsed' : daysLeft <= lapsingSoonDays ? 'lapsing' : 'current'
-  return { process: input.process, code: input.code, edition: input.edition, testDate: input.testDate, lastUse, lapsesOn, daysLeft, standing, rule: rule.rule }
+  return { ...chain, daysLeft, standing }
+}
+
+/** Where a welder stands for one process today. */
+export function processStanding(input: ChainInput & { today: string }): ProcessStanding {
+  return standingOn(continuityChain(input, input.today), input.today)
 }
 
 export const standingWords: Record<Standing, string> = {

@@ -1,0 +1,186 @@
+// npm run bench: builds the app, fills (once) a large invented shop, starts the built server on a copy of it,
+// and prints one table: each operation's median and p95 latency and requests per second at 1 and 10
+// connections, beside its floor measured in the same run, and the target. Ratios hold; absolute times drift.
+import { spawn, spawnSync } from 'node:child_process'
+import { cpSync, existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join, resolve } from 'node:path'
+import { gzipSync } from 'node:zlib'
+import { addDays, format } from 'date-fns'
+import { sql } from 'drizzle-orm'
+import { openDatabase, type Db } from '../server/database/client'
+import { lapseListQuery } from '../server/database/standings'
+import { coverageCandidates } from '../server/database/coverage'
+import { type Client, freePort, signedIn } from '../tests/api/harness'
+
+const output = resolve('.output-bench')
+const largeDir = resolve(process.env.BENCH_DATA_DIR ?? '.data/large')
+const seconds = Number(process.env.BENCH_SECONDS ?? 4)
+const today = format(new Date(), 'yyyy-MM-dd')
+const in30 = format(addDays(new Date(), 30), 'yyyy-MM-dd')
+
+function run(label: string, command: string, args: string[], env: Record<string, string> = {}) {
+  const started = Date.now()
+  const result = spawnSync(command, args, { stdio: ['ignore', 'ignore', 'inherit'], env: { ...process.env, ...env } })
+  if (result.status !== 0) throw new Error(`${label} failed`)
+  console.error(`${label}: ${((Date.now() - started) / 1000).toFixed(1)} s`)
+}
+
+interface Stats { median: number, p95: number, rps1: number, rps10: number }
+const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))]!
+
+/** `connections` workers repeat `once` for the given time; latencies in ms. */
+async function load(once: () => Promise<void>, connections: number, forSeconds: number) {
+  const latencies: number[] = []
+  const until = performance.now() + forSeconds * 1000
+  await Promise.all(Array.from({ length: connections }, async () => {
+    while (performance.now() < until) {
+      const started = performance.now()
+      await once()
+      latencies.push(performance.now() - started)
+    }
+  }))
+  latencies.sort((a, b) => a - b)
+  return { latencies, rps: latencies.length / forSeconds }
+}
+
+async function measure(once: () => Promise<void>, options: { warmup?: number, connections10?: boolean, forSeconds?: number } = {}): Promise<Stats> {
+  for (let i = 0; i < (options.warmup ?? 20); i++) await once()
+  const single = await load(once, 1, options.forSeconds ?? seconds)
+  const ten = options.connections10 === false ? { rps: Number.NaN } : await load(once, 10, options.forSeconds ?? seconds)
+  return { median: percentile(single.latencies, 0.5), p95: percentile(single.latencies, 0.95), rps1: single.rps, rps10: ten.rps }
+}
+
+function get(client: Client, path: string, expectType?: string) {
+  return async () => {
+    const res = await client.fetch(path)
+    const body = await res.arrayBuffer()
+    if (res.status !== 200) throw new Error(`${path}: ${res.status} ${Buffer.from(body).toString().slice(0, 200)}`)
+    if (expectType && !res.headers.get('content-type')?.includes(expectType)) throw new Error(`${path}: ${res.headers.get('content-type')}`)
+  }
+}
+
+async function sqlFloors(db: Db) {
+  return {
+    lapses: await measure(async () => { await lapseListQuery(db, today, in30) }, { connections10: false }),
+    coverage: await measure(async () => { await coverageCandidates(db, 'GMAW') }, { connections10: false }),
+  }
+}
+
+async function firstLoadJs(client: Client, path: string) {
+  const html = await (await client.fetch(path)).text()
+  const files = new Set([...html.matchAll(/<(?:script[^>]*src|link[^>]*rel="modulepreload"[^>]*href)="([^"]+\.js)"/g)].map(m => m[1]!))
+  let bytes = 0
+  for (const file of files) bytes += gzipSync(readFileSync(join(output, 'public', file))).length
+  return { bytes, files: files.size }
+}
+
+function lighthouse(url: string, cookie: string) {
+  const result = spawnSync(process.execPath, ['node_modules/lighthouse/cli/index.js', url, '--quiet', '--output=json', '--only-categories=performance',
+    '--form-factor=mobile', `--extra-headers=${JSON.stringify({ Cookie: cookie })}`,
+    '--chrome-flags=--headless --no-sandbox --disable-gpu --disable-background-networking --disable-component-update --disable-sync --no-first-run'],
+  { env: { ...process.env, CHROME_PATH: process.env.CHROME_PATH ?? '/usr/bin/chromium' }, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024, timeout: 180_000 })
+  try {
+    return Math.round(JSON.parse(result.stdout).categories.performance.score * 100)
+  }
+  catch {
+    return Number.NaN
+  }
+}
+
+async function packetSeconds(client: Client, projectId: number) {
+  const started = performance.now()
+  const job = await client.json<{ id: number }>('/api/packets', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ projectId }) })
+  if (job.status !== 202) throw new Error(`packet: ${job.status} ${JSON.stringify(job.body)}`)
+  for (;;) {
+    const state = await client.json<{ status: string, pageCount: number | null, error: string | null }>(`/api/packets/${job.body.id}`)
+    if (state.body.status === 'ready') break
+    if (state.body.status === 'failed') throw new Error(`packet failed: ${state.body.error}`)
+    await new Promise(r => setTimeout(r, 50))
+  }
+  const file = await client.fetch(`/api/packets/${job.body.id}/file`)
+  const pdf = Buffer.from(await file.arrayBuffer())
+  const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length
+  return { seconds: (performance.now() - started) / 1000, pages }
+}
+
+async function main() {
+  run('build', 'npx', ['nuxt', 'build'], { NUXT_BUILD_DIR: '.nuxt-bench', NUXT_OUTPUT_DIR: output })
+  if (!existsSync(join(largeDir, 'db'))) run('seed:large', process.execPath, ['node_modules/tsx/dist/cli.mjs', 'scripts/seed-large.ts'], { NUXT_DATA_DIR: join(largeDir, 'db') })
+  const work = mkdtempSync(join(tmpdir(), 'rootface-bench-'))
+  cpSync(join(largeDir, 'db'), join(work, 'db'), { recursive: true })
+
+  // The floor of the two queries: the same SQL through the driver, before the server holds the directory.
+  const direct = await openDatabase({ dataDir: join(work, 'db'), holder: 'npm run bench' })
+  const counts = (await direct.db.execute<{ welders: number, tests: number, continuity: number }>(sql`select
+    (select count(*) from welders)::int as welders, (select count(*) from welder_tests)::int as tests, (select count(*) from continuity_entries)::int as continuity`)).rows[0]!
+  const floors = await sqlFloors(direct.db)
+  const packetProject = (await direct.db.execute<{ id: number }>(sql`select id from projects where number = 'LP-0001'`)).rows[0]?.id
+  const sheetTest = (await direct.db.execute<{ id: number }>(sql`select id from welder_tests where status = 'certified' order by id limit 1`)).rows[0]?.id
+  await direct.close()
+
+  const port = await freePort()
+  const base = `http://127.0.0.1:${port}`
+  const server = spawn(process.execPath, [join(output, 'server/index.mjs')], {
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: join(work, 'db'), DATABASE_URL: '', AUTH_ORIGIN: `${base}/api/auth`, AUTH_SECRET: 'bench-secret-for-rootface' },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  })
+  try {
+    for (let i = 0; ; i++) {
+      try {
+        if ((await fetch(`${base}/api/health`)).ok) break
+      }
+      catch { /* not yet */ }
+      if (i > 600) throw new Error('server did not start')
+      await new Promise(r => setTimeout(r, 100))
+    }
+    const supervisor = await signedIn(base, 'supervisor')
+    const welder = await signedIn(base, 'welder')
+    const joint = '/api/coverage?process=GMAW&pNumber=1&thickness=0.25&form=plate&weld=groove&position=V&fNumber=6'
+
+    const rows: { op: string, stats: Stats, floorName: string, floor: Stats, target: string, ok: (s: Stats, f: Stats) => boolean }[] = []
+    const push = (op: string, stats: Stats, floorName: string, floor: Stats, target: string, ok: (s: Stats, f: Stats) => boolean) => {
+      rows.push({ op, stats, floorName, floor, target, ok })
+      console.error(`measured ${op}`)
+    }
+    const health = await measure(get(supervisor, '/api/health'))
+    push('who can weld this joint? (GET /api/coverage)', await measure(get(supervisor, joint)), 'its SQL alone', floors.coverage, 'p95 ≤ 25 ms and ≤ 2× SQL', (s, f) => s.p95 <= 25 && s.p95 <= 2 * f.p95)
+    push('lapse list, next 30 days (GET /api/continuity/lapses)', await measure(get(supervisor, `/api/continuity/lapses?days=30`)), 'its SQL alone', floors.lapses, 'p95 ≤ 25 ms and ≤ 2× SQL', (s, f) => s.p95 <= 25 && s.p95 <= 2 * f.p95)
+    const bareSupervisor = await measure(get(supervisor, '/about', 'text/html'))
+    push('dashboard, server-rendered, signed in', await measure(get(supervisor, '/dashboard', 'text/html')), 'bare page /about', bareSupervisor, 'median ≤ 1.5× bare page', (s, f) => s.median <= 1.5 * f.median)
+    const bareWelder = await measure(get(welder, '/about', 'text/html'))
+    push('welder page /me, server-rendered, signed in', await measure(get(welder, '/me', 'text/html')), 'bare page /about', bareWelder, 'median ≤ 1.5× bare page', (s, f) => s.median <= 1.5 * f.median)
+    push('welder list, 50 rows, sorted and filtered', await measure(get(supervisor, '/api/welders?pageSize=50&sort=name&dir=asc&status=active&q=ar')), 'GET /api/health', health, '(no target)', () => true)
+    if (sheetTest) {
+      push('one WPQ sheet (PDF)', await measure(get(supervisor, `/api/sheets/tests/${sheetTest}`, 'application/pdf'), { warmup: 3, forSeconds: 3 }), 'GET /api/health', health, 'median ≤ 150 ms', s => s.median <= 150)
+    }
+    const packet = packetProject ? await packetSeconds(supervisor, packetProject).catch((e: Error) => ({ seconds: Number.NaN, pages: 0, error: e.message })) : null
+    const js = await firstLoadJs(welder, '/me')
+    const cookie = (c: Client) => c.cookieHeader
+    const scores = process.env.BENCH_LIGHTHOUSE === 'false'
+      ? { me: Number.NaN, dashboard: Number.NaN }
+      : { me: lighthouse(`${base}/me`, cookie(welder)), dashboard: lighthouse(`${base}/dashboard`, cookie(supervisor)) }
+
+    const f = (n: number) => (Number.isNaN(n) ? '—' : n < 10 ? n.toFixed(2) : n.toFixed(1))
+    const lines = [
+      `Rootface bench, ${new Date().toISOString().slice(0, 16)}Z, ${counts.welders} welders, ${counts.tests} welder tests, ${counts.continuity} continuity entries; ${seconds} s per run`,
+      '',
+      '| operation | median ms | p95 ms | req/s @1 | req/s @10 | floor | floor median | floor p95 | target | met |',
+      '| --- | ---: | ---: | ---: | ---: | --- | ---: | ---: | --- | --- |',
+      ...rows.map(r => `| ${r.op} | ${f(r.stats.median)} | ${f(r.stats.p95)} | ${f(r.stats.rps1)} | ${f(r.stats.rps10)} | ${r.floorName} | ${f(r.floor.median)} | ${f(r.floor.p95)} | ${r.target} | ${r.ok(r.stats, r.floor) ? 'yes' : 'NO'} |`),
+      packet ? `| packet PDF, ${packet.pages} pages (build + download) | ${f(packet.seconds * 1000)} | | | | | | | ≤ 3 s for 100 sheets | ${packet.seconds <= 3 ? 'yes' : 'NO'} |` : '| packet | not measured | | | | | | | | |',
+      `| welder page first-load JavaScript, ${js.files} files | ${(js.bytes / 1024).toFixed(1)} KB gzip | | | | | | | ≤ 200 KB gzip | ${js.bytes <= 200 * 1024 ? 'yes' : 'NO'} |`,
+      `| Lighthouse performance, mobile: /me | ${f(scores.me)} | | | | | | | ≥ 95 | ${scores.me >= 95 ? 'yes' : 'NO'} |`,
+      `| Lighthouse performance, mobile: /dashboard | ${f(scores.dashboard)} | | | | | | | ≥ 95 | ${scores.dashboard >= 95 ? 'yes' : 'NO'} |`,
+    ]
+    console.log(lines.join('\n'))
+    if (process.env.BENCH_WRITE) writeFileSync(process.env.BENCH_WRITE, `${lines.join('\n')}\n`)
+  }
+  finally {
+    server.kill('SIGTERM')
+    await new Promise(r => server.once('exit', r))
+    rmSync(work, { recursive: true, force: true })
+  }
+}
+
+await main()
