@@ -77,7 +77,8 @@ export default defineNuxtConfig({
     sessionRefresh: { enablePeriodically: false, enableOnWindowFocus: false },
   },
   // Pages and JSON answers are gzipped when the browser accepts it (static assets are pre-compressed by Nitro).
-  compression: { threshold: 1024 },
+  // Attachments are PDFs and images, compressed already: served as stored.
+  compression: { threshold: 1024, exclude: ['/_nuxt', '/__nuxt', '/api/attachments'] },
   eslint: { config: { stylistic: true } },
   // Security headers (CSP with per-request nonces, no inline scripts), size limits; sign-in slowing is our own.
   security: {

@@ -42,9 +42,10 @@ describe('files in an S3-compatible bucket', () => {
 
     const listed = await client.send(new ListObjectsV2Command({ Bucket: 'shop-files' }))
     const keys = (listed.Contents ?? []).map(o => o.Key!)
-    expect(keys).toHaveLength(2)
+    expect(keys).toHaveLength(3) // the PDF, the PNG and the PNG's thumbnail
     expect(keys.every(k => k.startsWith(`rootface/welder-test/${test.id}/`))).toBe(true)
-    const stored = await Promise.all(keys.map(async Key => sha(await (await client.send(new GetObjectCommand({ Bucket: 'shop-files', Key }))).Body!.transformToByteArray())))
+    expect(keys.filter(k => k.endsWith('.thumbnail'))).toHaveLength(1)
+    const stored = await Promise.all(keys.filter(k => !k.endsWith('.thumbnail')).map(async Key => sha(await (await client.send(new GetObjectCommand({ Bucket: 'shop-files', Key }))).Body!.transformToByteArray())))
     expect(stored.sort()).toEqual([sha(samplePdf), sha(samplePng)].sort())
 
     const download = await supervisor.fetch(`/api/attachments/${res.body.id}`)
@@ -52,6 +53,6 @@ describe('files in an S3-compatible bucket', () => {
     expect(sha(new Uint8Array(await download.arrayBuffer()))).toBe(sha(samplePdf))
     expect(existsSync(join(server.dataDir, 'files'))).toBe(false)
 
-    expect((await supervisor.fetch(`/api/attachments/${photo.body.id}/preview`)).status).toBe(200)
+    expect((await supervisor.fetch(`/api/attachments/${photo.body.id}/thumbnail`)).status).toBe(200)
   })
 })

@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto'
 import { existsSync, readdirSync } from 'node:fs'
 import { join } from 'node:path'
+import sharp from 'sharp'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { Client, signedIn, startServer, type TestServer } from './harness'
 import { samplePdf, samplePng, upload } from './support/files'
@@ -15,7 +16,11 @@ const as = {} as Record<'supervisor' | 'inspector' | 'welder' | 'auditor', Clien
 let tests: TestRow[]
 const testOf = (stamp: string, status = 'certified') => tests.find(t => t.welderStamp === stamp && t.status === status)!
 
+// 1600 × 1200 stored with EXIF orientation 6 (rotate 90° clockwise to view): shown upright it is 1200 wide, 1600 high.
+let photoBytes: Buffer
+
 beforeAll(async () => {
+  photoBytes = await sharp({ create: { width: 1600, height: 1200, channels: 3, background: '#7a8a90' } }).jpeg().withMetadata({ orientation: 6 }).toBuffer()
   server = await startServer()
   for (const role of ['supervisor', 'inspector', 'welder', 'auditor'] as const) as[role] = await signedIn(server.url, role)
   tests = (await as.supervisor.json<{ items: TestRow[] }>('/api/tests?pageSize=200')).body.items
@@ -56,6 +61,9 @@ describe('upload', () => {
     expect(claimedPdf.body.message).toContain('claims to be PDF but its content is PNG image')
     const renamed = await upload(as.supervisor, { recordType: 'welder-test', recordId, kind: 'other' }, { name: 'photo.jpg', type: 'application/octet-stream', bytes: samplePng })
     expect(renamed.status).toBe(415)
+    const broken = await upload(as.supervisor, { recordType: 'welder-test', recordId, kind: 'other' }, { name: 'broken.png', type: 'image/png', bytes: Buffer.concat([samplePng.subarray(0, 8), Buffer.from('not really an image at all')]) })
+    expect(broken.status).toBe(415)
+    expect(broken.body.message).toContain('cannot be read')
     const script = await upload(as.supervisor, { recordType: 'welder-test', recordId, kind: 'other' }, { name: 'notes.pdf', type: 'application/pdf', bytes: Buffer.from('<script>alert(1)</script>') })
     expect(script.status).toBe(415)
     expect(script.body.message).toContain('Only PDF, PNG, JPEG or WebP')
@@ -70,7 +78,7 @@ describe('upload', () => {
     expect(windows.status).toBe(201)
     expect(windows.body.fileName).toBe('bootfdp.exe.pdf')
     expect(existsSync(join(server.dataDir, 'etc'))).toBe(false)
-    expect(readdirSync(join(server.dataDir, 'files', 'welder-test', String(recordId))).every(n => /^[\da-f-]{36}$/.test(n))).toBe(true)
+    expect(readdirSync(join(server.dataDir, 'files', 'welder-test', String(recordId))).every(n => /^[\da-f-]{36}(\.thumbnail)?$/.test(n))).toBe(true)
   })
 
   it('checks the form fields and the roles', async () => {
@@ -125,12 +133,24 @@ describe('download', () => {
     expect((await new Client(server.url).fetch(`/api/attachments/${own}`)).status).toBe(401)
   })
 
-  it('images have an inline preview for the thumbnail; PDFs do not', async () => {
-    const res = await as.supervisor.fetch(`/api/attachments/${photo}/preview`)
+  it('images have a thumbnail, inline; PDFs do not', async () => {
+    const res = await as.supervisor.fetch(`/api/attachments/${photo}/thumbnail`)
     expect(res.status).toBe(200)
+    expect(res.headers.get('content-type')).toBe('image/webp')
     expect(res.headers.get('content-disposition')).toMatch(/^inline;/)
-    expect((await as.supervisor.fetch(`/api/attachments/${other}/preview`)).status).toBe(404)
-    expect((await as.welder.fetch(`/api/attachments/${other}/preview`)).status).toBe(404)
+    expect((await as.supervisor.fetch(`/api/attachments/${other}/thumbnail`)).status).toBe(404)
+    expect((await as.welder.fetch(`/api/attachments/${other}/thumbnail`)).status).toBe(404)
+  })
+
+  it('a large photo gets a small upright thumbnail; the download stays the original', async () => {
+    const up = await upload(as.inspector, { recordType: 'welder-test', recordId: testOf('KB-07').id, kind: 'coupon-photo' }, { name: 'IMG_2231.JPG', type: 'image/jpeg', bytes: photoBytes })
+    expect(up.status).toBe(201)
+    const thumb = Buffer.from(await (await as.inspector.fetch(`/api/attachments/${up.body.id}/thumbnail`)).arrayBuffer())
+    const meta = await sharp(thumb).metadata()
+    expect(meta).toMatchObject({ format: 'webp', width: 240, height: 320 })
+    expect(thumb.length).toBeLessThan(photoBytes.length / 4)
+    const original = Buffer.from(await (await as.inspector.fetch(`/api/attachments/${up.body.id}`)).arrayBuffer())
+    expect(sha(original)).toBe(sha(photoBytes))
   })
 })
 

@@ -18,7 +18,9 @@ export default defineEventHandler(async (event) => {
     const { storageKey: _key, ...before } = row
     await recordAudit(tx, { accountId: user.id, action: 'detach', recordType: type, recordId: row.recordId, before })
   })
-  await removeStoredFile(row.storageKey).catch((error: unknown) => console.error('[rootface] could not remove a stored file', row.storageKey, error))
+  for (const key of [row.storageKey, thumbnailKey(row.storageKey)]) {
+    await removeStoredFile(key).catch((error: unknown) => console.error('[rootface] could not remove a stored file', key, error))
+  }
   setResponseStatus(event, 204)
   return null
 })

@@ -12,7 +12,6 @@ export default defineEventHandler(async (event) => {
   if (!data) throw createError({ statusCode: 410, statusMessage: 'File missing', message: 'The stored file is missing; tell your quality manager' })
   setResponseHeaders(event, {
     'content-type': row.contentType,
-    'content-length': data.length,
     'content-disposition': contentDisposition('attachment', row.fileName),
     'x-content-type-options': 'nosniff',
     'cache-control': 'private, no-store',

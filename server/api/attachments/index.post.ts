@@ -3,7 +3,7 @@ import { and, eq } from 'drizzle-orm'
 import { attachments } from '../../database/schema'
 import { attachmentUploadSchema } from '#shared/schemas/attachment'
 import {
-  claimedContentType, contentTypeWords, detectContentType, displayFileName, maxAttachmentBytes, type AttachmentContentType,
+  claimedContentType, contentTypeWords, detectContentType, displayFileName, isImageType, maxAttachmentBytes, type AttachmentContentType,
 } from '#shared/attachments/file-rules'
 
 // Room for the multipart boundaries and the form fields around the file.
@@ -60,9 +60,21 @@ export default defineEventHandler(async (event) => {
     .where(and(eq(attachments.recordType, owner.recordType), eq(attachments.recordId, owner.recordId), eq(attachments.sha256, sha256))).limit(1)
   if (same) throw conflict(`This file is already attached as ${same.fileName}`)
 
+  // An image must decode as what its first bytes say; its thumbnail is made now, once.
+  let thumbnail: Buffer | null = null
+  if (isImageType(detected)) {
+    try {
+      thumbnail = await makeThumbnail(file.data)
+    }
+    catch {
+      throw refuse(415, 'file', `The file starts like a ${contentTypeWords[detected]} but cannot be read as one`)
+    }
+  }
+
   const fileName = displayFileName(file.filename, detected)
   const storageKey = `${owner.recordType}:${owner.recordId}:${randomUUID()}`
   await putStoredFile(storageKey, file.data, detected)
+  if (thumbnail) await putStoredFile(thumbnailKey(storageKey), thumbnail, 'image/webp')
   try {
     const row = await db.transaction(async (tx) => {
       const [created] = await tx.insert(attachments).values({
@@ -78,6 +90,7 @@ export default defineEventHandler(async (event) => {
   }
   catch (error) {
     await removeStoredFile(storageKey).catch(() => {})
+    if (thumbnail) await removeStoredFile(thumbnailKey(storageKey)).catch(() => {})
     throw error
   }
 })

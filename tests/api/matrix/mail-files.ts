@@ -20,5 +20,5 @@ export const entries: MatrixEntries = {
   'POST /api/attachments': { expect: [401, 400, 400, 403, 403] },
   'GET /api/attachments/[id]': { url: '/api/attachments/999999', expect: [401, 404, 404, 404, 404] },
   'DELETE /api/attachments/[id]': { url: '/api/attachments/999999', expect: [401, 404, 404, 403, 403] },
-  'GET /api/attachments/[id]/preview': { url: '/api/attachments/999999/preview', expect: [401, 404, 404, 404, 404] },
+  'GET /api/attachments/[id]/thumbnail': { url: '/api/attachments/999999/thumbnail', expect: [401, 404, 404, 404, 404] },
 }

@@ -1,9 +1,8 @@
 import type { Client } from '../harness'
 
-// Small real files for upload tests: a 1×1 PNG, a one-page PDF, a JPEG and a WebP header.
+// Small real files for upload tests: a 1×1 PNG and a one-page PDF.
 export const samplePng = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64')
 export const samplePdf = Buffer.from('%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\n2 0 obj<</Type/Pages/Kids[3 0 R]/Count 1>>endobj\n3 0 obj<</Type/Page/Parent 2 0 R/MediaBox[0 0 612 792]>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n', 'latin1')
-export const sampleJpeg = Buffer.from([0xFF, 0xD8, 0xFF, 0xE0, 0x00, 0x10, 0x4A, 0x46, 0x49, 0x46, 0x00, 0x01, 0xFF, 0xD9])
 
 export interface Uploaded { id: number, fileName: string, contentType: string, size: number, sha256: string, kind: string }
 
