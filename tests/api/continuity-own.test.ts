@@ -26,7 +26,9 @@ afterAll(async () => {
 describe('welders logging their own continuity (shop setting on)', () => {
   it('a welder logs their own use, but another welder\'s is a 404 and bulk or import stays with staff', async () => {
     const welder = await signedIn(server.url, 'welder')
-    const own = (await welder.json<{ welder: { id: number } }>('/api/me/qualifications')).body.welder.id
+    const me = await welder.json<{ welder: { id: number }, logsOwnContinuity: boolean }>('/api/me/qualifications')
+    expect(me.body.logsOwnContinuity).toBe(true)
+    const own = me.body.welder.id
     const yesterday = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10)
     const post = (path: string, body: unknown) => welder.json(path, { method: 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json' } })
     expect((await post('/api/continuity', { welderId: own, process: 'GMAW', weldedOn: yesterday, reference: 'own log' })).status).toBe(201)

@@ -12,8 +12,9 @@ afterAll(async () => server?.stop())
 
 describe('the welder\'s own view', () => {
   it('lists qualifications in plain words, days left and the approved WPSs of current processes', async () => {
-    const res = await welder.json<{ standings: { process: string, standing: string, daysLeft: number }[], tests: { status: string, covers: string[] }[], procedures: { process: string }[] }>('/api/me/qualifications')
+    const res = await welder.json<{ standings: { process: string, standing: string, daysLeft: number }[], tests: { status: string, covers: string[] }[], procedures: { process: string }[], logsOwnContinuity: boolean }>('/api/me/qualifications')
     expect(res.status).toBe(200)
+    expect(res.body.logsOwnContinuity).toBe(false) // the demo shop keeps continuity with its staff
     const certified = res.body.tests.filter(t => t.status === 'certified')
     expect(certified.length).toBeGreaterThan(0)
     expect(certified.every(t => t.covers.length > 0)).toBe(true)

@@ -1,3 +1,4 @@
+import { welderLogsOwnContinuity } from '../../database/continuity'
 import { ownQualifications } from '../../database/me'
 import { renewalOf } from '#shared/qualification/renewal'
 
@@ -10,7 +11,7 @@ export default defineEventHandler(async (event) => {
   const own = await ownQualifications(db, welderId, standings)
   if (!own) throw notFound('Roster entry')
   return {
-    ...own, today: todayIso(),
+    ...own, today: todayIso(), logsOwnContinuity: await welderLogsOwnContinuity(db),
     standings: standings.map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),
   }
 })
