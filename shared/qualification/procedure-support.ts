@@ -188,7 +188,7 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
       findings.push({ ...r, field: fieldOf(r.clause) })
     }
   }
-  if (wps.code === 'asme-ix') findings.push(...pNumberFindings(wps, sameCode))
+  if (wps.code === 'asme-ix') findings.push(...pNumberFindings(wps, sameCode), ...unlimitedFindings(wps))
   return result(true, caution)
 }
 
@@ -211,6 +211,22 @@ function pNumberFindings(wps: SupportWps, pqrs: SupportPqr[]): SupportFinding[] 
       ? `P-No. ${a} to P-No. ${b}: qualified by a PQR welded on P-No. ${welded.join(', ')}.`
       : `P-No. ${a} to P-No. ${b} is outside what the PQRs qualify (welded on P-No. ${welded.join(', ')}).`,
   }]
+}
+
+/**
+ * Ranges a groove-weld PQR does not limit for a procedure (from memory): QW-202.2(c) lets it qualify fillet welds of
+ * all sizes on all base-metal thicknesses, and QW-403 sets no pipe-diameter limit for procedures (QW-452 is for welders).
+ */
+function unlimitedFindings(wps: SupportWps & { thickness?: { fillet?: Partial<Range> }, diameter?: Partial<Range> }): SupportFinding[] {
+  const out: SupportFinding[] = []
+  const given = (r?: Partial<Range>) => !!r && (isNumber(r.min) || isNumber(r.max))
+  if (given(wps.thickness?.fillet)) {
+    out.push({ met: true, clause: 'QW-202.2(c)', basis: 'memory', field: 'thickness.fillet', text: 'Fillet welds: a groove-weld PQR qualifies all fillet sizes on all base-metal thicknesses.' })
+  }
+  if (given(wps.diameter)) {
+    out.push({ met: true, clause: 'QW-403', basis: 'memory', field: 'diameter', text: 'Pipe diameter is not a procedure variable: any diameter the WPS states is within support.' })
+  }
+  return out
 }
 
 /** The findings about one form field (and the fields under it). */

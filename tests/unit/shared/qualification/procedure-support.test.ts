@@ -84,3 +84,12 @@ describe('pqrQualifies', () => {
     expect(q.baseMetal).toEqual({ min: 0.1875, max: 1.5 })
   })
 })
+
+describe('ranges a groove PQR does not limit (from memory)', () => {
+  it('fillet thickness (QW-202.2(c)) and pipe diameter (QW-403) are noted as within support', () => {
+    const draft = { ...wps(), thickness: { groove: { min: 0.0625, max: 0.1479 }, fillet: { min: 0.0625, max: 1 } }, diameter: { min: 2, max: null } }
+    const check = supportCheck(draft, [coupon()])
+    expect(check.supported).toBe(true)
+    expect(check.findings.filter(f => f.met).map(f => f.clause)).toEqual(expect.arrayContaining(['QW-202.2(c)', 'QW-403']))
+  })
+})
