@@ -1,15 +1,18 @@
 import { sql } from 'drizzle-orm'
 import type { Db } from './client'
 import type { CandidateRow, ProcedureRow, TestRow } from '../../shared/qualification/joint-coverage'
+import type { CodeId } from '../../shared/rules/types'
+import { refreshStandings } from './standings'
 
 type Rows<T> = { rows: T[] }
 
 /**
- * The candidates for "who can weld this joint?": the approved WPSs of the process, every certified test of it by an
- * active welder (flat rows, newest first), and each such welder's continuity dates after their newest test (the only
- * uses that can extend the chain). Flat rows, no per-row JSON: at 2,000 welders building JSON cost more than the scan.
+ * The candidates for "who can weld this joint?": the approved WPSs of the process, and every certified test of it by an
+ * active welder (flat rows, newest first) joined with that welder's kept standing for the process (process_standings,
+ * brought up to date first), so continuity is not re-read here. Flat rows, no per-row JSON.
  */
 export async function coverageCandidates(db: Db, process: string): Promise<{ procedures: ProcedureRow[], welders: CandidateRow[] }> {
+  await refreshStandings(db)
   const procedures = await db.execute(sql`
     select id, number, revision, title, code, edition, unit, process, transfer, p_number_a, p_number_b,
            thickness_min, thickness_max, diameter_min, positions, f_numbers
@@ -17,26 +20,21 @@ export async function coverageCandidates(db: Db, process: string): Promise<{ pro
   const tests = await db.execute(sql`
     select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, t.process, t.transfer, t.form, t.weld,
            t.coupon_thickness, t.deposit_thickness, t.layers, t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions,
-           w.name, w.stamp
-    from welder_tests t join welders w on w.id = t.welder_id
+           w.name, w.stamp, s.code as chain_code, s.edition as chain_edition, s.test_date::text as chain_test_date,
+           s.last_use::text as chain_last_use, s.lapses_on::text as chain_lapses_on, s.rule as chain_rule
+    from welder_tests t
+      join welders w on w.id = t.welder_id
+      join process_standings s on s.welder_id = t.welder_id and s.process = t.process
     where t.status = 'certified' and t.process = ${process} and w.status = 'active'
-    order by w.stamp, t.test_date desc, t.id desc`) as unknown as Rows<TestRow & { welder_id: number, name: string, stamp: string }>
-  const uses = await db.execute(sql`
-    with newest as (
-      select t.welder_id, max(t.test_date) as d from welder_tests t join welders w on w.id = t.welder_id
-      where t.status = 'certified' and t.process = ${process} and w.status = 'active' group by t.welder_id
-    )
-    select n.welder_id, array_agg(c.welded_on::text order by c.welded_on) as uses
-    from newest n join continuity_entries c on c.welder_id = n.welder_id and c.process = ${process} and c.welded_on > n.d
-    group by n.welder_id`) as unknown as Rows<{ welder_id: number, uses: string[] | string }>
+    order by w.stamp, t.test_date desc, t.id desc`) as unknown as Rows<TestRow & Record<'name' | 'stamp' | `chain_${'code' | 'edition' | 'test_date' | 'last_use' | 'lapses_on' | 'rule'}`, string> & { welder_id: number }>
 
-  const usesOf = new Map(uses.rows.map(u => [Number(u.welder_id), parseArray(u.uses)]))
   const welders = new Map<number, CandidateRow>()
-  for (const { welder_id: welderId, name, stamp, ...test } of tests.rows) {
+  for (const row of tests.rows) {
+    const { welder_id: welderId, name, stamp, chain_code: code, chain_edition: edition, chain_test_date: testDate, chain_last_use: lastUse, chain_lapses_on: lapsesOn, chain_rule: rule, ...test } = row
     const id = Number(welderId)
-    const row = welders.get(id) ?? { id, name, stamp, tests: [], uses: usesOf.get(id) ?? [] }
-    row.tests.push({ ...test, positions: parseArray(test.positions) })
-    welders.set(id, row)
+    const candidate = welders.get(id) ?? { id, name, stamp, tests: [], chain: { process, code: code as CodeId, edition, testDate, lastUse, lapsesOn, rule } }
+    candidate.tests.push({ ...test, positions: parseArray(test.positions) })
+    welders.set(id, candidate)
   }
   return { procedures: procedures.rows.map(p => ({ ...p, positions: parseArray(p.positions), f_numbers: parseArray(p.f_numbers) })), welders: [...welders.values()] }
 }

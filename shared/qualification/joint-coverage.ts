@@ -3,7 +3,7 @@ import type { ProductionWeld, WelderTestInput } from '../rules/inputs'
 import type { CoverReason } from '../rules/results'
 import type { CodeId, Unit } from '../rules/types'
 import { convertLength } from '../rules/units'
-import { processStanding } from './process-standing'
+import { standingOn, type Chain } from './process-standing'
 import { procedureCovers } from './wps-coverage'
 import { welderRangesInput } from './test-ranges'
 import type { Joint } from '../schemas/coverage'
@@ -46,7 +46,8 @@ export interface TestRow {
   backing: boolean
   positions: string[]
 }
-export interface CandidateRow { id: number, name: string, stamp: string, tests: TestRow[], uses: string[] }
+/** A welder with their certified tests of the process and their continuity chain for it (kept per welder and process by the server). */
+export interface CandidateRow { id: number, name: string, stamp: string, tests: TestRow[], chain: Chain }
 
 export type ResolvedJoint = Omit<Joint, 'gauge'> & { thickness?: number, gaugeNote?: string }
 
@@ -112,8 +113,7 @@ export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: 
     return verdict
   }
   return rows.map((w) => {
-    const newest = w.tests[0]!
-    const standing = processStanding({ process: newest.process, code: newest.code as CodeId, edition: newest.edition, testDate: newest.test_date, uses: w.uses, today })
+    const standing = standingOn(w.chain, today)
     const judged = w.tests.map(t => ({ id: t.id, ...judge(t) }))
     const covering = judged.find(j => j.covered)
     const shown = covering ?? judged[0]!
