@@ -1,7 +1,7 @@
 import { and, eq, inArray, max, ne } from 'drizzle-orm'
 import { createError } from 'h3'
 import type { Db } from './client'
-import { pqrs, procedurePqrs, procedures, readings, signatures, welders } from './schema'
+import { pqrs, procedurePqrs, procedures, projectProcedures, readings, signatures, welders } from './schema'
 import { contentHash, newVerifyCode } from './signing'
 import { columnsOf, draftOf, findProcedure, isUniqueViolation, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
 import { recordAudit } from '../utils/audit'
@@ -189,3 +189,36 @@ export async function recordReading(db: Db, row: ProcedureRow, input: Reading, u
 }
 
 export { findProcedure }
+
+/** Discards a draft that was never signed; signed revisions stay for good. Null when there is no such WPS. */
+export async function discardDraft(db: Db, id: number, version: number, user: SessionUser) {
+  try {
+    return await discardInTransaction(db, id, version, user)
+  }
+  catch (error) {
+    // Another record (a welder test, a project) still points at the draft.
+    if (isForeignKeyViolation(error)) throw conflict('Another record refers to this draft, so it stays. Edit it instead.')
+    throw error
+  }
+}
+
+function isForeignKeyViolation(error: unknown): boolean {
+  for (let e: unknown = error, depth = 0; e && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
+    if ((e as { code?: string }).code === '23503') return true
+  }
+  return false
+}
+
+async function discardInTransaction(db: Db, id: number, version: number, user: SessionUser) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select().from(procedures).where(eq(procedures.id, id)).for('update')
+    if (!row) return null
+    assertEditable(row, version)
+    const [onProject] = await tx.select({ projectId: projectProcedures.projectId }).from(projectProcedures).where(eq(projectProcedures.procedureId, id)).limit(1)
+    if (onProject) throw conflict(`${row.number} rev. ${row.revision} is listed on a project: take it off the project first.`)
+    const before = draftOf(row, await supportingPqrIdsOf(tx, id))
+    await tx.delete(procedures).where(eq(procedures.id, id))
+    await recordAudit(tx, { accountId: user.id, action: 'procedure.discard', recordType: 'procedure', recordId: id, before: { ...before, revision: row.revision } })
+    return row
+  })
+}

@@ -222,6 +222,33 @@ describe('drafting, approving and revising', () => {
   })
 })
 
+describe('discarding a draft', () => {
+  it('removes an unsigned draft; a signed revision or a stale version is a 409', async () => {
+    const created = await send(supervisor, 'POST', '/api/procedures', await sheetDraft('KB-T40'))
+    expect(created.status).toBe(201)
+    expect((await send(inspector, 'DELETE', `/api/procedures/${created.body.id}`, { version: 1 })).status).toBe(403)
+    expect((await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, {})).status).toBe(400)
+    expect((await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, { version: 2 })).status).toBe(409)
+    expect((await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, { version: 1 })).status).toBe(200)
+    expect((await detail(supervisor, created.body.id)).status).toBe(404)
+    expect((await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, { version: 1 })).status).toBe(404)
+    const approved = await detail(supervisor, (await byNumber('KB-W01', 0)).id)
+    expect((await send(supervisor, 'DELETE', `/api/procedures/${approved.body.procedure.id}`, { version: approved.body.procedure.version })).status).toBe(409)
+  })
+
+  it('a draft another record refers to stays (409), never a 500', async () => {
+    const created = await send(supervisor, 'POST', '/api/procedures', await sheetDraft('KB-T41'))
+    const test = await send(inspector, 'POST', '/api/tests', {
+      welderId: 1, procedureId: created.body.id, testDate: '2026-06-01', code: 'asme-ix', edition: '2023', unit: 'in', process: 'GMAW',
+      transfer: 'short-circuit', form: 'plate', weld: 'groove', couponThickness: 0.1345, positions: ['1G'], examination: 'bend',
+    })
+    expect(test.status, JSON.stringify(test.body)).toBe(201)
+    const res = await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, { version: 1 })
+    expect(res.status).toBe(409)
+    expect((await detail(supervisor, created.body.id)).status).toBe(200)
+  })
+})
+
 describe('a code whose support rules are not carried', () => {
   it('approves only with a statement of how the ranges were checked, which the signature covers', async () => {
     const bases = await supervisor.json<{ id: number, specification: string, grade: string }[]>('/api/catalogue/base-metals')

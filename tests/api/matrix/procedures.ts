@@ -17,6 +17,7 @@ export const entries: MatrixEntries = {
   // A draft: staff read it, a welder does not see it exists.
   'GET /api/procedures/[id]': { url: async ctx => `/api/procedures/${await draft(ctx)}`, expect: [401, 200, 200, 404, 403] },
   'PATCH /api/procedures/[id]': { url: async ctx => `/api/procedures/${await draft(ctx)}`, expect: [401, 400, 403, 403, 403] },
+  'DELETE /api/procedures/[id]': { url: async ctx => `/api/procedures/${await draft(ctx)}`, expect: [401, 400, 403, 403, 403] },
   'POST /api/procedures/[id]/approve': { url: async ctx => `/api/procedures/${await draft(ctx)}/approve`, expect: [401, 400, 403, 403, 403] },
   'POST /api/procedures/[id]/revise': { url: async ctx => `/api/procedures/${await approved(ctx)}/revise`, expect: [401, 400, 403, 403, 403] },
   'POST /api/procedures/[id]/readings': { url: async ctx => `/api/procedures/${await approved(ctx)}/readings`, expect: [401, 400, 400, 400, 403] },
