@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { Client, signedIn, startServer, type TestServer } from './harness'
+import { type Client, signedIn, startServer, type TestServer } from './harness'
 
 let server: TestServer
 let supervisor: Client
