@@ -33,6 +33,8 @@ export default defineNuxtConfig({
     appUrl: '',
     // NUXT_MAIL_TEST_CLOCK=true lets a supervisor run the reminder job for another day (development and tests only)
     mailTestClock: false,
+    // NUXT_MAIL_SHOW_LINKS=true shows one-time links in the bodies on the Mail page (development and tests only)
+    mailShowLinks: false,
     // NUXT_MAIL_RETRY_SECONDS: wait before the first retry of a failed send (doubling each time, at most an hour)
     mailRetrySeconds: 60,
     // NUXT_INVITATION_HOURS: how long an invitation link works (a password-reset link works one hour)

@@ -27,6 +27,8 @@ export default defineConfig({
     env: {
       PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: `${dataRoot}/db`, DATABASE_URL: '',
       AUTH_ORIGIN: `http://127.0.0.1:${port}/api/auth`, AUTH_SECRET: 'e2e-secret-for-rootface-browser-tests',
+      // No SMTP server here: mail stays in the outbox, whose one-time links the browser tests read.
+      NUXT_MAIL_SHOW_LINKS: 'true',
     },
   },
 })

@@ -16,6 +16,7 @@ if (!env.SMTP_URL) {
   }
   env.SMTP_URL = smtp.url
   env.NUXT_MAIL_TEST_CLOCK ??= 'true'
+  env.NUXT_MAIL_SHOW_LINKS ??= 'true'
   console.log(`[dev] fake SMTP server on ${smtp.url}: mail is kept in memory and listed on /mail (sign in as the quality manager)`)
 }
 

@@ -124,11 +124,16 @@ describe('invitations and password resets', () => {
     expect(await new Client(server.url).signIn('auditor@demo.rootface.test')).toBe(true)
   })
 
-  it('the invitation answer never hands the link back; only the e-mail carries it', async () => {
+  it('neither the invitation answer nor the outbox hands the link back; only the e-mail carries it', async () => {
     // The token appears in the mail; the API never hands it back (the invite answer has no token).
     const invite = await supervisor.json<Record<string, unknown>>('/api/accounts', json({ email: 'hash.only@kestrelbend.test', name: 'Hash Only', role: 'auditor' }))
     const [mail] = await mailTo(smtp, 'hash.only@kestrelbend.test')
     expect(JSON.stringify(invite.body)).not.toContain(tokenIn(mail!)!)
+    // Nor does the outbox: a supervisor reading it cannot take over the account the link was sent for.
+    const outbox = await supervisor.json<{ items: { to: string, text: string, html: string }[], linksHidden: boolean }>('/api/mail?q=hash.only')
+    expect(outbox.body.linksHidden).toBe(true)
+    expect(outbox.body.items[0]!.text).toContain('set-password?token=hidden')
+    expect(JSON.stringify(outbox.body)).not.toContain(tokenIn(mail!)!)
   })
 })
 

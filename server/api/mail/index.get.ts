@@ -21,8 +21,14 @@ export default defineEventHandler(async (event) => {
     db.select({ total: count() }).from(mailMessages).where(where),
     db.select({ status: mailMessages.status, n: count() }).from(mailMessages).groupBy(mailMessages.status),
   ])
+  // A one-time link is a credential: a supervisor reading the outbox must not be able to take over the account
+  // it was sent for. Only a development or test server (NUXT_MAIL_SHOW_LINKS=true) shows them.
+  const showLinks = String(useRuntimeConfig().mailShowLinks) === 'true'
+  const hide = (body: string) => body.replace(/(set-password\?token=)[\w-]+/g, '$1hidden')
   return {
-    items, total: totals?.total ?? 0, page: query.page, pageSize: query.pageSize,
+    items: showLinks ? items : items.map(m => ({ ...m, text: hide(m.text), html: hide(m.html) })),
+    linksHidden: !showLinks,
+    total: totals?.total ?? 0, page: query.page, pageSize: query.pageSize,
     counts: Object.fromEntries(byStatus.map(s => [s.status, s.n])) as Partial<Record<'queued' | 'sent' | 'failed', number>>,
     smtpConfigured: !!mailSettings().url,
     from: mailSettings().from,
