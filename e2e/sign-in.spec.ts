@@ -5,7 +5,7 @@ const roles = [
   { email: 'supervisor@demo.rootface.test', lands: '/dashboard', badge: 'Quality manager', nav: ['Procedures', 'Roster', 'Projects'], heading: 'Dashboard' },
   { email: 'inspector@demo.rootface.test', lands: '/dashboard', badge: 'Inspector', nav: ['Welder tests', 'Continuity log'], heading: 'Dashboard' },
   { email: 'welder@demo.rootface.test', lands: '/me', badge: 'Welder', nav: ['My qualifications'], heading: 'Ines Carvalho' },
-  { email: 'auditor@demo.rootface.test', lands: '/projects', badge: 'Auditor', nav: ['My projects'], heading: 'Projects' },
+  { email: 'auditor@demo.rootface.test', lands: '/projects', badge: 'Auditor', nav: ['My projects', 'Verify a sheet'], heading: 'My projects' },
 ]
 
 for (const role of roles) {
