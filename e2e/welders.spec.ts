@@ -93,6 +93,7 @@ test('a CSV with a bad row shows the row error and imports nothing', async ({ pa
   await expect(page).toHaveURL(/\/dashboard$/)
   await page.goto('/continuity/import')
   const day = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10)
+  await expect(page.locator('input[type=file]')).toBeEnabled()
   await page.locator('input[type=file]').setInputFiles({
     name: 'shift.csv', mimeType: 'text/csv',
     buffer: Buffer.from(`stamp,process,date,reference\nKB-01,SMAW,${day},e2e import\nKB-77,SMAW,${day},e2e import\n`),

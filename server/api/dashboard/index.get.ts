@@ -1,6 +1,10 @@
 import { asc, count, eq } from 'drizzle-orm'
 import { procedures, welders, welderTests } from '../../database/schema'
+import { lapseWeeks } from '#shared/qualification/lapse-weeks'
 import { renewalOf } from '#shared/qualification/renewal'
+
+// The lists stop at this many rows (a large shop sees the rest on the continuity page); the counts are whole.
+const listLimit = 200
 
 /** GET /api/dashboard: who lapses in the next 30/60/90 days, who has lapsed, every lapse date for the timeline, tests awaiting certification */
 export default defineEventHandler(async (event) => {
@@ -20,12 +24,17 @@ export default defineEventHandler(async (event) => {
   ])
   const rows = roster.flatMap(w => (standings.get(w.id) ?? []).map(s => ({ ...s, welderId: w.id, welderName: w.name, welderStamp: w.stamp })))
     .sort((a, b) => a.lapsesOn.localeCompare(b.lapsesOn))
+  // Most recently lapsed first: the ones a renewal test can still catch up with soonest
+  const lapsed = rows.filter(r => r.daysLeft <= 0).reverse()
+  const upcoming = rows.filter(r => r.daysLeft > 0 && r.daysLeft <= 90)
   return {
     today,
-    lapsed: rows.filter(r => r.daysLeft <= 0).map(r => ({ ...r, renewal: renewalOf[r.code] })),
-    upcoming: rows.filter(r => r.daysLeft > 0 && r.daysLeft <= 90),
+    lapsed: lapsed.slice(0, listLimit).map(r => ({ ...r, renewal: renewalOf[r.code] })),
+    lapsedCount: lapsed.length,
+    upcoming: upcoming.slice(0, listLimit),
+    upcomingCounts: { 30: upcoming.filter(r => r.daysLeft <= 30).length, 60: upcoming.filter(r => r.daysLeft <= 60).length, 90: upcoming.length },
     currentCount: rows.filter(r => r.daysLeft > 30).length,
-    timeline: rows.map(r => ({ welderId: r.welderId, welderStamp: r.welderStamp, welderName: r.welderName, process: r.process, lapsesOn: r.lapsesOn, daysLeft: r.daysLeft, standing: r.standing })),
+    timeline: lapseWeeks(rows, today),
     awaitingCertification: waiting?.n ?? 0,
     awaiting,
   }
