@@ -8,9 +8,10 @@ const querySchema = z.object({
   process: processSchema.optional(),
   standing: z.enum(['current', 'lapsing', 'lapsed']).optional(),
   q: z.string().trim().max(100, 'At most 100 characters').optional(),
+  limit: z.coerce.number().int().min(1).max(2000).default(300),
 })
 
-/** GET /api/continuity/standings: each active welder × process: last use, lapse date, days left, how to renew (staff) */
+/** GET /api/continuity/standings: each active welder × process, soonest lapse first (the first `limit`, with the total): last use, lapse date, days left, how to renew (staff) */
 export default defineEventHandler(async (event) => {
   await requireRole(event, staff)
   const query = await validQuery(event, querySchema)
@@ -25,5 +26,5 @@ export default defineEventHandler(async (event) => {
   })))
     .filter(r => (!query.process || r.process === query.process) && (!query.standing || r.standing === query.standing))
     .sort((a, b) => a.lapsesOn.localeCompare(b.lapsesOn) || a.welderStamp.localeCompare(b.welderStamp))
-  return { today, rows, roster: roster.map(w => ({ id: w.id, name: w.name, stamp: w.stamp })) }
+  return { today, rows: rows.slice(0, query.limit), total: rows.length }
 })
