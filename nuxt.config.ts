@@ -80,7 +80,8 @@ export default defineNuxtConfig({
   },
   // Pages and JSON answers are gzipped when the browser accepts it (static assets are pre-compressed by Nitro).
   // Attachments are PDFs and images, compressed already: served as stored.
-  compression: { threshold: 1024, exclude: ['/_nuxt', '/__nuxt', '/api/attachments'] },
+  // Binary answers (files, PDFs, archives) are sent as they are.
+  compression: { threshold: 1024, exclude: ['/_nuxt', '/__nuxt', '/api/attachments', '/api/sheets', '/api/packets', '/api/admin/backup'] },
   eslint: { config: { stylistic: true } },
   // Security headers (CSP with per-request nonces, no inline scripts), size limits; sign-in slowing is our own.
   security: {

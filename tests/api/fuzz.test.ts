@@ -1,12 +1,25 @@
+import { readFileSync } from 'node:fs'
 import fc from 'fast-check'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signedIn, startServer, type Client, type TestServer } from './harness'
 import { apiRoutes } from './routes'
+import type { MatrixEntries } from './matrix/types'
 
 // OWASP ASVS 4.0 V5 (validation): every mutating route answers malformed input with a 4xx and a message,
 // never a 500, and writes nothing.
 let server: TestServer
 let supervisor: Client
+const clients = new Map<Role, Client>()
+type Role = 'supervisor' | 'inspector' | 'welder' | 'auditor'
+const roleOrder: Role[] = ['supervisor', 'inspector', 'welder', 'auditor']
+
+// The role matrix says who may call each route; each route is fuzzed as the first role allowed to reach its validation.
+const matrix: MatrixEntries = Object.assign({}, ...Object.values(import.meta.glob<{ entries: MatrixEntries }>('./matrix/*.ts', { eager: true })).map(m => m.entries))
+function fuzzingRole(key: string): Role | undefined {
+  const statuses = matrix[key]?.expect
+  if (!statuses) return undefined
+  return roleOrder.find((_, i) => ![401, 403].includes(statuses[i + 1]!))
+}
 let sent = 0
 let serverErrors = 0
 
@@ -26,12 +39,19 @@ const hostileNumber = fc.oneof(
 )
 const value = fc.oneof(hostile, hostileNumber, fc.boolean(), fc.constant(null), fc.array(fc.oneof(hostile, hostileNumber), { maxLength: 5 }),
   fc.dictionary(fc.constantFrom(...fieldNames), fc.oneof(hostile, hostileNumber), { maxKeys: 4 }))
-const objectBody = fc.dictionary(fc.oneof(fc.constantFrom(...fieldNames), fc.string({ maxLength: 12 })), value, { maxKeys: 10 }).map(o => JSON.stringify(o))
+// At least one key: `{}` is the valid body of the actions that take no input (run the reminder job now).
+const objectBody = fc.dictionary(fc.oneof(fc.constantFrom(...fieldNames), fc.string({ maxLength: 12 })), value, { minKeys: 1, maxKeys: 10 }).map(o => JSON.stringify(o))
 const rawBody = fc.constantFrom('{', '{"name":', 'null', '[]', '"text"', '12', 'NaN', '{"thickness": Infinity}', '{"a":1,}', '', '\u0000', '[{"id":1}]'.repeat(2000))
 const body = fc.oneof({ weight: 3, arbitrary: objectBody }, { weight: 1, arbitrary: rawBody })
 const idValue = fc.constantFrom('1', '2', '999999', 'abc', '-1', '0', '1.5', '99999999999', '%27')
+const badIdValue = fc.constantFrom('999999', 'abc', '-1', '0', '1.5', '99999999999', '%27', '1e3')
 
 const mutating = apiRoutes().filter(r => ['POST', 'PATCH', 'PUT', 'DELETE'].includes(r.method))
+// A route that reads no body (a delete by id, an action) cannot be fed a bad body: it is fuzzed through its
+// address only, with ids that do not exist or do not parse. One with no address parameter is left to the role matrix.
+// A preview reads the file it is sent and answers with the row errors, writing nothing (the row counts prove it).
+const previews = new Set(['POST /api/continuity/import'])
+const readsBody = (file: string) => /validBody|readBody|readValidatedBody|readMultipartFormData|readRawBody/.test(readFileSync(file, 'utf8'))
 const listing = apiRoutes().filter(r => r.method === 'GET' && !r.path.includes('['))
 
 async function rowCounts() {
@@ -50,7 +70,8 @@ function expectClean(status: number, text: string, context: string) {
 
 beforeAll(async () => {
   server = await startServer()
-  supervisor = await signedIn(server.url, 'supervisor')
+  for (const role of roleOrder) clients.set(role, await signedIn(server.url, role))
+  supervisor = clients.get('supervisor')!
 })
 afterAll(async () => {
   console.log(`fuzz: ${sent} requests, ${serverErrors} answers of 500 or more`)
@@ -63,20 +84,33 @@ describe('fuzzed input never reaches a 500 and never writes', () => {
   })
 
   for (const route of mutating) {
-    it(`${route.method} ${route.path}`, async () => {
+    const key = `${route.method} ${route.path}`
+    const role = fuzzingRole(key)
+    const withBody = readsBody(route.file)
+    const hasParams = route.path.includes('[')
+    it.skipIf(!role || (!withBody && !hasParams))(`${key} as ${role}${withBody ? '' : ' (address only)'}`, async () => {
+      const client = clients.get(role!)!
       const before = await rowCounts()
-      await fc.assert(fc.asyncProperty(body, idValue, async (payload, id) => {
+      await fc.assert(fc.asyncProperty(withBody ? body : fc.constant(''), withBody ? idValue : badIdValue, async (payload, id) => {
         const url = route.path.replace(/\[[^\]]+\]/g, id)
-        const res = await supervisor.fetch(url, { method: route.method, body: payload, headers: { 'content-type': 'application/json' } })
+        const init: RequestInit = withBody ? { method: route.method, body: payload, headers: { 'content-type': 'application/json' } } : { method: route.method }
+        const res = await client.fetch(url, init)
         const text = await res.text()
         expectClean(res.status, text, `${route.method} ${url} ${payload.slice(0, 200)}`)
-        expect([400, 404, 409, 413, 415, 422], `${route.method} ${url} ${payload.slice(0, 200)} → ${res.status} ${text.slice(0, 200)}`).toContain(res.status)
-        expect(JSON.parse(text).message, 'an error carries a message').toBeTruthy()
-      }), { numRuns: 40 })
+        expect([400, 404, 409, 411, 413, 415, 422, ...(previews.has(key) ? [200] : [])], `${route.method} ${url} ${payload.slice(0, 200)} → ${res.status} ${text.slice(0, 200)}`).toContain(res.status)
+        if (res.status >= 400) expect(JSON.parse(text).message, 'an error carries a message').toBeTruthy()
+      }), { numRuns: withBody ? 30 : 8 })
       const after = await rowCounts()
       expect(after.rows).toEqual(before.rows)
-    })
+    }, 60_000)
   }
+
+  it('a NUL character in otherwise good text is a 400 on its field, in a body and in a query', async () => {
+    const res = await supervisor.json<{ data: { fieldErrors: Record<string, string[]> } }>('/api/welders', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ name: 'Nul\u0000 Welder', stamp: 'NUL-1' }) })
+    expect(res.status).toBe(400)
+    expect(res.body.data.fieldErrors.name).toEqual(['Contains a NUL character'])
+    expect((await supervisor.fetch('/api/welders?q=%00')).status).toBe(400)
+  })
 
   it('list routes answer hostile query strings with 200 or 400, never 500', async () => {
     const query = fc.dictionary(fc.constantFrom('page', 'pageSize', 'sort', 'dir', 'q', 'status', 'process', 'welderId', 'from', 'to', 'thickness', 'pNumber', 'code'),
@@ -89,7 +123,7 @@ describe('fuzzed input never reaches a 500 and never writes', () => {
         const text = await res.text()
         expectClean(res.status, text, `${route.path}?${new URLSearchParams(q)}`)
         expect([200, 400], `${route.path} ${JSON.stringify(q)} → ${res.status} ${text.slice(0, 200)}`).toContain(res.status)
-      }), { numRuns: 25 })
+      }), { numRuns: 10 })
     }
-  })
+  }, 120_000)
 })
