@@ -29,3 +29,5 @@ export function useServerList<T>(url: string, defaults: { sort: string, dir?: 'a
   }
   return { data, status, error, refresh, query, filter, update, sortBy }
 }
+
+export type ServerList<T> = ReturnType<typeof useServerList<T>>

@@ -28,7 +28,7 @@ export function tensileStrength(input: TensileInput, context: RuleContext): Tens
   const area = input.width * input.thickness
   const strength = Math.round((input.load / area) * 1000) / 1000
   // load / (w × t) >= min  ⇔  load × 1e12 >= min × w × t, all scaled by 1e6.
-  const accepted = scaled(input.load) * 1_000_000_000_000n
+  const accepted = scaled(input.load) * BigInt(1e12) // a call, not a literal: the browser build targets ES2019
     >= scaled(input.minimumStrength) * scaled(input.width) * scaled(input.thickness)
   const stress = context.unit === 'in' ? 'psi' : 'MPa'
   const force = context.unit === 'in' ? 'lbf' : 'N'
