@@ -15,6 +15,8 @@ import { loadPqr, loadProcedure, loadWelderTest, shopName } from './records'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
 import { todayIso } from '../utils/standings'
+import { attachmentsOf } from '../utils/attachments'
+import type { AttachmentRecordType } from '#shared/schemas/attachment'
 
 /** The public address the QR codes point at: AUTH_ORIGIN in production (required there), else the request's own. */
 export function publicOrigin(event: H3Event) {
@@ -28,19 +30,38 @@ export function publicOrigin(event: H3Event) {
   return getRequestURL(event, { xForwardedHost: true, xForwardedProto: true }).origin
 }
 
+/** The record's attached files, listed by reference: name, kind, size and SHA-256 (the files themselves are not printed). */
+async function withAttachments(db: Db, sheet: SheetModel, type: AttachmentRecordType, id: number): Promise<SheetModel> {
+  const files = await attachmentsOf(db, type, id)
+  if (!files.length) return sheet
+  return {
+    ...sheet,
+    blocks: [...sheet.blocks, {
+      heading: 'Attached files (by reference)',
+      table: {
+        columns: ['File', 'Kind', 'Size', 'SHA-256'],
+        rows: files.map(f => [f.fileName, f.kind.replace(/-/g, ' '), `${Math.max(1, Math.round(f.size / 1024))} KB`, f.sha256]),
+        numeric: [2],
+        widths: ['*', 'auto', 'auto', 'auto'],
+      },
+      notes: ['Each file is kept with the record; its SHA-256 identifies the exact file.'],
+    }],
+  }
+}
+
 export async function procedureSheet(db: Db, id: number, origin: string) {
   const record = await loadProcedure(db, id)
-  return record ? wpsSheet(record, await shopName(db), origin) : null
+  return record ? withAttachments(db, wpsSheet(record, await shopName(db), origin), 'procedure', id) : null
 }
 
 export async function pqrSheetOf(db: Db, id: number, origin: string) {
   const record = await loadPqr(db, id)
-  return record ? pqrSheet(record, await shopName(db), origin) : null
+  return record ? withAttachments(db, pqrSheet(record, await shopName(db), origin), 'pqr', id) : null
 }
 
 export async function welderTestSheet(db: Db, id: number, origin: string) {
   const record = await loadWelderTest(db, id)
-  return record ? wpqSheet(record, await shopName(db), origin) : null
+  return record ? withAttachments(db, wpqSheet(record, await shopName(db), origin), 'welder-test', id) : null
 }
 
 /**
