@@ -1,3 +1,5 @@
+// Grouping for the dashboard picture, not a code rule: the inputs are invented and the week arithmetic is common practice
+// (weeks counted from the window's first day), cross-checked by hand. The lapse dates themselves come from ASME IX QW-322.1 elsewhere.
 import { describe, expect, it } from 'vitest'
 import { lapseWeeks } from '../../../../shared/qualification/lapse-weeks'
 

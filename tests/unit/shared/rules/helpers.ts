@@ -1,3 +1,4 @@
+// Helpers for the rule tests; each test beside them names its source (ASME BPVC IX, AWS D1.1/D1.3, ISO 9606-1 clause or table, or 'from memory').
 import { expect } from 'vitest'
 import { evaluate } from '../../../../shared/rules/index'
 import type { EvaluationResult } from '../../../../shared/rules/index'
