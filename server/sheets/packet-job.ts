@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto'
 import { and, eq, inArray, lt } from 'drizzle-orm'
 import type { Db } from '../database/client'
 import { packetFiles, packets } from '../database/schema'
+import { appendFiles, appendicesOf } from './appendices'
 import type { SessionUser } from '../utils/auth'
 import { buildPacket, packetPlan } from './packet'
 import { recordAudit } from '../utils/audit'
@@ -35,7 +36,11 @@ async function runPacket(db: Db, packetId: number, projectId: number, user: Sess
     await db.update(packets).set({ status: 'building', updatedAt: new Date() }).where(eq(packets.id, packetId))
     const plan = await packetPlan(db, projectId)
     if (!plan) throw new Error('The project no longer exists')
-    const { pdf, pageCount, sheets, timing } = await buildPacket(db, plan, user, origin, progress)
+    const built = await buildPacket(db, plan, user, origin, progress)
+    const { sheets, timing } = built
+    // Attached files (lab and radiography reports, sketches, photos) follow the sheets as appendices.
+    const files = await appendicesOf(db, plan)
+    const { pdf, pageCount } = files.length ? await appendFiles(new Uint8Array(built.pdf), files) : built
     console.info(`[rootface] packet ${packetId}: ${sheets} sheets, ${pageCount} pages; sheets read in ${timing.modelsMs} ms, laid out and rendered in ${timing.renderMs} ms`)
     const sha256 = createHash('sha256').update(pdf).digest('hex')
     await db.transaction(async (tx) => {

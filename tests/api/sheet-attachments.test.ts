@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signedIn, startServer, type Client, type TestServer } from './harness'
 import { pdfPages, squeeze } from './pdf-text'
-import { samplePdf, upload } from './support/files'
+import { samplePdf, samplePng, upload } from './support/files'
 
 // Issue 7: attachments are included by reference (name, checksum) in the sheets of their record.
 let server: TestServer
@@ -27,5 +27,33 @@ describe('attached files on a sheet', () => {
     expect(text).toContain(squeeze('Attached files (by reference)'))
     expect(text).toContain(squeeze(file.body.fileName)) // the display name as the upload kept it
     expect(text).toContain(file.body.sha256)
+  })
+})
+
+describe('attached files as packet appendices', () => {
+  async function packetPages(client: Client, projectId: number) {
+    const started = await client.json<{ id: number }>('/api/packets', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ projectId }) })
+    expect(started.status).toBe(202)
+    for (let i = 0; i < 600; i++) {
+      const state = await client.json<{ status: string, error: string | null }>(`/api/packets/${started.body.id}`)
+      if (state.body.status === 'ready') break
+      expect(state.body.status, state.body.error ?? '').not.toBe('failed')
+      await new Promise(r => setTimeout(r, 100))
+    }
+    return pdfPages(await (await client.fetch(`/api/packets/${started.body.id}/file`)).arrayBuffer())
+  }
+
+  it('a lab report on a PQR of the project follows the sheets, after a page naming it with its SHA-256', async () => {
+    // Demo seed: project 1 is KB-2611, whose KB-W02 rev. 1 rests on PQR 2 (PQR-K102).
+    const before = await packetPages(supervisor, 1)
+    const inspector = await signedIn(server.url, 'inspector')
+    const file = await upload(inspector, { recordType: 'pqr', recordId: 2, kind: 'lab-report' }, { name: 'tensile report.png', type: 'image/png', bytes: samplePng })
+    expect(file.status).toBe(201)
+    const after = await packetPages(supervisor, 1)
+    expect(after.length).toBe(before.length + 2) // the separator page and the picture
+    const separator = squeeze(after[before.length]!)
+    expect(separator).toContain('Appendix1')
+    expect(separator).toContain(file.body.sha256)
+    expect(separator).toContain(squeeze('tensile report.png'))
   })
 })
