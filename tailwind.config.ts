@@ -7,7 +7,7 @@ export default {
     extend: {
       colors: {
         surface: { DEFAULT: '#f7f6f2', raised: '#ffffff', sunken: '#eceae3' },
-        ink: { DEFAULT: '#1d2327', muted: '#545d63', faint: '#80898f' },
+        ink: { DEFAULT: '#1d2327', muted: '#545d63', faint: '#5f686e' },
         rule: { DEFAULT: '#d4d1c7', strong: '#a9a59a' },
         accent: { DEFAULT: '#1f5f7a', strong: '#164659', soft: '#dcebf1' },
         current: { DEFAULT: '#2f6b3a', soft: '#e1eee2' },
