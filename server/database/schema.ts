@@ -36,6 +36,9 @@ export const accounts = pgTable('accounts', {
   passwordHash: text('password_hash'),
   welderId: integer('welder_id').references(() => welders.id),
   active: boolean('active').notNull().default(true),
+  // Carried in every session token; raising it ends every session of the account (sign out everywhere,
+  // password change or reset, role change, deactivation).
+  sessionGeneration: integer('session_generation').notNull().default(0),
   createdAt: created(),
 }, t => [
   uniqueIndex('accounts_email_key').on(sql`lower(${t.email})`),
@@ -450,3 +453,16 @@ export const standingRefresh = pgTable('standing_refresh', {
   welderId: integer('welder_id').notNull(),
   process: text('process').notNull(),
 }, t => [primaryKey({ columns: [t.welderId, t.process] })])
+
+// Failed sign-ins per key ('account:<e-mail>' or 'address:<client address>'), kept in the database so every app
+// server sees the same counts and a restart does not reset them (server/utils/sign-in-throttle.ts).
+export const signInFailures = pgTable('sign_in_failures', {
+  key: text('key').primaryKey(),
+  failures: integer('failures').notNull().default(0),
+  lastFailureAt: timestamp('last_failure_at', { withTimezone: true }).notNull().defaultNow(),
+  // Set when the failures reach the lock threshold; sign-in for this key is refused (429) until then.
+  lockedUntil: timestamp('locked_until', { withTimezone: true }),
+}, t => [
+  index('sign_in_failures_last_idx').on(t.lastFailureAt),
+  check('sign_in_failures_count_check', sql`${t.failures} >= 0`),
+])
