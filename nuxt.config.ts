@@ -23,10 +23,13 @@ export default defineNuxtConfig({
     dataDir: join(rootDir, '.data/db'),
     // DATABASE_URL (read at run time) switches to a PostgreSQL server
     databaseUrl: '',
-    // AUTH_SECRET (read at run time) signs the session tokens; set it in production
+    // AUTH_SECRET (read at run time) signs the session tokens. This default serves development only: a production
+    // server refuses to start without an AUTH_SECRET of at least 32 characters (server/plugins/database.ts).
     authSecret: 'rootface-development-secret-change-me',
-    // NUXT_SEED_DEMO=false keeps an empty database empty
-    seedDemo: true,
+    // NUXT_SEED_DEMO=true seeds the demo shop into an empty database (`npm run dev` sets it); otherwise it stays empty
+    seedDemo: false,
+    // NUXT_TRUSTED_PROXIES: comma-separated addresses of reverse proxies whose X-Forwarded-For is believed (sign-in throttling)
+    trustedProxies: '',
     // NUXT_FILES_DIR: where uploaded files live on local disk (default: 'files' beside the data directory); S3_* env switches to a bucket
     filesDir: '',
     // NUXT_APP_URL: the public address put in e-mailed links (default: the origin of AUTH_ORIGIN)
@@ -52,6 +55,8 @@ export default defineNuxtConfig({
     // Static assets are served pre-compressed (gzip and brotli) to browsers that accept it.
     compressPublicAssets: { gzip: true, brotli: true },
     experimental: { tasks: true },
+    // Before every other plugin: a production server without a strong AUTH_SECRET or without AUTH_ORIGIN stops here.
+    plugins: [join(rootDir, 'server/startup/production-check.ts')],
     // Lapse reminders and the weekly digest once a day at 06:00; the outbox retries queued mail every minute.
     scheduledTasks: { '0 6 * * *': ['mail:reminders'], '* * * * *': ['mail:send'] },
     // The sheet fonts travel with the server build (read with useStorage('assets:sheet-fonts')).
@@ -64,6 +69,11 @@ export default defineNuxtConfig({
         const { build } = await import('esbuild')
         await build({
           entryPoints: [join(rootDir, 'server/sheets/render-worker.ts')], outfile: join(nitro.options.output.serverDir, 'sheet-worker.cjs'),
+          bundle: true, platform: 'node', format: 'cjs', target: 'node20', alias: { '#shared': join(rootDir, 'shared') }, logLevel: 'warning',
+        })
+        // The continuity-import check runs in a worker thread too (server/workers/import-check.ts).
+        await build({
+          entryPoints: [join(rootDir, 'server/workers/import-worker.ts')], outfile: join(nitro.options.output.serverDir, 'import-worker.cjs'),
           bundle: true, platform: 'node', format: 'cjs', target: 'node20', alias: { '#shared': join(rootDir, 'shared') }, logLevel: 'warning',
         })
       },
@@ -90,7 +100,13 @@ export default defineNuxtConfig({
     corsHandler: false,
     requestSizeLimiter: { maxRequestSizeInBytes: 2_000_000, maxUploadFileRequestInBytes: 21_000_000 },
     headers: {
+      // Everything from this origin only; inline style attributes (Vue's style bindings) but no style sheet or font
+      // from any other origin.
       contentSecurityPolicy: {
+        'default-src': ['\'self\''],
+        'connect-src': ['\'self\''],
+        'style-src': ['\'self\'', '\'unsafe-inline\''],
+        'font-src': ['\'self\'', 'data:'],
         'img-src': ['\'self\'', 'data:', 'blob:'],
         'script-src': ['\'self\'', '\'strict-dynamic\'', '\'nonce-{{nonce}}\''],
         'frame-ancestors': ['\'none\''],

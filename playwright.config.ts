@@ -29,6 +29,8 @@ export default defineConfig({
       AUTH_ORIGIN: `http://127.0.0.1:${port}/api/auth`, AUTH_SECRET: 'e2e-secret-for-rootface-browser-tests',
       // No SMTP server here: mail stays in the outbox, whose one-time links the browser tests read.
       NUXT_MAIL_SHOW_LINKS: 'true',
+      // The browser tests sign in as the demo accounts.
+      NUXT_SEED_DEMO: 'true',
     },
   },
 })

@@ -122,7 +122,7 @@ async function main() {
   const port = await freePort()
   const base = `http://127.0.0.1:${port}`
   const server = spawn(process.execPath, [join(output, 'server/index.mjs')], {
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: join(work, 'db'), DATABASE_URL: '', AUTH_ORIGIN: `${base}/api/auth`, AUTH_SECRET: 'bench-secret-for-rootface' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: join(work, 'db'), DATABASE_URL: '', AUTH_ORIGIN: `${base}/api/auth`, AUTH_SECRET: 'bench-secret-for-rootface-load-measurements' },
     stdio: ['ignore', 'ignore', 'inherit'],
   })
   try {

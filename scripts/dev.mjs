@@ -5,6 +5,8 @@ import { spawn } from 'node:child_process'
 import { startFakeSmtp } from './fake-smtp.mjs'
 
 const env = { ...process.env }
+// The demo shop is seeded into an empty database only on request; development asks for it.
+env.NUXT_SEED_DEMO ??= 'true'
 let smtp
 if (!env.SMTP_URL) {
   const port = Number(env.FAKE_SMTP_PORT ?? 2525)

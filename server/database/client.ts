@@ -47,11 +47,40 @@ export async function restorePglite(dataDir: string, archive: Blob, holder = 're
   }
 }
 
+/** The key of the advisory lock that app servers take around migrations (any constant shared by all of them). */
+export const MIGRATION_LOCK_KEY = 0x526f6f74 // 'Root'
+
+/**
+ * Migrates a PostgreSQL database while holding a session advisory lock, so app servers started at the same moment
+ * on a fresh database take turns: the first applies the migrations, the others then find nothing left to do.
+ */
+export async function migrateUnderLock(pool: pg.Pool) {
+  const client = await pool.connect()
+  try {
+    await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY])
+    try {
+      await migratePg(drizzlePg(client, { schema }), { migrationsFolder: migrationsFolder() })
+    }
+    finally {
+      await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY])
+    }
+  }
+  finally {
+    client.release()
+  }
+}
+
 export async function openDatabase(options: OpenOptions): Promise<Database> {
   if (options.databaseUrl) {
     const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 })
+    try {
+      await migrateUnderLock(pool)
+    }
+    catch (error) {
+      await pool.end()
+      throw error
+    }
     const db = drizzlePg(pool, { schema })
-    await migratePg(db, { migrationsFolder: migrationsFolder() })
     return { db: db as unknown as Db, driver: 'postgres', close: () => pool.end() }
   }
   const release = lockDataDir(options.dataDir, options.holder)

@@ -5,7 +5,7 @@ const globalKey = Symbol.for('rootface.database')
 type Holder = { [globalKey]?: Promise<Database> }
 
 /**
- * The one database of this process, migrated and (on an empty database) seeded with the demo shop.
+ * The one database of this process, migrated and (on an empty database) seeded with the demo shop when NUXT_SEED_DEMO=true.
  * The server starts listening before that ends, so every route awaits the same promise.
  */
 export function useDatabase(): Promise<Database> {
@@ -17,7 +17,8 @@ export function useDatabase(): Promise<Database> {
       dataDir: config.dataDir,
       holder: `rootface server (pid ${process.pid})`,
     }).then(async (database) => {
-      if (String(config.seedDemo) !== 'false') await seedDemoShop(database.db)
+      // The demo shop only on request (NUXT_SEED_DEMO=true; `npm run dev` sets it), never by default in production.
+      if (String(config.seedDemo) === 'true') await seedDemoShop(database.db)
       return database
     })
   }

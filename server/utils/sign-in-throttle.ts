@@ -1,27 +1,161 @@
-// Repeated failed sign-ins for one account or one address are slowed down, not refused:
-// after FREE_FAILURES the next attempt waits 1 s, then 2 s, 4 s... up to MAX_DELAY_MS.
-const FREE_FAILURES = 3
-const MAX_DELAY_MS = 8000
-const WINDOW_MS = 15 * 60 * 1000
+import type { H3Event } from 'h3'
+import { isIP } from 'node:net'
+import { eq, sql } from 'drizzle-orm'
+import type { Db } from '../database/client'
+import { accounts, signInFailures } from '../database/schema'
+import { renderLetter } from './mail-letter'
+import { queueMail, sendSoon } from './mail'
+import { appUrl, shopNameOf } from './mail-links'
 
-const failures = new Map<string, { count: number, last: number }>()
+// Failed sign-ins are counted in the database (sign_in_failures), per account ('account:<e-mail>') and per client
+// address ('address:<ip>'), so every app server sees the same counts and a restart does not forget them.
+// - After FREE_FAILURES failures each further attempt waits 250 ms, 500 ms, 1 s ... up to MAX_DELAY_MS.
+// - At ACCOUNT_LIMIT failures for an account (ADDRESS_LIMIT for an address) sign-in is refused (429) for LOCK_MINUTES;
+//   the account's owner is e-mailed. Counts start over after WINDOW_MINUTES without a failure, and a successful
+//   sign-in clears its account's count.
+// - Every attempt is counted before the password is checked, so fifty attempts sent at once cannot all slip under
+//   the limit.
+export const FREE_FAILURES = 3
+export const MAX_DELAY_MS = 4000
+export const ACCOUNT_LIMIT = 10
+export const ADDRESS_LIMIT = 50
+export const LOCK_MINUTES = 15
+export const WINDOW_MINUTES = 15
 
-function keyCount(key: string, now: number) {
-  const entry = failures.get(key)
-  if (!entry || now - entry.last > WINDOW_MS) return 0
-  return entry.count
+export interface ThrottleKey { key: string, limit: number }
+
+export interface Reservation {
+  keys: ThrottleKey[]
+  /** The highest count among the keys, this attempt included. */
+  attempt: number
 }
 
-export function signInDelayMs(keys: string[], now = Date.now()) {
-  const count = Math.max(0, ...keys.map(key => keyCount(key, now)))
-  if (count < FREE_FAILURES) return 0
-  return Math.min(MAX_DELAY_MS, 1000 * 2 ** (count - FREE_FAILURES))
+export type Reserve = { ok: true, reservation: Reservation, delayMs: number } | { ok: false, retryAfterSeconds: number }
+
+export function signInKeys(email: string, address: string | null): ThrottleKey[] {
+  return [
+    { key: `account:${email.trim().toLowerCase()}`, limit: ACCOUNT_LIMIT },
+    ...(address ? [{ key: `address:${address}`, limit: ADDRESS_LIMIT }] : []),
+  ]
 }
 
-export function recordSignInFailure(keys: string[], now = Date.now()) {
-  for (const key of keys) failures.set(key, { count: keyCount(key, now) + 1, last: now })
+/** The wait before checking the password of the n-th attempt in a row (n counts this one). */
+export function delayForAttempt(n: number) {
+  if (n <= FREE_FAILURES) return 0
+  return Math.min(MAX_DELAY_MS, 250 * 2 ** (n - FREE_FAILURES - 1))
 }
 
-export function clearSignInFailures(keys: string[]) {
-  for (const key of keys) failures.delete(key)
+function trustedProxies(): string[] {
+  const configured = String(useRuntimeConfig().trustedProxies || process.env.NUXT_TRUSTED_PROXIES || '')
+  return configured.split(',').map(s => normalise(s.trim())).filter(Boolean)
+}
+
+function normalise(address: string | undefined | null) {
+  if (!address) return ''
+  return address.startsWith('::ffff:') && isIP(address.slice(7)) === 4 ? address.slice(7) : address
+}
+
+/**
+ * The client's address: the socket's peer, unless that peer is a configured trusted proxy (NUXT_TRUSTED_PROXIES,
+ * comma-separated addresses); then the right-most X-Forwarded-For entry that is not itself a trusted proxy.
+ */
+export function clientAddress(event: H3Event, trusted = trustedProxies()): string | null {
+  const peer = normalise(event.node.req.socket?.remoteAddress)
+  if (!peer) return null
+  if (!trusted.includes(peer)) return peer
+  const forwarded = String(getRequestHeader(event, 'x-forwarded-for') ?? '').split(',').map(s => normalise(s.trim())).filter(Boolean)
+  for (let i = forwarded.length - 1; i >= 0; i--) {
+    const hop = forwarded[i]!
+    if (!trusted.includes(hop)) return isIP(hop) ? hop : peer
+  }
+  return peer
+}
+
+/** Counts this attempt against every key, or refuses it when a key is locked or already at its limit. */
+export async function reserveSignIn(db: Db, keys: ThrottleKey[]): Promise<Reserve> {
+  return db.transaction(async (tx) => {
+    let attempt = 0
+    let refusedUntil = null as Date | null
+    const taken: string[] = []
+    for (const { key, limit } of keys) {
+      await tx.insert(signInFailures).values({ key, failures: 0 }).onConflictDoNothing()
+      const [row] = await tx.select().from(signInFailures).where(eq(signInFailures.key, key)).for('update')
+      const now = new Date()
+      if (row!.lockedUntil && row!.lockedUntil > now) {
+        refusedUntil = refusedUntil && refusedUntil > row!.lockedUntil ? refusedUntil : row!.lockedUntil
+        continue
+      }
+      const stale = now.getTime() - row!.lastFailureAt.getTime() > WINDOW_MINUTES * 60_000 || (row!.lockedUntil && row!.lockedUntil <= now)
+      const before = stale ? 0 : row!.failures
+      if (before >= limit) {
+        // Attempts in flight already reached the limit: refuse without waiting for them to fail.
+        refusedUntil = new Date(now.getTime() + 60_000)
+        continue
+      }
+      attempt = Math.max(attempt, before + 1)
+      taken.push(key)
+      await tx.update(signInFailures).set({ failures: before + 1, lastFailureAt: sql`now()`, lockedUntil: null }).where(eq(signInFailures.key, key))
+    }
+    if (refusedUntil) {
+      // Give back what this attempt took from the other keys.
+      for (const key of taken) {
+        await tx.update(signInFailures).set({ failures: sql`greatest(${signInFailures.failures} - 1, 0)` }).where(eq(signInFailures.key, key))
+      }
+      return { ok: false, retryAfterSeconds: Math.max(1, Math.ceil((refusedUntil.getTime() - Date.now()) / 1000)) }
+    }
+    return { ok: true, reservation: { keys, attempt }, delayMs: delayForAttempt(attempt) }
+  })
+}
+
+/** The attempt failed: keys that reached their limit are locked. Returns whether the account key was locked now. */
+export async function signInFailed(db: Db, reservation: Reservation): Promise<{ accountLocked: boolean }> {
+  let accountLocked = false
+  for (const { key, limit } of reservation.keys) {
+    const [locked] = await db.update(signInFailures)
+      .set({ lockedUntil: sql`now() + make_interval(mins => ${LOCK_MINUTES})` })
+      .where(sql`${signInFailures.key} = ${key} and ${signInFailures.failures} >= ${limit} and ${signInFailures.lockedUntil} is null`)
+      .returning({ key: signInFailures.key })
+    if (locked && key.startsWith('account:')) accountLocked = true
+  }
+  return { accountLocked }
+}
+
+/** The attempt succeeded: the account starts afresh; the address gives back this attempt only. */
+export async function signInSucceeded(db: Db, reservation: Reservation) {
+  for (const { key } of reservation.keys) {
+    if (key.startsWith('account:')) await db.delete(signInFailures).where(eq(signInFailures.key, key))
+    else await releaseAttempt(db, key)
+  }
+}
+
+/** The attempt never reached the password check (e.g. a missing CSRF token): it does not count. */
+export async function signInAbandoned(db: Db, reservation: Reservation) {
+  for (const { key } of reservation.keys) await releaseAttempt(db, key)
+}
+
+async function releaseAttempt(db: Db, key: string) {
+  await db.update(signInFailures).set({ failures: sql`greatest(${signInFailures.failures} - 1, 0)` })
+    .where(sql`${signInFailures.key} = ${key} and ${signInFailures.lockedUntil} is null`)
+}
+
+/** Tells the account's owner that sign-in was locked after repeated failures (once per lock). */
+export async function mailAccountLocked(db: Db, accountId: number, now = new Date()) {
+  const [account] = await db.select({ id: accounts.id, name: accounts.name, email: accounts.email, active: accounts.active })
+    .from(accounts).where(eq(accounts.id, accountId)).limit(1)
+  if (!account?.active) return
+  const shopName = await shopNameOf(db)
+  const body = renderLetter({
+    greeting: `Hello ${account.name},`,
+    paragraphs: [
+      `Someone tried to sign in to your Rootface account ${ACCOUNT_LIMIT} times with a wrong password. Sign-in to your account is paused for ${LOCK_MINUTES} minutes.`,
+      'If it was you, wait and try again, or choose a new password with "Forgot your password?" on the sign-in page. If it was not you, tell your quality manager.',
+    ],
+    action: { label: 'Go to the sign-in page', href: `${appUrl()}/sign-in` },
+    footnotes: ['Your password has not been changed and nobody has signed in with it.'],
+  }, shopName)
+  const queued = await queueMail(db, {
+    dedupeKey: `sign-in-locked:${account.id}:${Math.floor(now.getTime() / (LOCK_MINUTES * 60_000))}`,
+    kind: 'sign-in-locked', to: account.email, subject: 'Sign-in to your Rootface account is paused', ...body,
+  })
+  if (queued) sendSoon(db)
 }

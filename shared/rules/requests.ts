@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { isCalendarDay } from '../schemas/fields'
 import type { ContinuityInput } from './continuity'
 import type { GaugeInput } from './gauge'
 import type { HeatInputInput } from './heat-input'
@@ -16,7 +17,7 @@ const positive = (what: string) => z.number({ required_error: `${what} is requir
 const nonNegative = (what: string) => z.number({ required_error: `${what} is required`, invalid_type_error: `${what} must be a number` })
   .finite(`${what} must be a finite number`).min(0, `${what} cannot be negative`).max(LARGEST, `${what} is too large`)
 const day = (what: string) => z.string({ required_error: `${what} is required`, invalid_type_error: `${what} must be a date string` })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, `${what} must be a date as YYYY-MM-DD`)
+  .regex(/^\d{4}-\d{2}-\d{2}$/, `${what} must be a date as YYYY-MM-DD`).refine(isCalendarDay, `${what} is not a calendar date`)
 
 export const codeSchema = z.enum(['asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1'], {
   errorMap: () => ({ message: 'code must be one of asme-ix, aws-d1.1, aws-d1.3, iso-9606-1' }),

@@ -1,16 +1,13 @@
 import { z } from 'zod'
 import { processSchema } from './list'
+import { brokenCharacterMessage, calendarDate, hasLoneSurrogate, wellFormedText } from './fields'
 
 /** A calendar date as YYYY-MM-DD that exists (2026-02-30 does not). */
-export const calendarDay = z.string({ required_error: 'Date is required' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
-  .refine((s) => {
-    const [y, m, d] = s.split('-').map(Number) as [number, number, number]
-    const date = new Date(Date.UTC(y, m - 1, d))
-    return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d
-  }, 'Not a calendar date')
+export const calendarDay = calendarDate('Date', { required: 'Date is required', format: 'Use YYYY-MM-DD', real: 'Not a calendar date' })
 
 const reference = z.string({ required_error: 'Reference is required (job, weld or WPS)' }).trim()
   .min(1, 'Reference is required (job, weld or WPS)').max(200, 'At most 200 characters')
+  .regex(wellFormedText, brokenCharacterMessage('Reference'))
 
 export const continuityEntrySchema = z.object({
   welderId: z.number({ required_error: 'Pick the welder' }).int().positive('Pick the welder'),
@@ -34,13 +31,15 @@ export type ContinuityBulkInput = z.infer<typeof continuityBulkSchema>
 export const maxImportBytes = 1_500_000
 
 export const continuityImportSchema = z.object({
-  csv: z.string({ required_error: 'csv is required' }).min(1, 'The file is empty').max(maxImportBytes, 'The file is larger than 1.5 MB; split it'),
+  csv: z.string({ required_error: 'csv is required' }).min(1, 'The file is empty').max(maxImportBytes, 'The file is larger than 1.5 MB; split it')
+    .refine(v => !hasLoneSurrogate(v), brokenCharacterMessage('The file')),
   commit: z.boolean().default(false),
 })
 
 /** One CSV row after its header names are mapped: stamp, process, date, reference. */
 export const continuityImportRowSchema = z.object({
-  stamp: z.string({ required_error: 'Stamp is missing' }).trim().min(1, 'Stamp is missing').max(20, 'Stamp is too long'),
+  stamp: z.string({ required_error: 'Stamp is missing' }).trim().min(1, 'Stamp is missing').max(20, 'Stamp is too long')
+    .regex(wellFormedText, brokenCharacterMessage('Stamp')),
   process: z.string({ required_error: 'Process is missing' }).trim().toUpperCase().pipe(processSchema),
   weldedOn: calendarDay,
   reference,

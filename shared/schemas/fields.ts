@@ -29,14 +29,52 @@ export function requiredNumber(what: string, options: { min?: number, positive?:
   return z.preprocess(textToNumber, n)
 }
 
+/** A UTF-16 surrogate without its partner: no character at all, and PostgreSQL cannot store it. */
+const loneSurrogate = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/
+
+/** Whether text holds a broken character (a lone surrogate, e.g. "A\ud800B" from JSON). */
+export function hasLoneSurrogate(text: string) {
+  return loneSurrogate.test(text)
+}
+
+/** Text made only of whole characters (every surrogate paired), for `.regex(...)` so a string schema stays a string schema. */
+export const wellFormedText = /^(?:[^\uD800-\uDFFF]|[\uD800-\uDBFF][\uDC00-\uDFFF])*$/
+
+export function brokenCharacterMessage(what: string) {
+  return `${what} contains a broken character; type it again`
+}
+
 export function optionalText(what: string, max = 200) {
   return z.preprocess(v => (typeof v === 'string' && v.trim() === '' ? null : blankToNull(v)),
-    z.string({ invalid_type_error: `${what} must be text` }).trim().max(max, `${what}: at most ${max} characters`).nullable())
+    z.string({ invalid_type_error: `${what} must be text` }).trim().max(max, `${what}: at most ${max} characters`)
+      .regex(wellFormedText, brokenCharacterMessage(what)).nullable())
 }
 
 export function requiredText(what: string, max = 200) {
   return z.string({ required_error: `Enter ${what}`, invalid_type_error: `Enter ${what}` }).trim()
     .min(1, `Enter ${what}`).max(max, `${what}: at most ${max} characters`)
+    .regex(wellFormedText, brokenCharacterMessage(what))
+}
+
+/**
+ * Whether YYYY-MM-DD names a day of the proleptic Gregorian calendar (ISO 8601:2019, 4.3.2; leap years by the
+ * Gregorian rule): 2026-13-45 and 2026-02-30 do not.
+ */
+export function isCalendarDay(text: string) {
+  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text)
+  if (!match) return false
+  const [year, month, day] = [Number(match[1]), Number(match[2]), Number(match[3])]
+  if (month < 1 || month > 12 || day < 1) return false
+  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0
+  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1]!
+  return day <= days
+}
+
+/** A calendar date as YYYY-MM-DD that exists; `what` names the field in the messages. */
+export function calendarDate(what = 'Date', messages: { required?: string, format?: string, real?: string } = {}) {
+  return z.string({ required_error: messages.required ?? `Enter ${what.toLowerCase()}`, invalid_type_error: messages.format ?? `${what} must be a date as YYYY-MM-DD` })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, messages.format ?? `${what} must be a date as YYYY-MM-DD`)
+    .refine(isCalendarDay, messages.real ?? `${what} is not a calendar date`)
 }
 
 /** A min–max range; either end may be open (null). */
@@ -68,8 +106,7 @@ export const codeIdSchema = z.enum(['asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606
 export const unitIdSchema = z.enum(['in', 'mm'], { errorMap: () => ({ message: 'Pick in or mm' }) })
 export const transferIdSchema = z.enum(['short-circuit', 'globular', 'spray', 'pulse'], { errorMap: () => ({ message: 'Pick a transfer mode' }) })
 export const editionSchema = z.string({ required_error: 'Enter the edition' }).trim().regex(/^\d{4}$/, 'Enter the edition year, e.g. 2023')
-export const daySchema = z.string({ required_error: 'Enter a date' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter a date as YYYY-MM-DD')
-  .refine(d => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), 'Enter a real date')
+export const daySchema = calendarDate('Date', { required: 'Enter a date', format: 'Enter a date as YYYY-MM-DD', real: 'Enter a real date' })
 
 /** A body that carries only the version being acted on (approve, certify, revise). */
 export const versionBodySchema = z.object({ version: versionSchema }).strict()

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { calendarDate } from './fields'
 import { listQuerySchema } from './list'
 
 export const mailListQuerySchema = listQuerySchema(['createdAt', 'to', 'subject', 'status', 'kind']).extend({
@@ -9,5 +10,5 @@ export const mailListQuerySchema = listQuerySchema(['createdAt', 'to', 'subject'
 
 /** Run the reminder job now; `today` (for a test clock) is honoured only when the server allows it. */
 export const runRemindersSchema = z.object({
-  today: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'A day as YYYY-MM-DD').optional(),
+  today: calendarDate('today').optional(),
 })

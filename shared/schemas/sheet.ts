@@ -1,8 +1,7 @@
 import { z } from 'zod'
+import { calendarDate } from './fields'
 
-const isoDay = (what: string) => z.string({ invalid_type_error: `${what} must be a date` })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, `${what} must be a date as YYYY-MM-DD`)
-  .refine(v => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v), `${what} is not a calendar date`)
+const isoDay = (what: string) => calendarDate(what)
 
 /** ?format=json gives the sheet's content for the read-only record view; the default is the PDF download. */
 export const sheetQuerySchema = z.object({ format: z.enum(['pdf', 'json']).default('pdf') })

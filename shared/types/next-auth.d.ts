@@ -8,6 +8,8 @@ declare module 'next-auth' {
   interface User {
     role: Role
     welderId: number | null
+    /** The account's session generation when it signed in (server/utils/auth.ts). */
+    generation: number
   }
 }
 
@@ -16,5 +18,9 @@ declare module 'next-auth/jwt' {
     uid?: number
     role?: Role
     welderId?: number | null
+    /** Session generation of the account at sign-in; a higher one in the account row ends this session. */
+    gen?: number
+    /** Seconds since 1970 at sign-in: a session ends SESSION_MAX_AGE after it, however active. */
+    signedInAt?: number
   }
 }

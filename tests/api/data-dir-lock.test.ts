@@ -17,7 +17,7 @@ describe.skipIf(!!process.env.TEST_DATABASE_URL)('one process per PGlite data di
   it('a second server on the same data directory stops at once, naming the holder; the first keeps working', async () => {
     first = await startServer({ dataDir })
     const second = spawnSync(process.execPath, [serverEntry], {
-      env: { ...process.env, PORT: '0', HOST: '127.0.0.1', NUXT_DATA_DIR: join(dataDir, 'db'), AUTH_ORIGIN: 'http://127.0.0.1:1/api/auth', DATABASE_URL: '' },
+      env: { ...process.env, PORT: '0', HOST: '127.0.0.1', NUXT_DATA_DIR: join(dataDir, 'db'), AUTH_ORIGIN: 'http://127.0.0.1:1/api/auth', AUTH_SECRET: 'test-secret-for-rootface-api-tests', DATABASE_URL: '' },
       encoding: 'utf8', timeout: 30_000,
     })
     expect(second.status).toBe(1)

@@ -52,6 +52,8 @@ export async function startServer(options: { dataDir?: string, databaseUrl?: str
     env: {
       ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: join(dataDir, 'db'),
       AUTH_ORIGIN: `${url}/api/auth`, AUTH_SECRET: 'test-secret-for-rootface-api-tests', NODE_ENV: 'production',
+      // The suites sign in as the demo accounts; a test that needs an empty database passes NUXT_SEED_DEMO=false.
+      NUXT_SEED_DEMO: 'true',
       ...(databaseUrl ? { DATABASE_URL: databaseUrl, NUXT_DATABASE_URL: databaseUrl } : { DATABASE_URL: '', NUXT_DATABASE_URL: '' }),
       ...options.env,
     },

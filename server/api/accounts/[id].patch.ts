@@ -36,6 +36,8 @@ export default defineEventHandler(async (event) => {
     }).where(eq(accounts.id, id)).returning({ id: accounts.id, name: accounts.name, role: accounts.role, welderId: accounts.welderId, active: accounts.active })
     // A deactivated account's open links stop working at once.
     if (patch.active === false) await tx.delete(accountTokens).where(and(eq(accountTokens.accountId, id), isNull(accountTokens.usedAt)))
+    // Deactivation, reactivation and a new welder link end the account's sessions (a reactivated account signs in afresh).
+    if ((patch.active !== undefined && patch.active !== before.active) || (patch.welderId !== undefined && patch.welderId !== before.welderId)) await endSessions(tx, id)
     await recordAudit(tx, { accountId: user.id, action: patch.active === false ? 'deactivate' : patch.active === true && !before.active ? 'reactivate' : 'update', recordType: 'account', recordId: id, before, after: row })
     return row!
   })

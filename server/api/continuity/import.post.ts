@@ -1,4 +1,5 @@
-import { checkImport, insertEntries } from '../../database/continuity'
+import { insertEntries } from '../../database/continuity'
+import { checkImportOffThread } from '../../workers/import-check'
 import { continuityImportSchema } from '#shared/schemas/continuity'
 
 /**
@@ -9,7 +10,8 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, staff)
   const { csv, commit } = await validBody(event, continuityImportSchema)
   const db = await useDb()
-  const { rows, errors } = await checkImport(db, csv, todayIso())
+  // The CSV is parsed and checked in a worker thread (server/workers/import-check.ts).
+  const { rows, errors } = await checkImportOffThread(db, csv, todayIso())
   const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
   if (!commit) return { ...summary, stored: 0 }
   if (errors.length) {

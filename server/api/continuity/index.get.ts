@@ -1,9 +1,10 @@
 import { and, count, eq, gte, ilike, lte, or, type SQL } from 'drizzle-orm'
 import { z } from 'zod'
 import { accounts, continuityEntries, welders } from '../../database/schema'
+import { calendarDate } from '#shared/schemas/fields'
 import { listQuerySchema, processSchema } from '#shared/schemas/list'
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+const isoDate = calendarDate('Date', { format: 'Use YYYY-MM-DD' })
 const querySchema = listQuerySchema(['weldedOn', 'welder', 'process']).extend({
   process: processSchema.optional(),
   welderId: z.coerce.number().int().positive().max(2_147_483_647).optional(),

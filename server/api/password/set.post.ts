@@ -17,6 +17,8 @@ export default defineEventHandler(async (event) => {
       .returning({ id: accountTokens.id })
     if (!claimed) return false
     await tx.update(accounts).set({ passwordHash }).where(eq(accounts.id, state.account.id))
+    // A new password ends every session of the account.
+    await endSessions(tx, state.account.id)
     // Any other open link of the account stops working once a password is chosen.
     await tx.delete(accountTokens).where(and(eq(accountTokens.accountId, state.account.id), isNull(accountTokens.usedAt), ne(accountTokens.id, claimed.id)))
     await recordAudit(tx, { accountId: state.account.id, action: state.purpose === 'invitation' ? 'accept-invitation' : 'reset-password', recordType: 'account', recordId: state.account.id })
