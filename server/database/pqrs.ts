@@ -1,12 +1,14 @@
 import { and, asc, eq, inArray } from 'drizzle-orm'
 import type { Db } from './client'
-import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, signatures } from './schema'
+import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures } from './schema'
 import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
 import { tensileOf } from '#shared/qualification/tensile-acceptance'
 import { psiToMpa, type PqrActuals, type PqrDraft, type PqrResults } from '#shared/schemas/pqr'
 import type { CodeId, Unit } from '#shared/rules/types'
+import { grantedProjectIds } from './projects'
+import type { SessionUser } from '../utils/auth'
 
 export type PqrRow = typeof pqrs.$inferSelect
 
@@ -110,3 +112,20 @@ export function judgedResults(row: Pick<PqrRow, 'id' | 'code' | 'unit'>, results
 }
 
 export { pqrBendSpecimens, pqrTensileSpecimens }
+
+/**
+ * Who may read a PQR, its sheet and its files: staff any; an auditor those supporting a WPS on a granted project;
+ * a welder none. False also when there is no such PQR.
+ */
+export async function mayReadPqr(db: Db, user: SessionUser, id: number) {
+  const [row] = await db.select({ id: pqrs.id }).from(pqrs).where(eq(pqrs.id, id))
+  if (!row) return false
+  if (user.role === 'supervisor' || user.role === 'inspector') return true
+  if (user.role !== 'auditor') return false
+  const granted = await grantedProjectIds(db, user.id)
+  if (!granted.length) return false
+  const hit = await db.select({ id: procedurePqrs.pqrId }).from(procedurePqrs)
+    .innerJoin(projectProcedures, eq(projectProcedures.procedureId, procedurePqrs.procedureId))
+    .where(and(eq(procedurePqrs.pqrId, id), inArray(projectProcedures.projectId, granted))).limit(1)
+  return hit.length > 0
+}

@@ -1,13 +1,13 @@
 import { createError, type H3Error } from 'h3'
 import { isFailure, type Failure, type Outcome } from '../../shared/types/outcome'
 
-const statuses = { missing: 404, stale: 409, frozen: 409, conflict: 409, field: 400, invalid: 400, gone: 410 } as const
-
 /** The one place a Failure becomes an HTTP error; 400s and 409s with a path carry `data.fieldErrors` like validBody's. */
 export function httpError(failure: Failure): H3Error {
   switch (failure.fail) {
     case 'missing':
       return createError({ statusCode: 404, statusMessage: `${failure.what} not found` })
+    case 'forbidden':
+      return createError({ statusCode: 403, statusMessage: failure.message })
     case 'field': {
       const statusCode = failure.status ?? 400
       const statusMessage = statusCode === 413 ? 'File too large' : statusCode === 415 ? 'File type not accepted' : 'Invalid body'
@@ -27,9 +27,11 @@ export function httpError(failure: Failure): H3Error {
         ...(failure.path ? { data: { formErrors: [], fieldErrors: { [failure.path]: [failure.message] } } } : {}),
       })
     case 'gone':
-      return createError({ statusCode: statuses.gone, statusMessage: 'File missing', message: failure.message })
+      return createError({ statusCode: 410, statusMessage: 'File missing', message: failure.message })
+    case 'refused':
+      return createError({ statusCode: 422, statusMessage: failure.title, message: failure.message, ...(failure.detail ? { data: failure.detail } : {}) })
     default:
-      return createError({ statusCode: statuses[failure.fail], statusMessage: 'Conflict', message: failure.message })
+      return createError({ statusCode: 409, statusMessage: 'Conflict', message: failure.message })
   }
 }
 
