@@ -1,12 +1,18 @@
-import Papa from 'papaparse'
-import { eq, inArray, sql } from 'drizzle-orm'
+import { count, eq, gte, ilike, inArray, lte, or, sql } from 'drizzle-orm'
+import { standingsOf } from './standings'
+import type { SessionUser } from '../utils/auth'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import { fieldFailure, forbidden, invalid, missing, type Outcome } from '../../shared/types/outcome'
+import type { ContinuityBulkInput, ContinuityEntryInput } from '../../shared/schemas/continuity'
+import type { ContinuityListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { continuityEntries, shopSettings, welders } from './schema'
-import { continuityImportRowSchema, importHeaders } from '../../shared/schemas/continuity'
-import { recordAudit } from '../utils/audit'
+import { accounts, continuityEntries, shopSettings, welders } from './schema'
+import { recordAudit } from './audit'
+import { parseImportOffThread } from '../workers/import-check'
+import type { RowError } from '../workers/import-parse'
 
 export interface NewEntry { welderId: number, process: string, weldedOn: string, reference: string }
-export interface RowError { line: number, field: string, message: string }
+export type { RowError } from '../workers/import-parse'
 export interface ImportRow extends NewEntry { line: number, stamp: string, welderName: string }
 
 export async function welderLogsOwnContinuity(db: Db) {
@@ -37,45 +43,106 @@ export async function insertEntries(db: Db, entries: NewEntry[], accountId: numb
   })
 }
 
-const normal = (h: string) => h.trim().toLowerCase().replace(/[_\s]+/g, ' ')
-
-/** Parse and check a continuity CSV: the rows it would store and every row error, with its line number. */
+/**
+ * Parse and check a continuity CSV: the rows it would store and every row error, with its line number. The parsing runs
+ * in a worker thread (server/workers/import-check.ts), so a 40,000-row file does not hold up other requests.
+ */
 export async function checkImport(db: Db, csv: string, today: string): Promise<{ rows: ImportRow[], errors: RowError[] }> {
-  const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ''), {
-    header: true, delimiter: ',', skipEmptyLines: 'greedy', transformHeader: normal,
-  })
-  const errors: RowError[] = []
-  const fields = parsed.meta.fields ?? []
-  const column = Object.fromEntries(Object.entries(importHeaders).map(([key, names]) => [key, fields.find(f => names.includes(f))]))
-  const missing = Object.entries(column).filter(([, f]) => !f).map(([k]) => importHeaders[k as keyof typeof importHeaders][0])
-  if (missing.length) return { rows: [], errors: [{ line: 1, field: 'header', message: `The first line must name the columns; missing: ${missing.join(', ')}` }] }
-  for (const e of parsed.errors) errors.push({ line: (e.row ?? 0) + 2, field: 'row', message: e.message })
-
-  const stamps = [...new Set(parsed.data.map(r => (r[column.stamp!] ?? '').trim().toLowerCase()).filter(Boolean))]
+  const parsed = await parseImportOffThread(csv)
+  const errors = parsed.errors
+  if (errors.some(e => e.field === 'header')) return { rows: [], errors }
+  const stamps = [...new Set(parsed.stamps.map(s => s.toLowerCase()))]
   const roster = stamps.length
     ? await db.select({ id: welders.id, stamp: welders.stamp, name: welders.name }).from(welders).where(inArray(sql`lower(${welders.stamp})`, stamps))
     : []
   const byStamp = new Map(roster.map(w => [w.stamp.toLowerCase(), w]))
   const rows: ImportRow[] = []
   const seen = new Set<string>()
-  parsed.data.forEach((raw, i) => {
-    const line = i + 2
-    const result = continuityImportRowSchema.safeParse({
-      stamp: raw[column.stamp!], process: raw[column.process!], weldedOn: raw[column.weldedOn!]?.trim(), reference: raw[column.reference!],
-    })
-    if (!result.success) {
-      for (const [field, messages] of Object.entries(result.error.flatten().fieldErrors)) errors.push({ line, field, message: messages?.[0] ?? 'Invalid' })
-      return
+  for (let i = 0; i < parsed.lines.length; i++) {
+    const line = parsed.lines[i]!
+    const [stamp, process, weldedOn, reference] = [parsed.stamps[i]!, parsed.processes[i]!, parsed.days[i]!, parsed.references[i]!]
+    const welder = byStamp.get(stamp.toLowerCase())
+    if (!welder) {
+      errors.push({ line, field: 'stamp', message: `No welder with stamp ${stamp} on the roster` })
+      continue
     }
-    const r = result.data
-    const welder = byStamp.get(r.stamp.toLowerCase())
-    if (!welder) return errors.push({ line, field: 'stamp', message: `No welder with stamp ${r.stamp} on the roster` })
-    if (r.weldedOn > today) return errors.push({ line, field: 'weldedOn', message: `${r.weldedOn} is after today` })
-    const key = `${welder.id}|${r.process}|${r.weldedOn}|${r.reference}`
-    if (seen.has(key)) return errors.push({ line, field: 'row', message: 'The same entry appears twice in the file' })
+    if (weldedOn > today) {
+      errors.push({ line, field: 'weldedOn', message: `${weldedOn} is after today` })
+      continue
+    }
+    const key = `${welder.id}|${process}|${weldedOn}|${reference}`
+    if (seen.has(key)) {
+      errors.push({ line, field: 'row', message: 'The same entry appears twice in the file' })
+      continue
+    }
     seen.add(key)
-    rows.push({ line, stamp: welder.stamp, welderName: welder.name, welderId: welder.id, process: r.process, weldedOn: r.weldedOn, reference: r.reference })
-  })
+    rows.push({ line, stamp: welder.stamp, welderName: welder.name, welderId: welder.id, process, weldedOn, reference })
+  }
   if (!rows.length && !errors.length) errors.push({ line: 1, field: 'file', message: 'The file has a header but no rows' })
   return { rows, errors: errors.sort((a, b) => a.line - b.line) }
+}
+
+/** Staff log continuity for anyone; a welder for themselves, and only when the shop allows it (403 otherwise). */
+export async function mayLogContinuity(db: Db, user: SessionUser): Promise<Outcome<true>> {
+  if (user.role === 'welder' && !await welderLogsOwnContinuity(db)) return forbidden('Your shop has continuity logged by the inspector or the quality manager')
+  return true
+}
+
+/** One entry, checked against today and the roster; answers the welder's standings after it. */
+export async function logEntry(db: Db, user: SessionUser, input: ContinuityEntryInput, today: string) {
+  if (user.role === 'welder' && input.welderId !== user.welderId) return missing('Welder')
+  if (input.weldedOn > today) return fieldFailure('weldedOn', 'The date is after today')
+  if ((await missingWelders(db, [input.welderId])).length) return fieldFailure('welderId', 'No such welder on the roster')
+  await insertEntries(db, [input], user.id, 'create')
+  const standings = (await standingsOf(db, [input.welderId], today)).get(input.welderId) ?? []
+  return { stored: 1, standings }
+}
+
+/** One process and date for many welders, all stored or none. */
+export async function logBulk(db: Db, user: SessionUser, input: ContinuityBulkInput, today: string) {
+  if (input.weldedOn > today) return fieldFailure('weldedOn', 'The date is after today')
+  const unknown = await missingWelders(db, input.welderIds)
+  if (unknown.length) return fieldFailure('welderIds', `Not on the roster: ${unknown.join(', ')}`)
+  const stored = await insertEntries(db, input.welderIds.map(welderId => ({ welderId, process: input.process, weldedOn: input.weldedOn, reference: input.reference })), user.id, 'bulk')
+  return { stored }
+}
+
+/** A CSV import: without `commit` the preview and row errors; with it every row in one transaction, or nothing when any row is wrong. */
+export async function importLog(db: Db, user: SessionUser, csv: string, commit: boolean, today: string) {
+  const { rows, errors } = await checkImport(db, csv, today)
+  const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
+  if (!commit) return { ...summary, stored: 0 }
+  if (errors.length) return invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors)
+  const stored = await insertEntries(db, rows.map(({ welderId, process, weldedOn, reference }) => ({ welderId, process, weldedOn, reference })), user.id, 'import')
+  return { ...summary, preview: [], stored }
+}
+
+const entrySortColumns = { weldedOn: continuityEntries.weldedOn, welder: welders.name, process: continuityEntries.process }
+
+/** The continuity log, paged; a welder sees only their own entries. */
+export async function listEntries(db: Db, user: SessionUser, query: ContinuityListQuery) {
+  const where = allOf([
+    user.role === 'welder' && eq(continuityEntries.welderId, user.welderId ?? -1),
+    query.welderId && eq(continuityEntries.welderId, query.welderId),
+    query.process && eq(continuityEntries.process, query.process),
+    query.from && gte(continuityEntries.weldedOn, query.from),
+    query.to && lte(continuityEntries.weldedOn, query.to),
+    query.q && or(ilike(welders.name, containsPattern(query.q)), ilike(continuityEntries.reference, containsPattern(query.q))),
+  ])
+  return pageOf(query, ({ limit, offset }) => db.select({
+    id: continuityEntries.id, weldedOn: continuityEntries.weldedOn, process: continuityEntries.process, reference: continuityEntries.reference,
+    welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp, recordedBy: accounts.name,
+  }).from(continuityEntries).innerJoin(welders, eq(welders.id, continuityEntries.welderId)).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))
+    .where(where).orderBy(orderOf(entrySortColumns[query.sort], query.dir), continuityEntries.id).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(continuityEntries).innerJoin(welders, eq(welders.id, continuityEntries.welderId)).where(where))
+}
+
+/** Removes an entry logged by mistake (kept in the audit trail). */
+export async function removeEntry(db: Db, user: SessionUser, id: number) {
+  const removed = await db.transaction(async (tx) => {
+    const [row] = await tx.delete(continuityEntries).where(eq(continuityEntries.id, id)).returning()
+    if (row) await recordAudit(tx as unknown as Db, { accountId: user.id, action: 'delete', recordType: 'continuity', recordId: id, before: row })
+    return row
+  })
+  return removed ?? missing('Entry')
 }

@@ -1,12 +1,16 @@
-import { and, asc, eq, inArray } from 'drizzle-orm'
+import { and, asc, count, eq, ilike, inArray, or } from 'drizzle-orm'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import type { PqrListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, signatures } from './schema'
+import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures } from './schema'
 import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
 import { tensileOf } from '#shared/qualification/tensile-acceptance'
 import { psiToMpa, type PqrActuals, type PqrDraft, type PqrResults } from '#shared/schemas/pqr'
 import type { CodeId, Unit } from '#shared/rules/types'
+import { grantedProjectIds } from './projects'
+import type { SessionUser } from '../utils/auth'
 
 export type PqrRow = typeof pqrs.$inferSelect
 
@@ -110,3 +114,41 @@ export function judgedResults(row: Pick<PqrRow, 'id' | 'code' | 'unit'>, results
 }
 
 export { pqrBendSpecimens, pqrTensileSpecimens }
+
+/**
+ * Who may read a PQR, its sheet and its files: staff any; an auditor those supporting a WPS on a granted project;
+ * a welder none. False also when there is no such PQR.
+ */
+export async function mayReadPqr(db: Db, user: SessionUser, id: number) {
+  const [row] = await db.select({ id: pqrs.id }).from(pqrs).where(eq(pqrs.id, id))
+  if (!row) return false
+  if (user.role === 'supervisor' || user.role === 'inspector') return true
+  if (user.role !== 'auditor') return false
+  const granted = await grantedProjectIds(db, user.id)
+  if (!granted.length) return false
+  const hit = await db.select({ id: procedurePqrs.pqrId }).from(procedurePqrs)
+    .innerJoin(projectProcedures, eq(projectProcedures.procedureId, procedurePqrs.procedureId))
+    .where(and(eq(procedurePqrs.pqrId, id), inArray(projectProcedures.projectId, granted))).limit(1)
+  return hit.length > 0
+}
+
+/** The PQR list with what the support check needs of each (staff). */
+export async function listPqrs(db: Db, query: PqrListQuery) {
+  const where = allOf([
+    query.status && eq(pqrs.status, query.status),
+    query.process && eq(pqrs.process, query.process),
+    query.code && eq(pqrs.code, query.code),
+    query.pNumber && eq(baseMetals.pNumber, query.pNumber),
+    query.q && or(ilike(pqrs.number, containsPattern(query.q)), ilike(pqrs.labReportNumber, containsPattern(query.q))),
+  ])
+  const page = await pageOf(query, ({ limit, offset }) => db.select({
+    id: pqrs.id, number: pqrs.number, testDate: pqrs.testDate, code: pqrs.code, edition: pqrs.edition, unit: pqrs.unit, process: pqrs.process,
+    transfer: pqrs.transfer, couponThickness: pqrs.couponThickness, status: pqrs.status, labReportNumber: pqrs.labReportNumber,
+    baseMetalId: pqrs.baseMetalId, baseMetal: baseMetals.specification, baseGrade: baseMetals.grade, pNumber: baseMetals.pNumber, groupNumber: baseMetals.groupNumber,
+    fillerMetalId: pqrs.fillerMetalId, fillerSpecification: fillerMetals.specification, filler: fillerMetals.classification, fNumber: fillerMetals.fNumber, aNumber: fillerMetals.aNumber,
+  }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
+    .where(where).orderBy(orderOf(pqrs[query.sort], query.dir), asc(pqrs.number)).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).where(where))
+  const support = await supportPqrs(db, page.items.map(r => r.id))
+  return { ...page, items: page.items.map(r => ({ ...r, support: support.find(s => s.id === r.id)! })) }
+}

@@ -14,8 +14,8 @@ import { pqrSheet } from './pqr'
 import { loadPqr, loadProcedure, loadWelderTest, shopName } from './records'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
-import { todayIso } from '../utils/standings'
-import { attachmentsOf } from '../utils/attachments'
+import { todayIso } from '../utils/today'
+import { attachmentsOf } from '../database/attachments'
 import type { AttachmentRecordType } from '#shared/schemas/attachment'
 
 /** The public address the QR codes point at: AUTH_ORIGIN in production (required there), else the request's own. */

@@ -1,8 +1,7 @@
 import type { H3Event } from 'h3'
-import { eq, sql } from 'drizzle-orm'
+import { eq } from 'drizzle-orm'
 import { getToken } from '#auth'
 import type { JWT } from 'next-auth/jwt'
-import type { Db } from '../database/client'
 import { accounts } from '../database/schema'
 
 export interface SessionUser {
@@ -62,18 +61,5 @@ export async function loadUser(id: number, generation: number): Promise<SessionU
   return { id: row.id, name: row.name, email: row.email, role: row.role, welderId: row.welderId }
 }
 
-/**
- * Ends every session of the account (every device): sign-out, "sign out of all devices", password change or reset,
- * role change, deactivation and reactivation. Run it inside the transaction that makes the change.
- */
-export async function endSessions(db: Db, accountId: number) {
-  await db.update(accounts).set({ sessionGeneration: sql`${accounts.sessionGeneration} + 1` }).where(eq(accounts.id, accountId))
-}
-
 export const everyone = roles
 export const staff = ['supervisor', 'inspector'] as const
-
-export async function accountExists(db: Db, id: number) {
-  const [row] = await db.select({ id: accounts.id }).from(accounts).where(eq(accounts.id, id)).limit(1)
-  return !!row
-}

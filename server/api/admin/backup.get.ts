@@ -4,13 +4,14 @@ import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { format } from 'date-fns'
 import { s3Bucket, writeBackupArchive } from '../../backup/archive'
+import { recordAudit } from '../../database/audit'
 
 /** GET /api/admin/backup: a restorable archive of the embedded database and the stored files, taken while it runs (supervisor) */
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const database = await useDatabase()
   if (!database.backup) {
-    throw conflict('This server runs on a PostgreSQL server: back it up with pg_dump (npm run db:backup does so, with the files).')
+    throw httpError(conflict('This server runs on a PostgreSQL server: back it up with pg_dump (npm run db:backup does so, with the files).'))
   }
   const dir = await mkdtemp(join(tmpdir(), 'rootface-download-'))
   const file = join(dir, 'backup.tar.gz')

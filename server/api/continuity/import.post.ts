@@ -1,5 +1,4 @@
-import { insertEntries } from '../../database/continuity'
-import { checkImportOffThread } from '../../workers/import-check'
+import { importLog } from '../../database/continuity'
 import { continuityImportSchema } from '#shared/schemas/continuity'
 
 /**
@@ -9,17 +8,5 @@ import { continuityImportSchema } from '#shared/schemas/continuity'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, staff)
   const { csv, commit } = await validBody(event, continuityImportSchema)
-  const db = await useDb()
-  // The CSV is parsed and checked in a worker thread (server/workers/import-check.ts).
-  const { rows, errors } = await checkImportOffThread(db, csv, todayIso())
-  const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
-  if (!commit) return { ...summary, stored: 0 }
-  if (errors.length) {
-    throw createError({
-      statusCode: 400, statusMessage: 'Invalid body', message: `${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`,
-      data: { formErrors: [`${errors.length} row errors: nothing was imported`], fieldErrors: {}, rowErrors: errors },
-    })
-  }
-  const stored = await insertEntries(db, rows.map(({ welderId, process, weldedOn, reference }) => ({ welderId, process, weldedOn, reference })), user.id, 'import')
-  return { ...summary, preview: [], stored }
+  return orThrow(await importLog(await useDb(), user, csv, commit, todayIso()))
 })

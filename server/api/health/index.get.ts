@@ -1,4 +1,4 @@
-import { sql } from 'drizzle-orm'
+import { ping } from '../../database/admin'
 
 /**
  * GET /api/health: public; answers once the database is open and migrated. A PostgreSQL server is asked `select 1`;
@@ -7,6 +7,6 @@ import { sql } from 'drizzle-orm'
  */
 export default defineEventHandler(async () => {
   const { db, driver } = await useDatabase()
-  if (driver === 'postgres') await db.execute(sql`select 1`)
+  if (driver === 'postgres') await ping(db)
   return { ok: true, driver }
 })

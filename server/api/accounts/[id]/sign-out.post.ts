@@ -1,3 +1,4 @@
+import { signOutEverywhere } from '../../../database/accounts'
 import { endSessionsSchema } from '#shared/schemas/sessions'
 import { idParamSchema } from '#shared/schemas/list'
 
@@ -6,13 +7,5 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   await validBody(event, endSessionsSchema)
-  const db = await useDb()
-  const done = await db.transaction(async (tx) => {
-    if (!await accountExists(tx, id)) return false
-    await endSessions(tx, id)
-    await recordAudit(tx, { accountId: user.id, action: 'sign-out-everywhere', recordType: 'account', recordId: id })
-    return true
-  })
-  if (!done) throw notFound('Account')
-  return { signedOut: true }
+  return orThrow(await signOutEverywhere(await useDb(), user, id))
 })

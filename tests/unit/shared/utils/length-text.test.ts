@@ -1,7 +1,10 @@
-import convert from 'convert-units'
+import { createRequire } from 'node:module'
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { readLength } from '../../../../shared/utils/length-text'
+
+type Convert = (value: number) => { from: (unit: string) => { to: (unit: string) => number } }
+const convert = createRequire(import.meta.url)('convert-units') as Convert
 
 // Fractions and mixed numbers as the trade writes lengths (3/8 in plate, 1-1/2 in pipe): common practice.
 describe('reading a typed length', () => {
