@@ -29,10 +29,13 @@ export function coversAny(
   const tests = Array.isArray(input.test) ? input.test : [input.test]
   const results = tests.map(test => one(test, input.production))
   const index = results.findIndex(reasons => reasons.every(r => r.met))
-  if (index >= 0) return { covered: true, reasons: results[index] ?? [] }
-  if (results.length === 1) return { covered: false, reasons: results[0] ?? [] }
+  if (index >= 0) return { covered: true, answer: 'covered', record: [], reasons: results[index] ?? [], undetermined: [] }
+  if (results.length === 1) return { covered: false, answer: 'not-covered', record: [], reasons: results[0] ?? [], undetermined: [] }
   return {
     covered: false,
+    answer: 'not-covered',
+    record: [],
     reasons: results.flatMap((reasons, i) => reasons.map(r => ({ ...r, text: `Test ${i + 1}: ${r.text}` }))),
+    undetermined: [],
   }
 }

@@ -2,6 +2,7 @@ import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
 import { coversAny, finding, inRange, rangeText } from '../coverage'
+import { productionPositions, testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { formatLength, pick, toMicro } from '../units'
 import { qw4231 } from './base-metals'
@@ -15,13 +16,13 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const f = (m: number) => formatLength(m, u)
   const ranges = welderRanges(test, context)
   const reasons: CoverReason[] = []
-  const position = production.position.toUpperCase()
+  const position = productionPositions(production)[0]!.toUpperCase()
   if (!['F', 'H', 'V', 'O'].includes(position)) refuse(`production.position: "${production.position}" is not F, H, V or O (QW-461.1, QW-461.2)`)
   if (production.form === 'pipe' && production.outsideDiameter === undefined) refuse('production.outsideDiameter: a pipe weld needs its outside diameter')
   const od = production.outsideDiameter === undefined ? undefined : toMicro(production.outsideDiameter)
 
   if (production.process !== undefined) {
-    const same = asmeProcess(production.process) === asmeProcess(test.process)
+    const same = asmeProcess(production.process) === asmeProcess(testProcess(test))
     reasons.push(finding(same, 'QW-350', same ? `Process ${test.process} was tested.` : `The test was ${test.process}; ${production.process} needs its own test.`, 'partial'))
   }
 
@@ -41,7 +42,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
       if (production.thickness !== undefined) {
         const max = ranges.depositMax
         const ok = max === null || max === undefined || toMicro(production.thickness) <= toMicro(max)
-        reasons.push(finding(ok, test.transfer === 'short-circuit' && test.process.toUpperCase() === 'GMAW' ? 'QW-404.32' : 'QW-452.1(b)',
+        reasons.push(finding(ok, test.transfer === 'short-circuit' && testProcess(test).toUpperCase() === 'GMAW' ? 'QW-404.32' : 'QW-452.1(b)',
           `Deposit ${production.thickness} ${u}: qualified up to ${max === null || max === undefined ? 'the maximum to be welded' : `${max} ${u}`}.`, 'verified'))
       }
     }

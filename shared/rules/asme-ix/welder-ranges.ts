@@ -1,6 +1,7 @@
 import type { WelderTestInput } from '../inputs'
 import type { WelderRangesResult } from '../results'
 import type { Range, Reason, RuleContext } from '../types'
+import { testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { formatLength, fromMicro, pick, toMicro } from '../units'
 import { qw4231 } from './base-metals'
@@ -18,7 +19,7 @@ const range = (min: number | null, max: number | null): Range => ({ min: out(min
 export function welderRanges(input: WelderTestInput, context: RuleContext): WelderRangesResult {
   const u = context.unit
   const f = (m: number) => formatLength(m, u)
-  const process = asmeProcess(input.process)
+  const process = asmeProcess(testProcess(input))
   const reasons: Reason[] = []
   const pos = qw4619(input.form, input.weld, input.testPositions)
   const two78 = pick(asme.od2_7_8, u)

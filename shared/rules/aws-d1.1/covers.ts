@@ -2,6 +2,7 @@ import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
 import { coversAny, finding, inRange, rangeText } from '../coverage'
+import { productionPositions, testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { formatLength, pick, toMicro } from '../units'
 import { d11Tables } from './editions'
@@ -14,13 +15,13 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const tables = d11Tables(context.edition)
   const ranges = welderRanges(test, context)
   const reasons: CoverReason[] = []
-  const position = production.position.toUpperCase().replace('OH', 'O')
+  const position = productionPositions(production)[0]!.toUpperCase().replace('OH', 'O')
   if (!['F', 'H', 'V', 'O'].includes(position)) refuse(`production.position: "${production.position}" is not F, H, V or OH`)
   if (production.form === 'pipe' && production.outsideDiameter === undefined) refuse('production.outsideDiameter: a pipe weld needs its outside diameter')
   const positionsClause = test.form === 'plate' ? tables.platePositions : tables.pipePositions
 
   if (production.process !== undefined) {
-    const same = d11Process(production.process) === d11Process(test.process)
+    const same = d11Process(production.process) === d11Process(testProcess(test))
     reasons.push(finding(same, 'welder essential variables (process)', same ? `Process ${test.process} was tested.` : `The test was ${test.process}; ${production.process} needs its own test.`, 'partial'))
   }
   if (production.weld === 'groove') {

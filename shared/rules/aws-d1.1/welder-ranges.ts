@@ -1,6 +1,7 @@
 import type { WelderTestInput } from '../inputs'
 import type { BendSpecimenCount, WelderRangesResult } from '../results'
 import type { Basis, Range, Reason, RuleContext } from '../types'
+import { testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { formatLength, formatRange, fromMicro, pick, toMicro } from '../units'
 import { d11Tables } from './editions'
@@ -23,7 +24,7 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
   const u = context.unit
   const f = (m: number) => formatLength(m, u)
   const tables = d11Tables(context.edition)
-  d11Process(input.process)
+  d11Process(testProcess(input))
   const si: Basis = u === 'mm' ? 'memory' : 'verified'
   const reasons: Reason[] = []
   const pos = d11Positions(input.form, input.weld, input.testPositions)

@@ -2,6 +2,7 @@ import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
 import { coversAny, finding, inRange, rangeText } from '../coverage'
+import { productionPositions, testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { scopeText, withinD13Scope } from './scope'
 import { d13Joint, welderRanges } from './welder-ranges'
@@ -17,10 +18,10 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const joint = d13Joint(production)
   reasons.push(finding(joint === testJoint, 'D1.3 4.7 (joint type)', joint === testJoint ? `Joint ${joint} was tested.` : `The test was ${testJoint}; ${joint} is a different joint type and needs its own test.`, 'verified'))
   if (production.process !== undefined) {
-    const same = production.process.toUpperCase() === test.process.toUpperCase()
+    const same = production.process.toUpperCase() === testProcess(test).toUpperCase()
     reasons.push(finding(same, 'D1.3 4.7 (process)', same ? `Process ${test.process} was tested.` : `The test was ${test.process}; ${production.process} needs its own test.`, 'verified'))
   }
-  const position = production.position.toUpperCase().replace('OH', 'O')
+  const position = productionPositions(production)[0]!.toUpperCase().replace('OH', 'O')
   const qualified = production.weld === 'groove' ? ranges.positions.groove : ranges.positions.fillet
   reasons.push(finding(qualified.includes(position), 'D1.3 Table 4.4', `Position ${production.position}: the test qualifies ${qualified.map(p => (p === 'O' ? 'OH' : p)).join(', ') || 'none for this weld type'}.`, 'verified'))
   if (ranges.thickness) {

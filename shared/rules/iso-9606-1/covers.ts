@@ -2,13 +2,14 @@ import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
 import { coversAny, finding, inRange, rangeText } from '../coverage'
+import { productionPositions } from '../layers'
 import { refuse } from '../refusal'
 import { isoProcess, welderRanges } from './welder-ranges'
 
 function one(test: WelderTestInput, production: ProductionWeld, context: RuleContext): CoverReason[] {
   const ranges = welderRanges(test, context)
   const reasons: CoverReason[] = []
-  const position = production.position.toUpperCase()
+  const position = productionPositions(production)[0]!.toUpperCase()
   if (production.form === 'pipe' && production.outsideDiameter === undefined) refuse('production.outsideDiameter: a pipe weld needs its outside diameter')
   if (production.process !== undefined) {
     const p = isoProcess(production.process)

@@ -1,6 +1,7 @@
 import type { WelderTestInput } from '../inputs'
 import type { WelderRangesResult } from '../results'
 import type { Reason, RuleContext } from '../types'
+import { testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { formatRange, fromMicro, scale, toMicro } from '../units'
 import { buttPositions, filletPositions } from './positions'
@@ -30,7 +31,7 @@ export function processesCovered(process: string): string[] {
  */
 export function welderRanges(input: WelderTestInput, context: RuleContext): WelderRangesResult {
   if (context.unit !== 'mm') refuse('unit: ISO 9606-1 prints its ranges in millimetres: send "unit": "mm"')
-  const process = isoProcess(input.process)
+  const process = isoProcess(testProcess(input))
   const reasons: Reason[] = []
   const pipe = input.form === 'pipe'
   const result: WelderRangesResult = { positions: { groove: [], fillet: [] }, reasons }
