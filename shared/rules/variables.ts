@@ -40,6 +40,8 @@ export function categorical<T>(o: {
   qualifies: (test: T, production: T) => boolean
   /** True when the test's value qualifies every production value (then production need not state it). */
   qualifiesAll?: (test: T) => boolean
+  /** True when every test value qualifies this production value (then the test need not have recorded it). */
+  qualifiedByAll?: (production: T) => boolean
   show: (value: T) => string
   process?: string
   /** When production leaves it out: 'cannot-tell' (default), or 'not-stated' for the fields production could always leave out. */
@@ -49,6 +51,7 @@ export function categorical<T>(o: {
   const { test, production } = o
   if (test === undefined && production === undefined) return null
   if (test === undefined) {
+    if (o.qualifiedByAll?.(production as T)) return reason('met', o.variable, o.clause, `Production ${o.show(production as T)}: qualified by any test.`, o.basis, extra)
     return reason('not-recorded', o.variable, o.clause, `Production is ${o.show(production as T)}; the test did not record its ${o.field}: cannot tell, record it.`, o.basis, { ...extra, record: `test.${o.field}` })
   }
   if (production === undefined) {

@@ -84,7 +84,6 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   const prodSingle = production.processes === undefined
   const tf = testSingle ? '' : `processes[${pair.ti}].`
   const pf = prodSingle ? '' : `processes[${pair.pi}].`
-  const prodDeposit = prodSingle ? 'production.thickness' : `production.${pf}depositThickness`
   const fix = (r: CoverReason | null) => (r && r.record ? { ...r, record: r.record.replace(/^test\./, `test.${tf}`).replace(/^production\./, `production.${pf}`) } : r)
   const groove = production.weld === 'groove'
   const testBacking = layerBacking(test.backing, pair.ti)
@@ -128,13 +127,13 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   if (groove && listsVariable(process, 'backing')) {
     push(fix(categorical({
       variable: 'backing', clause: 'QW-402.4', basis: 'memory', field: 'backing', process, test: testBacking, production: prodBacking, unstated: 'not-stated',
-      qualifies: (a, b) => !a || b, qualifiesAll: a => !a, show: yesNo('backing'),
+      qualifies: (a, b) => !a || b, qualifiesAll: a => !a, qualifiedByAll: b => b, show: yesNo('backing'),
     })))
   }
   if (groove && listsVariable(process, 'backing-added')) {
     push(fix(categorical({
       variable: 'backing-added', clause: 'QW-402.7', basis: 'memory', field: 'backing', process, test: testBacking, production: prodBacking,
-      qualifies: (a, b) => a || !b, qualifiesAll: a => a, show: yesNo('backing'),
+      qualifies: (a, b) => a || !b, qualifiesAll: a => a, qualifiedByAll: b => !b, show: yesNo('backing'),
     })))
   }
   if (listsVariable(process, 'progression') && weldsVertical(letters)) {
@@ -166,7 +165,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   if (listsVariable(process, 'backing-gas') && openRoot) {
     push(fix(categorical({
       variable: 'backing-gas', clause: 'QW-408.8', basis: 'memory', field: 'backingGas', process, test: t.backingGas, production: p.backingGas,
-      qualifies: (a, b) => !a || b, qualifiesAll: a => !a, show: yesNo('inert backing gas'),
+      qualifies: (a, b) => !a || b, qualifiesAll: a => !a, qualifiedByAll: b => b, show: yesNo('inert backing gas'),
     })))
   }
   if (listsVariable(process, 'current')) {
