@@ -109,6 +109,7 @@ export function wpsSupport(input: WpsSupportInput, context: RuleContext): WpsSup
   // QW-403.6 and the PQR's toughness results: a PQR supports a toughness WPS only when its results are recorded and accepted.
   const indexed = input.pqrs.map((pqr, i) => ({ pqr, i, name: label(pqr, i) }))
   let usable = indexed
+  const waiting = new Set<string>()
   if (toughness) {
     const tested = indexed.filter(({ pqr }) => pqr.toughness)
     procedure.push(reason(tested.length > 0 ? 'met' : 'not-met', 'toughness', 'QW-403.6', tested.length > 0
@@ -117,11 +118,13 @@ export function wpsSupport(input: WpsSupportInput, context: RuleContext): WpsSup
     usable = tested.filter(({ pqr, name }) => {
       if (!pqr.toughnessResults) {
         procedure.push(reason('not-recorded', 'toughness-results', 'QW-403.6, construction code', `${name} is marked toughness-tested but its Charpy results and acceptance values are not recorded.`, 'convention', { record: 'pqrs[].toughnessResults' }))
+        waiting.add(name)
         return false
       }
       const judged = judgeToughness(pqr.toughnessResults, context)
       procedure.push(reason(judged.accepted ? 'met' : judged.answer === 'rejected' ? 'not-met' : 'not-recorded', 'toughness-results', 'QW-403.6, construction code',
         `${name} Charpy results ${judged.answer}: ${judged.reasons.map(r => r.text).join(' ')}`, 'convention', judged.answer === 'cannot-tell' ? { record: 'pqrs[].toughnessResults' } : {}))
+      if (judged.answer === 'cannot-tell') waiting.add(name)
       return judged.accepted
     })
   }
@@ -189,9 +192,10 @@ export function wpsSupport(input: WpsSupportInput, context: RuleContext): WpsSup
     const variables: CoverReason[] = []
     const withProcess = usable.flatMap(({ pqr, name }) => pqrLayers(pqr).filter(l => asmeProcess(l.process) === process).map(l => ({ pqr, name, l })))
     const anyProcess = indexed.some(({ pqr }) => pqrLayers(pqr).some(l => asmeProcess(l.process) === process))
-    variables.push(reason(withProcess.length > 0 ? 'met' : 'not-met', 'process', 'QW-200.2', withProcess.length > 0
+    const pending = indexed.some(({ pqr, name }) => waiting.has(name) && pqrLayers(pqr).some(l => asmeProcess(l.process) === process))
+    variables.push(reason(withProcess.length > 0 ? 'met' : pending ? 'not-recorded' : 'not-met', 'process', 'QW-200.2', withProcess.length > 0
       ? `${process} is qualified by ${[...new Set(withProcess.map(x => x.name))].join(', ')}.`
-      : anyProcess ? `No usable PQR was welded with ${process}.` : `No supporting PQR was welded with ${process}.`, 'memory', { process }))
+      : pending ? `The ${process} PQR waits for its toughness results.` : anyProcess ? `No usable PQR was welded with ${process}.` : `No supporting PQR was welded with ${process}.`, 'memory', { process, ...(pending && withProcess.length === 0 ? { record: 'pqrs[].toughnessResults' } : {}) }))
     // Each candidate PQR layer: all its layer variables; the layer is supported when one candidate meets them all.
     const judged = withProcess.map(x => ({ ...x, rs: layerAgainst(w, x.l, x.pqr, x.name, toughness, context) }))
     const best = judged.find(j => j.rs.every(r => r.met)) ?? judged.find(j => j.rs.every(r => r.state !== 'not-met')) ?? judged[0]
