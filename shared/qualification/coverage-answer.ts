@@ -2,8 +2,8 @@
 import type { ProcessStanding } from './process-standing'
 import type { Joint } from '../schemas/coverage'
 
-export interface Finding { met: boolean, clause: string, text: string, state?: 'met' | 'not-met' | 'not-recorded' | 'not-checked' | 'not-stated' }
-export interface WelderAnswer { id: number, name: string, stamp: string, covered: boolean, answer: 'covered' | 'not-covered' | 'cannot-tell', record: string[], current: boolean, standing: ProcessStanding, reasons: Finding[], notStated?: Finding[] }
+export interface Finding { met: boolean, clause: string, text: string, state?: 'met' | 'not-met' | 'not-recorded' | 'not-checked' }
+export interface WelderAnswer { id: number, name: string, stamp: string, covered: boolean, answer: 'covered' | 'not-covered' | 'cannot-tell', record: string[], current: boolean, standing: ProcessStanding, reasons: Finding[] }
 export interface CoverageAnswer {
   today: string
   joint: Joint & { gaugeNote?: string }

@@ -128,9 +128,6 @@ export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: 
     const telling = judged.find(j => j.answer === 'cannot-tell')
     const shown = covering ?? telling ?? judged[0]!
     const answer: CoverAnswer = covering ? 'covered' : telling ? 'cannot-tell' : 'not-covered'
-    // reasons: the variables compared; notStated: those the joint does not state (not compared, shown apart).
-    const reasons = shown.reasons.filter(r => r.state !== 'not-stated')
-    const notStated = shown.reasons.filter(r => r.state === 'not-stated')
-    return { id: w.id, name: w.name, stamp: w.stamp, covered: Boolean(covering), answer, record: shown.record, current: standing.standing !== 'lapsed', standing, reasons, notStated, testIds: covering ? [covering.id] : judged.map(j => j.id) }
+    return { id: w.id, name: w.name, stamp: w.stamp, covered: Boolean(covering), answer, record: shown.record, current: standing.standing !== 'lapsed', standing, reasons: shown.reasons, testIds: covering ? [covering.id] : judged.map(j => j.id) }
   })
 }

@@ -87,11 +87,10 @@ export interface QualifiedVariable extends Reason {
 
 /**
  * The state of one variable compared: met; not met; not recorded (one side states it, the other did
- * not record it: "cannot tell: record X"); not checked (Rootface does not compare it: check by hand);
- * not stated (the production weld leaves out a field it has always been allowed to leave out —
- * process, thickness, P-No., F-No., backing, vertical progression —: not compared, and the text says what the test qualifies).
+ * not record it, or the test restricts a variable the production weld does not state: "cannot tell: record X");
+ * not checked (Rootface does not compare it: check by hand). Nothing left out is ever taken as met.
  */
-export type VariableState = 'met' | 'not-met' | 'not-recorded' | 'not-checked' | 'not-stated'
+export type VariableState = 'met' | 'not-met' | 'not-recorded' | 'not-checked'
 
 export interface CoverReason extends Reason {
   /** True only when the variable is compared and met; false for not met, not recorded and not checked. */

@@ -44,8 +44,6 @@ export function categorical<T>(o: {
   qualifiedByAll?: (production: T) => boolean
   show: (value: T) => string
   process?: string
-  /** When production leaves it out: 'cannot-tell' (default), or 'not-stated' for the fields production could always leave out. */
-  unstated?: 'cannot-tell' | 'not-stated'
 }): CoverReason | null {
   const extra = o.process === undefined ? {} : { process: o.process }
   const { test, production } = o
@@ -56,7 +54,6 @@ export function categorical<T>(o: {
   }
   if (production === undefined) {
     if (o.qualifiesAll?.(test)) return reason('met', o.variable, o.clause, `The test (${o.show(test)}) qualifies every ${o.field}.`, o.basis, extra)
-    if (o.unstated === 'not-stated') return reason('not-stated', o.variable, o.clause, `Production does not state its ${o.field}: not compared; the test was ${o.show(test)}.`, o.basis, extra)
     return reason('not-recorded', o.variable, o.clause, `The test was ${o.show(test)}, which does not qualify every ${o.field}; production does not state its ${o.field}: cannot tell, record it.`, o.basis, { ...extra, record: `production.${o.field}` })
   }
   const ok = o.qualifies(test, production)
@@ -66,7 +63,7 @@ export function categorical<T>(o: {
 }
 
 export function answerOf(reasons: CoverReason[]): CoverAnswer {
-  const counted = reasons.filter(r => r.state !== 'not-stated')
+  const counted = reasons
   if (counted.some(r => r.state === 'not-met' || (r.state === undefined && !r.met))) return 'not-covered'
   if (counted.some(r => r.state === 'not-recorded' || r.state === 'not-checked')) return 'cannot-tell'
   return 'covered'

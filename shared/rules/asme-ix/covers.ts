@@ -97,7 +97,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   }
   if (p.fNumber !== undefined || t.fNumber !== undefined) {
     push(fix(categorical({
-      variable: 'f-number', clause: 'QW-404.15, QW-433', basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber, unstated: 'not-stated',
+      variable: 'f-number', clause: 'QW-404.15, QW-433', basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber,
       qualifies: (a, b) => qw433(a, false, context.edition).numbers.includes(b), show: v => `F-No. ${v}`,
     })))
   }
@@ -106,7 +106,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
     const produced = p.depositThickness
     if (given === undefined) {
       if (produced !== undefined) reasons.push(reason('not-recorded', 'deposit', 'QW-452.1(b)', `Production deposit ${produced} ${u} with ${process}: the test's ${process} deposit was not recorded.`, 'verified', { ...tag, record: `test.${tf}depositThickness` }))
-      else reasons.push(reason('not-stated', 'deposit', 'QW-452.1(b)', `Neither the test's nor the production's ${process} deposit is given: not compared.`, 'verified', tag))
+      else reasons.push(reason('not-recorded', 'deposit', 'QW-452.1(b)', `Neither the test's nor the production's ${process} deposit is given: cannot tell, record the test's deposit.`, 'verified', { ...tag, record: `test.${tf}depositThickness` }))
     }
     else {
       const layers = t.layers ?? (testSingle ? test.layers : undefined)
@@ -116,7 +116,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
       const limit = max === null ? 'the maximum to be welded' : f(max)
       if (produced === undefined) {
         if (max === null) reasons.push(reason('met', 'deposit', clause, `The ${process} deposit qualifies the maximum to be welded.`, 'verified', tag))
-        else reasons.push(reason('not-stated', 'deposit', clause, `The test qualifies a ${process} deposit up to ${limit}; the production deposit is not given: not compared.`, 'verified', tag))
+        else reasons.push(reason('not-recorded', 'deposit', clause, `The test qualifies a ${process} deposit up to ${limit}; the production deposit is not given: cannot tell, state it.`, 'verified', { ...tag, record: prodSingle ? 'production.thickness' : `production.${pf}depositThickness` }))
       }
       else {
         const ok = max === null || toMicro(produced) <= max
@@ -126,7 +126,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   }
   if (groove && listsVariable(process, 'backing')) {
     push(fix(categorical({
-      variable: 'backing', clause: 'QW-402.4', basis: 'memory', field: 'backing', process, test: testBacking, production: prodBacking, unstated: 'not-stated',
+      variable: 'backing', clause: 'QW-402.4', basis: 'memory', field: 'backing', process, test: testBacking, production: prodBacking,
       qualifies: (a, b) => !a || b, qualifiesAll: a => !a, qualifiedByAll: b => b, show: yesNo('backing'),
     })))
   }
@@ -138,7 +138,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   }
   if (listsVariable(process, 'progression') && weldsVertical(letters)) {
     push(fix(categorical({
-      variable: 'progression', clause: 'QW-405.3', basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression, unstated: 'not-stated',
+      variable: 'progression', clause: 'QW-405.3', basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression,
       qualifies: (a, b) => a === b, show: v => `${v} vertical`,
     })))
   }
@@ -230,7 +230,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const pLayers = named.length > 0 ? named : tLayers.length === 1 ? [{ ...stripProduction(production), process: tLayers[0]!.process }] : []
   if (named.length === 0) {
     // Production names no process: the variables of the test's process are compared as if production were welded with it, and the process itself is not stated.
-    reasons.push(reason('not-stated', 'process', 'QW-350', `Production does not name its process: not compared; the test was ${tLayers.map(l => l.process).join(' + ')}, and its other variables are compared as for that process.`, 'partial'))
+    reasons.push(reason('not-recorded', 'process', 'QW-350', `Production does not name its process: cannot tell, state it; the test was ${tLayers.map(l => l.process).join(' + ')} (its other variables are compared as for that process).`, 'partial', { record: 'production.process' }))
   }
   pLayers.forEach((p, pi) => {
     const process = asmeProcess(p.process)
@@ -247,7 +247,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
 
   // P-No. (QW-403.18, QW-423.1).
   const pNo = categorical({
-    variable: 'p-number', clause: 'QW-403.18, QW-423.1', basis: 'verified', field: 'pNumber', test: test.pNumber, production: production.pNumber, unstated: 'not-stated',
+    variable: 'p-number', clause: 'QW-403.18, QW-423.1', basis: 'verified', field: 'pNumber', test: test.pNumber, production: production.pNumber,
     qualifies: (a, b) => qw4231(a, context.edition).contains(b), show: v => `P-No. ${v}`,
   })
   if (pNo) reasons.push(pNo)

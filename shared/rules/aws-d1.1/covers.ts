@@ -39,7 +39,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const tLayers = testLayers(test)
   const named = productionLayers(production)
   if (named.length === 0) {
-    reasons.push(reason('not-stated', 'process', tables.essentials, `Production does not name its process: not compared; the test was ${tLayers.map(l => l.process).join(' + ')}.`, 'memory'))
+    reasons.push(reason('not-recorded', 'process', tables.essentials, `Production does not name its process: cannot tell, state it; the test was ${tLayers.map(l => l.process).join(' + ')}.`, 'memory', { record: 'production.process' }))
   }
   const pLayers = named.length > 0 ? named : tLayers.length === 1 ? [{ ...production, process: tLayers[0]!.process, depositThickness: production.thickness }] : []
   pLayers.forEach((p, pi) => {
@@ -62,19 +62,19 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
     }
     if (process === 'SMAW') {
       push(fix(categorical({
-        variable: 'f-number', clause: tables.electrodeGroups, basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber, unstated: 'not-stated',
+        variable: 'f-number', clause: tables.electrodeGroups, basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber,
         qualifies: (a, b) => a <= 4 && group(a).includes(b), show: v => `electrode group F${v}`,
       })))
     }
     if (weldsVertical(letters)) {
       push(fix(categorical({
-        variable: 'progression', clause: tables.essentials, basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression, unstated: 'not-stated',
+        variable: 'progression', clause: tables.essentials, basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression,
         qualifies: (a, b) => a === b, show: v => `${v} vertical`,
       })))
     }
     if (production.weld === 'groove') {
       push(fix(categorical({
-        variable: 'backing', clause: tables.essentials, basis: 'memory', field: 'backing', process, test: layerBacking(test.backing, ti), production: layerBacking(production.backing, pi), unstated: 'not-stated',
+        variable: 'backing', clause: tables.essentials, basis: 'memory', field: 'backing', process, test: layerBacking(test.backing, ti), production: layerBacking(production.backing, pi),
         qualifies: (a, b) => !a || b, qualifiesAll: a => !a, qualifiedByAll: b => b, show: show.bool('with backing', 'without backing'),
       })))
     }
@@ -118,7 +118,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
       }
     }
     else if (ranges.thickness && ranges.thickness.max !== null) {
-      reasons.push(reason('not-stated', 'thickness', test.form === 'plate' ? tables.plateThickness : tables.pipeRanges, `Production thickness not given: not compared; the test qualifies ${rangeText(ranges.thickness, u)}.`, 'verified'))
+      reasons.push(reason('not-recorded', 'thickness', test.form === 'plate' ? tables.plateThickness : tables.pipeRanges, `Production thickness not given: cannot tell, state it; the test qualifies ${rangeText(ranges.thickness, u)}.`, 'verified', { record: 'production.thickness' }))
     }
   }
   else {

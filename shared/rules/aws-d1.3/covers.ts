@@ -39,7 +39,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const t = testLayers(test)[0]!
   const named = productionLayers(production)
   const p = named[0] ?? { ...production, process: t.process }
-  if (named.length === 0) reasons.push(reason('not-stated', 'process', 'D1.3 4.7 (process)', `Production does not name its process: not compared; the test was ${t.process}.`, 'verified'))
+  if (named.length === 0) reasons.push(reason('not-recorded', 'process', 'D1.3 4.7 (process)', `Production does not name its process: cannot tell, state it; the test was ${t.process}.`, 'verified', { record: 'production.process' }))
   else {
     named.forEach((layer) => {
       const same = norm(layer.process) === norm(t.process)
@@ -57,11 +57,11 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
     reasons.push(reason(ok ? 'met' : 'not-met', 'thickness', 'D1.3 4.7.2', `Sheet ${production.thickness} ${u}: qualified ${rangeText(ranges.thickness, u)}.`, 'verified'))
   }
   if (norm(t.process) === 'smaw' || norm(p.process) === 'smaw') {
-    push(categorical({ variable: 'f-number', clause: 'D1.3 4.7 (F-Number)', basis: 'partial', field: 'fNumber', test: t.fNumber, production: p.fNumber, unstated: 'not-stated', qualifies: (a, b) => a === b, show: v => `F-No. ${v}` }))
+    push(categorical({ variable: 'f-number', clause: 'D1.3 4.7 (F-Number)', basis: 'partial', field: 'fNumber', test: t.fNumber, production: p.fNumber, qualifies: (a, b) => a === b, show: v => `F-No. ${v}` }))
   }
   push(categorical({ variable: 'coating', clause: 'D1.3 4.7 (coating)', basis: 'partial', field: 'coating', test: test.coating, production: production.coating, qualifies: (a, b) => norm(a) === norm(b), show: v => (norm(v) === 'none' ? 'uncoated' : `${v} coated`) }))
   if (weldsVertical(letters)) {
-    push(categorical({ variable: 'progression', clause: 'D1.3 4.7 (vertical progression)', basis: 'verified', field: 'progression', test: t.progression, production: p.progression, unstated: 'not-stated', qualifies: (a, b) => a === b, show: v => `${v} vertical` }))
+    push(categorical({ variable: 'progression', clause: 'D1.3 4.7 (vertical progression)', basis: 'verified', field: 'progression', test: t.progression, production: p.progression, qualifies: (a, b) => a === b, show: v => `${v} vertical` }))
   }
   return reasons
 }

@@ -38,7 +38,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   }
   const tLayers = testLayers(test)
   const named = productionLayers(production)
-  if (named.length === 0) reasons.push(reason('not-stated', 'process', 'ISO 9606-1, 5.2', `Production does not name its process: not compared; the test was ${tLayers.map(l => l.process).join(' + ')}.`, 'partial'))
+  if (named.length === 0) reasons.push(reason('not-recorded', 'process', 'ISO 9606-1, 5.2', `Production does not name its process: cannot tell, state it; the test was ${tLayers.map(l => l.process).join(' + ')}.`, 'partial', { record: 'production.process' }))
   const pLayers = named.length > 0 ? named : tLayers.length === 1 ? [{ ...production, process: tLayers[0]!.process, depositThickness: production.thickness }] : []
   const butt = production.weld === 'groove'
   pLayers.forEach((p, pi) => {
@@ -60,7 +60,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
       })))
     }
     push(fix(categorical({
-      variable: 'filler-group', clause: 'ISO 9606-1, 5.5', basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber, unstated: 'not-stated',
+      variable: 'filler-group', clause: 'ISO 9606-1, 5.5', basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber,
       qualifies: (a, b) => fillerGroupsQualified(a).includes(b), show: v => `FM${v}`,
     })))
     push(fix(categorical({
@@ -97,7 +97,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
     }
   }
   else if (ranges.thickness) {
-    reasons.push(reason('not-stated', 'thickness', butt ? 'ISO 9606-1 Table 6' : 'ISO 9606-1 Table 7', `Production thickness not given: not compared; the test covers ${rangeText(ranges.thickness, 'mm')}.`, 'partial'))
+    reasons.push(reason('not-recorded', 'thickness', butt ? 'ISO 9606-1 Table 6' : 'ISO 9606-1 Table 7', `Production thickness not given: cannot tell, state it; the test covers ${rangeText(ranges.thickness, 'mm')}.`, 'partial', { record: 'production.thickness' }))
   }
   if (production.form === 'pipe') {
     if (production.outsideDiameter === undefined) reasons.push(reason('not-recorded', 'diameter', 'ISO 9606-1 Table 8', 'The production pipe D is not given.', 'verified', { record: 'production.outsideDiameter' }))

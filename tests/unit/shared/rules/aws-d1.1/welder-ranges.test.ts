@@ -95,14 +95,14 @@ describe('AWS D1.1 coverage and bends', () => {
   const test = { process: 'FCAW', form: 'plate', weld: 'groove', testPositions: ['3G'], couponThickness: 1 }
   const covers = (production: Record<string, unknown>) => ok({ code: 'aws-d1.1', check: 'covers', unit: 'in', input: { test, production } })
   it('3G covers vertical but not overhead (weldcerttest FAQ)', () => {
-    expect(covers({ form: 'plate', weld: 'groove', position: 'V', thickness: 2 }).covered).toBe(true)
+    expect(covers({ process: 'FCAW', form: 'plate', weld: 'groove', position: 'V', thickness: 2 }).covered).toBe(true)
     expect(covers({ form: 'plate', weld: 'groove', position: 'OH' }).covered).toBe(false)
   })
   it('a CJP groove test also covers fillets (weldcerttest FAQ)', () => {
-    expect(covers({ form: 'plate', weld: 'fillet', position: 'H' }).covered).toBe(true)
+    expect(covers({ process: 'FCAW', form: 'plate', weld: 'fillet', position: 'H' }).covered).toBe(true)
   })
   it('plate test → pipe CJP only at 24 in and over with backing or backgouging (Table 6.10 note b)', () => {
-    expect(covers({ form: 'pipe', weld: 'groove', position: 'F', outsideDiameter: 24, backing: true }).covered).toBe(true)
+    expect(covers({ process: 'FCAW', form: 'pipe', weld: 'groove', position: 'F', outsideDiameter: 24, backing: true, thickness: 1 }).covered).toBe(true)
     expect(covers({ form: 'pipe', weld: 'groove', position: 'F', outsideDiameter: 24, backing: false }).covered).toBe(false)
     expect(covers({ form: 'pipe', weld: 'groove', position: 'F', outsideDiameter: 20, backing: true }).covered).toBe(false)
   })

@@ -37,7 +37,7 @@ describe('AWS D1.3 sheet steel welders (scribd AWS D1.3 WPQR guide, 4.7.2 and Ta
   it('covers: joint type, position and thickness', () => {
     const test = { process: 'GMAW', form: 'plate', weld: 'fillet', testPositions: ['3F'], couponThickness: 0.0598 }
     const covers = (production: Record<string, unknown>) => ok({ code: 'aws-d1.3', check: 'covers', unit: 'in', input: { test, production } }).covered
-    expect(covers({ form: 'plate', weld: 'fillet', position: 'V', thickness: 0.0747 })).toBe(true)
+    expect(covers({ process: 'GMAW', form: 'plate', weld: 'fillet', position: 'V', thickness: 0.0747 })).toBe(true)
     expect(covers({ form: 'plate', weld: 'fillet', position: 'OH', thickness: 0.0747 })).toBe(false)
     expect(covers({ form: 'plate', weld: 'fillet', position: 'V', thickness: 0.0478 })).toBe(false)
   })

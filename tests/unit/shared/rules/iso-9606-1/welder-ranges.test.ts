@@ -58,7 +58,7 @@ describe('ISO 9606-1 welder ranges', () => {
   it('a butt test does not cover fillets without the supplementary test; a pipe test over 25 mm covers plate', () => {
     const test = { process: '141', form: 'pipe', weld: 'groove', testPositions: ['H-L045'], depositThickness: 5, outsideDiameter: 60 }
     const covers = (production: Record<string, unknown>) => ok({ code: 'iso-9606-1', check: 'covers', unit: 'mm', input: { test, production } }).covered
-    expect(covers({ form: 'plate', weld: 'groove', position: 'PF', thickness: 8 })).toBe(true)
+    expect(covers({ process: '141', form: 'plate', weld: 'groove', position: 'PF', thickness: 8 })).toBe(true)
     expect(covers({ form: 'plate', weld: 'fillet', position: 'PB' })).toBe(false)
     expect(covers({ form: 'pipe', weld: 'groove', position: 'PG', outsideDiameter: 60 })).toBe(false)
   })
