@@ -6,7 +6,7 @@ const convert = createRequire(import.meta.url)('convert-units') as (value: numbe
 
 const gauge = (g: number, unit: 'in' | 'mm' = 'in', material = 'steel') => ok({ code: 'aws-d1.3', check: 'gauge', unit, input: { gauge: g, material } })
 
-describe('Manufacturers\' Standard Gauge for sheet steel (SOURCES.md D)', () => {
+describe('Manufacturers\' Standard Gauge for sheet steel (docs/sources.md §D)', () => {
   it('10 ga = 0.1345 in (cableorganizer; induspecs and machinecalcs charts)', () => {
     expect(gauge(10).thickness).toBe(0.1345)
   })
