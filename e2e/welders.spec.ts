@@ -83,8 +83,9 @@ test('the quality manager asks who can weld a joint and gets answers with reason
   await page.getByLabel('Thickness (in)').fill('0.5')
   await page.getByRole('combobox', { name: 'Position', exact: true }).selectOption('V')
   await page.getByRole('button', { name: 'Find who can weld it' }).click()
-  await expect(page.getByRole('heading', { name: /Approved WPSs \(\d+ cover it\)/ })).toBeVisible()
-  await expect(page.getByRole('heading', { name: /Welders qualified and current today \(\d+\)/ })).toBeVisible()
+  // Counts of at least one: a count of 0 would mean the answer is empty (the API test finds KB-W02 and current welders)
+  await expect(page.getByRole('heading', { name: /Approved WPSs \([1-9]\d* cover it\)/ })).toBeVisible()
+  await expect(page.getByRole('heading', { name: /Welders qualified and current today \([1-9]\d*\)/ })).toBeVisible()
   await expect(page.getByText(/Groove V on plate: the test qualifies/).first()).toBeVisible()
 })
 

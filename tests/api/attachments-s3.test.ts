@@ -43,6 +43,7 @@ describe('files in an S3-compatible bucket', () => {
     const listed = await client.send(new ListObjectsV2Command({ Bucket: 'shop-files' }))
     const keys = (listed.Contents ?? []).map(o => o.Key!)
     expect(keys).toHaveLength(3) // the PDF, the PNG and the PNG's thumbnail
+    expect(keys.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
     expect(keys.every(k => k.startsWith(`rootface/welder-test/${test.id}/`))).toBe(true)
     expect(keys.filter(k => k.endsWith('.thumbnail'))).toHaveLength(1)
     const stored = await Promise.all(keys.filter(k => !k.endsWith('.thumbnail')).map(async Key => sha(await (await client.send(new GetObjectCommand({ Bucket: 'shop-files', Key }))).Body!.transformToByteArray())))

@@ -78,6 +78,7 @@ describe('upload', () => {
     expect(windows.status).toBe(201)
     expect(windows.body.fileName).toBe('bootfdp.exe.pdf')
     expect(existsSync(join(server.dataDir, 'etc'))).toBe(false)
+    expect(readdirSync(join(server.dataDir, 'files', 'welder-test', String(recordId))).length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
     expect(readdirSync(join(server.dataDir, 'files', 'welder-test', String(recordId))).every(n => /^[\da-f-]{36}(\.thumbnail)?$/.test(n))).toBe(true)
   })
 

@@ -1,4 +1,4 @@
-import { mkdtempSync } from 'node:fs'
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { spawnSync } from 'node:child_process'
@@ -31,5 +31,19 @@ describe.skipIf(!!process.env.TEST_DATABASE_URL)('one process per PGlite data di
     first = await startServer({ dataDir })
     const res = await fetch(`${first.url}/api/health`)
     expect(res.status).toBe(200)
+  })
+
+  it('a stale lock (its process gone) is replaced: the server starts and the lock names the new process', async () => {
+    await first!.stop('SIGTERM')
+    // A pid that surely is not running: a child that has already exited.
+    const gone = spawnSync(process.execPath, ['-e', 'process.exit(0)'])
+    expect(gone.status).toBe(0)
+    const lockFile = join(dataDir, 'db.lock')
+    writeFileSync(lockFile, JSON.stringify({ pid: gone.pid, holder: 'rootface server', since: '2026-01-01T00:00:00.000Z' }))
+    first = await startServer({ dataDir })
+    expect((await fetch(`${first.url}/api/health`)).status).toBe(200)
+    const lock = JSON.parse(readFileSync(lockFile, 'utf8')) as { pid: number }
+    expect(lock.pid).toBe(first.process.pid)
+    expect(lock.pid).not.toBe(gone.pid)
   })
 })

@@ -1,4 +1,4 @@
-import { addDays, format } from 'date-fns'
+import dayjs from 'dayjs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { startFakeSmtp, type FakeSmtp } from '../../scripts/fake-smtp.mjs'
 import { signedIn, startServer, type Client, type TestServer } from './harness'
@@ -10,8 +10,11 @@ interface WelderRow { id: number, stamp: string, name: string, email: string | n
 interface Outbox { items: { to: string, subject: string, status: string, attempts: number, lastError: string | null, kind: string, text: string }[], total: number, counts: Record<string, number> }
 interface Run { remindersQueued: number, digestsQueued: number, sent: number, week: string }
 
-const stepOf = (daysLeft: number) => (daysLeft <= 0 ? null : daysLeft <= 7 ? 7 : daysLeft <= 14 ? 14 : daysLeft <= 30 ? 30 : null)
-const day = (date: Date) => format(date, 'yyyy-MM-dd')
+// The reminder steps of issue 7 written out as data (days left → step), not recomputed the way the code does it.
+const stepTable: [first: number, last: number, step: number][] = [[1, 7, 7], [8, 14, 14], [15, 30, 30]]
+const stepOf = (daysLeft: number) => stepTable.find(([first, last]) => daysLeft >= first && daysLeft <= last)?.[2] ?? null
+// Dates through dayjs, not date-fns (the library the code uses)
+const day = (date: Date | dayjs.Dayjs) => dayjs(date).format('YYYY-MM-DD')
 
 let smtp: FakeSmtp
 let server: TestServer
@@ -81,7 +84,7 @@ describe('lapse reminders and the weekly digest', () => {
     const candidate = due().find(e => e.standing.daysLeft > 14)
     expect(candidate, 'the demo has a qualification in the 30-day step').toBeTruthy()
     const shift = candidate!.standing.daysLeft - 14
-    const later = day(addDays(new Date(`${today}T12:00:00`), shift))
+    const later = day(dayjs(today).add(shift, 'day'))
     const sentSteps = new Set(due().map(e => `${e.welder.id}|${e.standing.process}|${stepOf(e.standing.daysLeft)}`))
     const expected = roster.filter(w => w.status === 'active' && w.email).flatMap(w => w.standings
       .filter(s => stepOf(s.daysLeft - shift) && !sentSteps.has(`${w.id}|${s.process}|${stepOf(s.daysLeft - shift)}`))

@@ -19,6 +19,8 @@ describe('the welder\'s own view', () => {
     expect(certified.length).toBeGreaterThan(0)
     expect(certified.every(t => t.covers.length > 0)).toBe(true)
     const current = new Set(res.body.standings.filter(s => s.standing !== 'lapsed').map(s => s.process))
+    expect(current.size).toBeGreaterThan(0)
+    expect(res.body.procedures.length).toBeGreaterThan(0)
     expect(res.body.procedures.every(p => current.has(p.process))).toBe(true)
   })
 

@@ -74,6 +74,7 @@ describe('reading PQRs', () => {
     expect(status).toBe(200)
     // strength = load / (width × thickness): 5410 lbf / (0.75 in × 0.1345 in) = 53630.731 psi (common practice, QW-152).
     expect(body.tensile[0]!.strength).toBeCloseTo(53630.731, 2)
+    expect(body.tensile.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
     expect(body.tensile.every(t => t.accepted)).toBe(true)
     // ASME BPVC IX-2019, Table QW-451.1 and QW-403.10: 1/16 in to 1.1T = 0.14795 in; QW-404.32: deposit up to 1.1t.
     expect(body.qualifies.baseMetal).toEqual({ min: 0.0625, max: 0.14795 })

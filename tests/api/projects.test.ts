@@ -49,6 +49,7 @@ describe('customers and projects (quality manager)', () => {
 
   it('attaches WPSs (not drafts) and welders, grants and revokes an auditor, who then cannot read it', async () => {
     const choices = await supervisor.json<{ procedures: { id: number, status: string }[], auditors: { id: number }[], welders: { id: number }[] }>(`/api/projects/${projectId}/choices`)
+    expect(choices.body.procedures.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
     expect(choices.body.procedures.every(p => p.status !== 'draft')).toBe(true)
     const approved = choices.body.procedures.find(p => p.status === 'approved')!
     expect((await supervisor.fetch(`/api/projects/${projectId}/procedures`, json({ procedureId: approved.id }))).status).toBe(200)

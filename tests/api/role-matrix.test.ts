@@ -55,13 +55,18 @@ describe('object-level rules', () => {
     const tests = await clients.welder.json<{ items: { welderStamp: string }[], total: number }>('/api/tests?pageSize=200')
     expect(tests.body.total).toBeGreaterThan(0)
     expect(new Set(tests.body.items.map(t => t.welderStamp))).toEqual(new Set(['KB-03']))
+    // the welder's own log has entries, all theirs; asking for another welder's log shows none of theirs
+    const own = await clients.welder.json<{ items: { welderStamp: string }[] }>('/api/continuity?pageSize=200')
+    expect(own.body.items.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
+    expect(own.body.items.every(e => e.welderStamp === 'KB-03')).toBe(true)
     const log = await clients.welder.json<{ items: { welderStamp: string }[] }>('/api/continuity?pageSize=200&welderId=1')
-    expect(log.body.items.every(e => e.welderStamp === 'KB-03')).toBe(true)
+    expect(log.body.items.filter(e => e.welderStamp !== 'KB-03')).toEqual([])
   })
 
   it('a welder sees approved procedures only', async () => {
     const list = await clients.welder.json<{ items: { status: string }[] }>('/api/procedures?pageSize=200')
     expect(list.body.items.length).toBeGreaterThan(0)
+    expect(list.body.items.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
     expect(list.body.items.every(p => p.status === 'approved')).toBe(true)
     const all = await clients.supervisor.json<{ items: { status: string }[] }>('/api/procedures?pageSize=200')
     expect(all.body.items.some(p => p.status === 'draft')).toBe(true)

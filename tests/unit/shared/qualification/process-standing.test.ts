@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest'
 import { processStanding } from '../../../../shared/qualification/process-standing'
 
 // ASME BPVC IX QW-322.1(a): a welder who has not welded with a process for 6 months or more loses the qualification
-// for that process. Date convention (SOURCES.md A4, stated on screen): lapses on last use + 6 calendar months.
+// for that process. Date convention (docs/sources.md §A4, stated on screen): lapses on last use + 6 calendar months.
 const asme = { process: 'GMAW', code: 'asme-ix' as const, edition: '2023' }
 
 describe('process standing from a test and the continuity log (ASME IX QW-322.1, QW-322.2)', () => {
@@ -38,10 +38,15 @@ describe('process standing from a test and the continuity log (ASME IX QW-322.1,
     expect(s.lapsesOn).toBe('2026-09-10')
   })
 
-  it('month ends clamp: Aug 31 + 6 months = Feb 28 (SOURCES.md A4 convention, date-fns addMonths)', () => {
+  it('month ends clamp: Aug 31 + 6 months = Feb 28 (docs/sources.md §A4 convention, date-fns addMonths)', () => {
     const s = processStanding({ ...asme, testDate: '2025-08-31', uses: [], today: '2026-01-01' })
     expect(s.lapsesOn).toBe('2026-02-28')
-    expect(dayjs('2025-08-31').add(6, 'month').format('YYYY-MM-DD')).toBe('2026-02-28')
+    // cross-check the code's answer with dayjs (a different date library than the rules use)
+    expect(s.lapsesOn).toBe(dayjs('2025-08-31').add(6, 'month').format('YYYY-MM-DD'))
+    // leap year: Aug 31 + 6 months = Feb 29
+    const leap = processStanding({ ...asme, testDate: '2023-08-31', uses: [], today: '2024-01-01' })
+    expect(leap.lapsesOn).toBe('2024-02-29')
+    expect(leap.lapsesOn).toBe(dayjs('2023-08-31').add(6, 'month').format('YYYY-MM-DD'))
   })
 
   it('AWS D1.1 "a period exceeding six months": still current on the anniversary, lapses the next day', () => {

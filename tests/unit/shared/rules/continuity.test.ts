@@ -7,7 +7,7 @@ const asme = (lastUse: string, on: string) => ok({ code: 'asme-ix', check: 'cont
 const d11 = (lastUse: string, on: string) => ok({ code: 'aws-d1.1', check: 'continuity', unit: 'in', input: { lastUse, on } })
 
 describe('continuity', () => {
-  it('ASME BPVC IX QW-322.1(a) "6 months or more": last use 2026-01-15 lapses on 2026-07-15 (SOURCES.md A4 check case)', () => {
+  it('ASME BPVC IX QW-322.1(a) "6 months or more": last use 2026-01-15 lapses on 2026-07-15 (docs/sources.md §A4 check case)', () => {
     expect(asme('2026-01-15', '2026-07-14')).toMatchObject({ lapsesOn: '2026-07-15', current: true, lastCurrentDay: '2026-07-14' })
     expect(asme('2026-01-15', '2026-07-15')).toMatchObject({ lapsesOn: '2026-07-15', current: false })
   })
@@ -20,7 +20,7 @@ describe('continuity', () => {
       .toContainEqual(expect.objectContaining({ clause: '4.2.3.1' }))
   })
 
-  it('month ends clamp (SOURCES.md A4 convention): Aug 31 + 6 months = Feb 28, Feb 29 in a leap year', () => {
+  it('month ends clamp (docs/sources.md §A4 convention): Aug 31 + 6 months = Feb 28, Feb 29 in a leap year', () => {
     expect(asme('2025-08-31', '2025-09-01').lapsesOn).toBe('2026-02-28')
     expect(asme('2027-08-31', '2027-09-01').lapsesOn).toBe('2028-02-29')
     expect(d11('2025-08-31', '2025-09-01').lapsesOn).toBe('2026-03-01')

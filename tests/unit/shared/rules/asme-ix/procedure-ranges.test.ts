@@ -82,7 +82,14 @@ describe('ASME IX procedure ranges, Table QW-451.1 (ASME BPVC.IX-2017, read in f
     const r = pr({ process: 'SMAW', couponThickness: 1 })
     expect(r.edition).toBe('2023')
     expect(r.caution).toContain('Authorized Inspector')
-    expect(r.reasons.every(reason => typeof reason === 'object')).toBe(true)
+    // every reason names a clause of QW-451.1 and a basis of the ones the product prints
+    expect(r.reasons.length).toBeGreaterThan(0)
+    for (const reason of r.reasons as { clause: string, text: string, basis: string }[]) {
+      expect(reason.clause).toMatch(/^QW-/)
+      expect(reason.text.length).toBeGreaterThan(10)
+      expect(['verified', 'partial', 'memory', 'convention']).toContain(reason.basis)
+    }
+    expect(r.reasons).toContainEqual(expect.objectContaining({ clause: 'QW-451.1', basis: 'verified' }))
   })
 
   it('refuses a deposit thicker than the coupon and unknown processes', () => {
