@@ -165,8 +165,8 @@ describe('each role on real records', () => {
     expect(own.body.items.map(i => i.id)).toContain(ids.ownTestFile)
   })
 
-  // fixed by the access-rule change: an auditor sees only certified tests (as the sheet does), so their files too
-  it.fails('an auditor gets 404 for the file of an uncertified test of a granted project\'s welder', async () => {
+  // One access rule per record: an auditor sees only certified tests (as the sheet does), so their files too.
+  it('an auditor gets 404 for the file of an uncertified test of a granted project\'s welder', async () => {
     expect(await status('auditor', `/api/attachments/${ids.uncertifiedTestFile}`)).toBe(404)
     expect(await status('auditor', `/api/attachments/${ids.uncertifiedTestFile}/thumbnail`)).toBe(404)
   })

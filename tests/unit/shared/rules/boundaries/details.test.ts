@@ -113,8 +113,13 @@ describe('ISO 9606-1 processes, transfers, filler groups and plate/pipe (docs/so
     expect(text(25)).not.toContain('covers plate')
     expect(text(25.1)).toContain('covers plate')
   })
-  it('filler group FM1 covers FM1 and FM2; other groups are refused, not guessed', () => {
+  it('filler group FM1 covers FM1 and FM2 (S2, partial); the other groups are answered from memory and say so', () => {
     expect(iso({ process: '135', fNumber: 1 }).fillerGroups).toEqual(['FM1', 'FM2'])
-    expect(refused({ code: 'iso-9606-1', check: 'welder-ranges', unit: 'mm', input: { process: '135', form: 'plate', weld: 'groove', testPositions: ['PA'], depositThickness: 5, fNumber: 2 } })).toContain('FM2')
+    const basis = (fm: number) => (iso({ process: '135', fNumber: fm }).reasons as Reason[]).find(r => r.clause === 'ISO 9606-1 filler groups')!.basis
+    expect(basis(1)).toBe('partial')
+    for (const fm of [2, 3, 4, 5, 6]) expect(basis(fm), `FM${fm}`).toBe('memory')
+    // from memory (ISO 9606-1 Table 3): FM5 and FM6 qualify only themselves
+    expect(iso({ process: '135', fNumber: 5 }).fillerGroups).toEqual(['FM5'])
+    expect(refused({ code: 'iso-9606-1', check: 'welder-ranges', unit: 'mm', input: { process: '135', form: 'plate', weld: 'groove', testPositions: ['PA'], depositThickness: 5, fNumber: 7 } })).toContain('FM7')
   })
 })
