@@ -25,9 +25,12 @@ export async function missingWelders(db: Db, ids: number[]) {
 export async function insertEntries(db: Db, entries: NewEntry[], accountId: number, action: string) {
   return db.transaction(async (tx) => {
     const rows = []
-    // Chunks keep each statement under the parameter limit; the transaction keeps them all-or-nothing.
-    for (let i = 0; i < entries.length; i += 1000) {
-      rows.push(...await tx.insert(continuityEntries).values(entries.slice(i, i + 1000).map(e => ({ ...e, recordedBy: accountId }))).returning({ id: continuityEntries.id }))
+    // Chunks keep each statement under the parameter limit; the transaction keeps them all-or-nothing. Small chunks,
+    // with a turn of the event loop between them, let an embedded database (which runs on this thread) answer other
+    // requests while a large import is stored.
+    for (let i = 0; i < entries.length; i += 25) {
+      rows.push(...await tx.insert(continuityEntries).values(entries.slice(i, i + 25).map(e => ({ ...e, recordedBy: accountId }))).returning({ id: continuityEntries.id }))
+      await new Promise(resolve => setImmediate(resolve))
     }
     await recordAudit(tx as unknown as Db, {
       accountId, action, recordType: 'continuity', recordId: rows.length === 1 ? rows[0]!.id : null,

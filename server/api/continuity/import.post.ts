@@ -11,8 +11,8 @@ export default defineEventHandler(async (event) => {
   const { csv, commit } = await validBody(event, continuityImportSchema)
   const db = await useDb()
   // The CSV is parsed and checked in a worker thread (server/workers/import-check.ts).
-  const { rows, errors } = await checkImportOffThread(db, csv, todayIso())
-  const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
+  const { rows = [], ...summary } = await checkImportOffThread(db, csv, todayIso(), commit)
+  const errors = summary.errors
   if (!commit) return { ...summary, stored: 0 }
   if (errors.length) {
     throw createError({
