@@ -24,6 +24,8 @@ export interface OpenOptions {
   databaseUrl?: string
   dataDir: string
   holder?: string
+  /** Runs right after the migrations, on PostgreSQL still under their lock (the demo seed: once, however many servers start). */
+  afterMigrate?: (db: Db) => Promise<unknown>
 }
 
 /** Migrations sit beside the built server entry, or in the source tree in dev and scripts. */
@@ -54,12 +56,14 @@ export const MIGRATION_LOCK_KEY = 0x526f6f74 // 'Root'
  * Migrates a PostgreSQL database while holding a session advisory lock, so app servers started at the same moment
  * on a fresh database take turns: the first applies the migrations, the others then find nothing left to do.
  */
-export async function migrateUnderLock(pool: pg.Pool) {
+export async function migrateUnderLock(pool: pg.Pool, afterMigrate?: (db: Db) => Promise<unknown>) {
   const client = await pool.connect()
   try {
     await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY])
     try {
-      await migratePg(drizzlePg(client, { schema }), { migrationsFolder: migrationsFolder() })
+      const db = drizzlePg(client, { schema })
+      await migratePg(db, { migrationsFolder: migrationsFolder() })
+      if (afterMigrate) await afterMigrate(db as unknown as Db)
     }
     finally {
       await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY])
@@ -74,7 +78,7 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
   if (options.databaseUrl) {
     const pool = new pg.Pool({ connectionString: options.databaseUrl, max: 10 })
     try {
-      await migrateUnderLock(pool)
+      await migrateUnderLock(pool, options.afterMigrate)
     }
     catch (error) {
       await pool.end()
@@ -88,6 +92,7 @@ export async function openDatabase(options: OpenOptions): Promise<Database> {
     const client = await PGlite.create(options.dataDir)
     const db = drizzlePglite(client, { schema })
     await migratePglite(db, { migrationsFolder: migrationsFolder() })
+    if (options.afterMigrate) await options.afterMigrate(db)
     return {
       db,
       driver: 'pglite',

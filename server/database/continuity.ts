@@ -1,4 +1,4 @@
-import { count, eq, gte, ilike, inArray, lte, or, sql } from 'drizzle-orm'
+import { count, eq, gte, ilike, inArray, lte, or } from 'drizzle-orm'
 import { standingsOf } from './standings'
 import type { SessionUser } from '../utils/auth'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
@@ -8,12 +8,10 @@ import type { ContinuityListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { accounts, continuityEntries, shopSettings, welders } from './schema'
 import { recordAudit } from './audit'
-import { parseImportOffThread } from '../workers/import-check'
-import type { RowError } from '../workers/import-parse'
+import { checkImportOffThread } from '../workers/import-check'
 
 export interface NewEntry { welderId: number, process: string, weldedOn: string, reference: string }
 export type { RowError } from '../workers/import-parse'
-export interface ImportRow extends NewEntry { line: number, stamp: string, welderName: string }
 
 export async function welderLogsOwnContinuity(db: Db) {
   const [settings] = await db.select({ allowed: shopSettings.welderLogsOwnContinuity }).from(shopSettings).where(eq(shopSettings.id, 1))
@@ -31,9 +29,12 @@ export async function missingWelders(db: Db, ids: number[]) {
 export async function insertEntries(db: Db, entries: NewEntry[], accountId: number, action: string) {
   return db.transaction(async (tx) => {
     const rows = []
-    // Chunks keep each statement under the parameter limit; the transaction keeps them all-or-nothing.
-    for (let i = 0; i < entries.length; i += 1000) {
-      rows.push(...await tx.insert(continuityEntries).values(entries.slice(i, i + 1000).map(e => ({ ...e, recordedBy: accountId }))).returning({ id: continuityEntries.id }))
+    // Chunks keep each statement under the parameter limit; the transaction keeps them all-or-nothing. Small chunks,
+    // with a turn of the event loop between them, let an embedded database (which runs on this thread) answer other
+    // requests while a large import is stored.
+    for (let i = 0; i < entries.length; i += 25) {
+      rows.push(...await tx.insert(continuityEntries).values(entries.slice(i, i + 25).map(e => ({ ...e, recordedBy: accountId }))).returning({ id: continuityEntries.id }))
+      await new Promise(resolve => setImmediate(resolve))
     }
     await recordAudit(tx as unknown as Db, {
       accountId, action, recordType: 'continuity', recordId: rows.length === 1 ? rows[0]!.id : null,
@@ -41,45 +42,6 @@ export async function insertEntries(db: Db, entries: NewEntry[], accountId: numb
     })
     return rows.length
   })
-}
-
-/**
- * Parse and check a continuity CSV: the rows it would store and every row error, with its line number. The parsing runs
- * in a worker thread (server/workers/import-check.ts), so a 40,000-row file does not hold up other requests.
- */
-export async function checkImport(db: Db, csv: string, today: string): Promise<{ rows: ImportRow[], errors: RowError[] }> {
-  const parsed = await parseImportOffThread(csv)
-  const errors = parsed.errors
-  if (errors.some(e => e.field === 'header')) return { rows: [], errors }
-  const stamps = [...new Set(parsed.stamps.map(s => s.toLowerCase()))]
-  const roster = stamps.length
-    ? await db.select({ id: welders.id, stamp: welders.stamp, name: welders.name }).from(welders).where(inArray(sql`lower(${welders.stamp})`, stamps))
-    : []
-  const byStamp = new Map(roster.map(w => [w.stamp.toLowerCase(), w]))
-  const rows: ImportRow[] = []
-  const seen = new Set<string>()
-  for (let i = 0; i < parsed.lines.length; i++) {
-    const line = parsed.lines[i]!
-    const [stamp, process, weldedOn, reference] = [parsed.stamps[i]!, parsed.processes[i]!, parsed.days[i]!, parsed.references[i]!]
-    const welder = byStamp.get(stamp.toLowerCase())
-    if (!welder) {
-      errors.push({ line, field: 'stamp', message: `No welder with stamp ${stamp} on the roster` })
-      continue
-    }
-    if (weldedOn > today) {
-      errors.push({ line, field: 'weldedOn', message: `${weldedOn} is after today` })
-      continue
-    }
-    const key = `${welder.id}|${process}|${weldedOn}|${reference}`
-    if (seen.has(key)) {
-      errors.push({ line, field: 'row', message: 'The same entry appears twice in the file' })
-      continue
-    }
-    seen.add(key)
-    rows.push({ line, stamp: welder.stamp, welderName: welder.name, welderId: welder.id, process, weldedOn, reference })
-  }
-  if (!rows.length && !errors.length) errors.push({ line: 1, field: 'file', message: 'The file has a header but no rows' })
-  return { rows, errors: errors.sort((a, b) => a.line - b.line) }
 }
 
 /** Staff log continuity for anyone; a welder for themselves, and only when the shop allows it (403 otherwise). */
@@ -109,10 +71,11 @@ export async function logBulk(db: Db, user: SessionUser, input: ContinuityBulkIn
 
 /** A CSV import: without `commit` the preview and row errors; with it every row in one transaction, or nothing when any row is wrong. */
 export async function importLog(db: Db, user: SessionUser, csv: string, commit: boolean, today: string) {
-  const { rows, errors } = await checkImport(db, csv, today)
-  const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
+  // The CSV is parsed and checked in a worker thread (server/workers/import-check.ts) against the roster read here.
+  const roster = await db.select({ id: welders.id, stamp: welders.stamp, name: welders.name }).from(welders)
+  const { rows = [], ...summary } = await checkImportOffThread(roster, csv, today, commit)
   if (!commit) return { ...summary, stored: 0 }
-  if (errors.length) return invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors)
+  if (summary.errors.length) return invalid('body', [`${summary.errors.length} row error${summary.errors.length === 1 ? '' : 's'}: nothing was imported`], {}, summary.errors)
   const stored = await insertEntries(db, rows.map(({ welderId, process, weldedOn, reference }) => ({ welderId, process, weldedOn, reference })), user.id, 'import')
   return { ...summary, preview: [], stored }
 }

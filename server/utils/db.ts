@@ -16,10 +16,9 @@ export function useDatabase(): Promise<Database> {
       databaseUrl: process.env.DATABASE_URL || config.databaseUrl || undefined,
       dataDir: config.dataDir,
       holder: `rootface server (pid ${process.pid})`,
-    }).then(async (database) => {
-      // The demo shop only on request (NUXT_SEED_DEMO=true; `npm run dev` sets it), never by default in production.
-      if (String(config.seedDemo) === 'true') await seedDemoShop(database.db)
-      return database
+      // The demo shop only on request (NUXT_SEED_DEMO=true; `npm run dev` sets it), never by default in production;
+      // seeded under the migration lock, so servers starting together seed it once.
+      afterMigrate: String(config.seedDemo) === 'true' ? db => seedDemoShop(db) : undefined,
     })
   }
   return holder[globalKey]

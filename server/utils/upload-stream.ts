@@ -40,7 +40,7 @@ export async function receiveUpload(event: H3Event, options: { maxFileBytes: num
   if (!String(headers['content-type'] ?? '').toLowerCase().startsWith('multipart/form-data')) return null
   let parser: busboy.Busboy
   try {
-    parser = busboy({ headers, defParamCharset: 'utf8', limits: { fileSize: options.maxFileBytes, files: 4, fields: 20, fieldSize: 16 * 1024, parts: 30 } })
+    parser = busboy({ headers, defParamCharset: 'utf8', limits: { fileSize: options.maxFileBytes + 1, files: 4, fields: 20, fieldSize: 16 * 1024, parts: 30 } })
   }
   catch {
     return null
@@ -78,6 +78,7 @@ export async function receiveUpload(event: H3Event, options: { maxFileBytes: num
           headLength += Math.min(chunk.length, HEAD_BYTES - headLength)
         }
       })
+      // The limit is one byte over the largest allowed size: reaching it means the file is too large.
       stream.on('limit', () => {
         received.tooLarge = true
       })

@@ -1,25 +1,29 @@
 import Papa from 'papaparse'
 import { continuityImportRowSchema, importHeaders } from '../../shared/schemas/continuity'
 
-// The CPU-heavy half of checking a continuity CSV: parsing it and checking every row's fields. Pure (no database), so
-// it runs in a worker thread (import-worker.ts); the roster lookup stays on the server (import-check.ts).
+// Checking a continuity CSV: parsing it, checking every row's fields and matching stamps to the roster. Pure (no
+// database: the roster is handed in), so it runs in a worker thread (import-worker.ts, import-check.ts).
 
 export interface RowError { line: number, field: string, message: string }
+export interface RosterEntry { id: number, stamp: string, name: string }
+export interface CheckedImportRow { line: number, stamp: string, welderName: string, welderId: number, process: string, weldedOn: string, reference: string }
 
-/** The rows whose fields are right, column by column (cheap to pass between threads), and every row error. */
-export interface ParsedImport {
+export interface CheckedImport {
+  total: number
+  welders: number
   errors: RowError[]
-  lines: number[]
-  stamps: string[]
-  processes: string[]
-  days: string[]
-  references: string[]
+  /** The first rows, for the preview. */
+  preview: CheckedImportRow[]
+  /** Every row, only when asked for (to store them): a large file's rows cost time to pass between threads. */
+  rows?: CheckedImportRow[]
 }
+
+export const PREVIEW_ROWS = 200
 
 const normal = (h: string) => h.trim().toLowerCase().replace(/[_\s]+/g, ' ')
 
-export function parseImportCsv(csv: string): ParsedImport {
-  const result: ParsedImport = { errors: [], lines: [], stamps: [], processes: [], days: [], references: [] }
+export function checkImportCsv(csv: string, roster: RosterEntry[], today: string, withRows: boolean): CheckedImport {
+  const errors: RowError[] = []
   const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ''), {
     header: true, delimiter: ',', skipEmptyLines: 'greedy', transformHeader: normal,
   })
@@ -27,24 +31,36 @@ export function parseImportCsv(csv: string): ParsedImport {
   const column = Object.fromEntries(Object.entries(importHeaders).map(([key, names]) => [key, fields.find(f => names.includes(f))]))
   const missing = Object.entries(column).filter(([, f]) => !f).map(([k]) => importHeaders[k as keyof typeof importHeaders][0])
   if (missing.length) {
-    result.errors.push({ line: 1, field: 'header', message: `The first line must name the columns; missing: ${missing.join(', ')}` })
-    return result
+    return { total: 0, welders: 0, preview: [], rows: [], errors: [{ line: 1, field: 'header', message: `The first line must name the columns; missing: ${missing.join(', ')}` }] }
   }
-  for (const e of parsed.errors) result.errors.push({ line: (e.row ?? 0) + 2, field: 'row', message: e.message })
+  for (const e of parsed.errors) errors.push({ line: (e.row ?? 0) + 2, field: 'row', message: e.message })
+  const byStamp = new Map(roster.map(w => [w.stamp.toLowerCase(), w]))
+  const rows: CheckedImportRow[] = []
+  const seen = new Set<string>()
   parsed.data.forEach((raw, i) => {
     const line = i + 2
-    const row = continuityImportRowSchema.safeParse({
+    const result = continuityImportRowSchema.safeParse({
       stamp: raw[column.stamp!], process: raw[column.process!], weldedOn: raw[column.weldedOn!]?.trim(), reference: raw[column.reference!],
     })
-    if (!row.success) {
-      for (const [field, messages] of Object.entries(row.error.flatten().fieldErrors)) result.errors.push({ line, field, message: messages?.[0] ?? 'Invalid' })
+    if (!result.success) {
+      for (const [field, messages] of Object.entries(result.error.flatten().fieldErrors)) errors.push({ line, field, message: messages?.[0] ?? 'Invalid' })
       return
     }
-    result.lines.push(line)
-    result.stamps.push(row.data.stamp)
-    result.processes.push(row.data.process)
-    result.days.push(row.data.weldedOn)
-    result.references.push(row.data.reference)
+    const r = result.data
+    const welder = byStamp.get(r.stamp.toLowerCase())
+    if (!welder) return errors.push({ line, field: 'stamp', message: `No welder with stamp ${r.stamp} on the roster` })
+    if (r.weldedOn > today) return errors.push({ line, field: 'weldedOn', message: `${r.weldedOn} is after today` })
+    const key = `${welder.id}|${r.process}|${r.weldedOn}|${r.reference}`
+    if (seen.has(key)) return errors.push({ line, field: 'row', message: 'The same entry appears twice in the file' })
+    seen.add(key)
+    rows.push({ line, stamp: welder.stamp, welderName: welder.name, welderId: welder.id, process: r.process, weldedOn: r.weldedOn, reference: r.reference })
   })
-  return result
+  if (!rows.length && !errors.length) errors.push({ line: 1, field: 'file', message: 'The file has a header but no rows' })
+  return {
+    total: rows.length,
+    welders: new Set(rows.map(r => r.welderId)).size,
+    errors: errors.sort((a, b) => a.line - b.line),
+    preview: rows.slice(0, PREVIEW_ROWS),
+    ...(withRows ? { rows } : {}),
+  }
 }
