@@ -74,7 +74,8 @@ describe('reading procedures', () => {
     expect(body.signatures).toHaveLength(1)
     expect(body.signatures[0]).toMatchObject({ meaning: 'approved' })
     expect(body.signatures[0]!.sha256).toMatch(/^[0-9a-f]{64}$/)
-    expect(body.draft.electrical.volts).toMatchObject({ min: 17, max: 19.5 })
+    expect(body.draft.layers).toHaveLength(1)
+    expect(body.draft.layers[0]!.volts).toMatchObject({ min: 17, max: 19.5 })
     expect(body.support.checked).toBe(true)
     expect(body.support.supported).toBe(true)
     // ASME BPVC IX-2019, Table QW-451.1 (T from 1/16 to 3/8 in: 1/16 in to 2T) with QW-403.10 (GMAW-S, T under 1/2 in: 1.1T):
@@ -121,7 +122,7 @@ describe('drafting, approving and revising', () => {
     const empty = await send(supervisor, 'POST', '/api/procedures', {})
     expect(empty.status).toBe(400)
     const fields = (empty.body as Errors).data!.fieldErrors
-    for (const key of ['number', 'title', 'unit', 'process', 'baseMetals', 'fillers', 'positions']) expect(fields[key], key).toBeDefined()
+    for (const key of ['number', 'title', 'unit', 'layers', 'baseMetals', 'positions']) expect(fields[key], key).toBeDefined()
     const inverted = await send(supervisor, 'POST', '/api/procedures', { ...(await sheetDraft('KB-T90')), thickness: { groove: { min: 0.2, max: 0.1 }, fillet: { min: null, max: null } } })
     expect(inverted.status).toBe(400)
     expect((inverted.body as Errors).data!.fieldErrors.thickness?.[0]).toMatch(/minimum is above the maximum/)
@@ -163,7 +164,7 @@ describe('drafting, approving and revising', () => {
     expect((await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version + 5, draft: fixed })).status).toBe(409)
     expect((await send(inspector, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: fixed })).status).toBe(403)
     expect((await send(supervisor, 'PATCH', '/api/procedures/999999', { version: 1, draft: fixed })).status).toBe(404)
-    const bad = await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: { ...fixed, fillers: [] } })
+    const bad = await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: { ...fixed, layers: [] } })
     expect(bad.status).toBe(400)
     expect((bad.body as Errors).data!.fieldErrors.draft).toBeDefined()
     const saved = await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: fixed })

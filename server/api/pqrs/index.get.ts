@@ -1,4 +1,4 @@
-import { and, asc, count, eq, ilike, or, type SQL } from 'drizzle-orm'
+import { and, arrayContains, asc, count, eq, ilike, or, type SQL } from 'drizzle-orm'
 import { z } from 'zod'
 import { baseMetals, fillerMetals, pqrs } from '../../database/schema'
 import { supportPqrs } from '../../database/pqrs'
@@ -19,7 +19,7 @@ export default defineEventHandler(async (event) => {
   const db = await useDb()
   const filters: SQL[] = []
   if (query.status) filters.push(eq(pqrs.status, query.status))
-  if (query.process) filters.push(eq(pqrs.process, query.process))
+  if (query.process) filters.push(or(eq(pqrs.process, query.process), arrayContains(pqrs.processes, [query.process]))!)
   if (query.code) filters.push(eq(pqrs.code, query.code))
   if (query.pNumber) filters.push(eq(baseMetals.pNumber, query.pNumber))
   if (query.q) filters.push(or(ilike(pqrs.number, containsPattern(query.q)), ilike(pqrs.labReportNumber, containsPattern(query.q)))!)
@@ -28,7 +28,7 @@ export default defineEventHandler(async (event) => {
   const [rows, [totals]] = await Promise.all([
     db.select({
       id: pqrs.id, number: pqrs.number, testDate: pqrs.testDate, code: pqrs.code, edition: pqrs.edition, unit: pqrs.unit, process: pqrs.process,
-      transfer: pqrs.transfer, couponThickness: pqrs.couponThickness, status: pqrs.status, labReportNumber: pqrs.labReportNumber,
+      transfer: pqrs.transfer, processes: pqrs.processes, couponThickness: pqrs.couponThickness, status: pqrs.status, labReportNumber: pqrs.labReportNumber,
       baseMetalId: pqrs.baseMetalId, baseMetal: baseMetals.specification, baseGrade: baseMetals.grade, pNumber: baseMetals.pNumber, groupNumber: baseMetals.groupNumber,
       fillerMetalId: pqrs.fillerMetalId, fillerSpecification: fillerMetals.specification, filler: fillerMetals.classification, fNumber: fillerMetals.fNumber, aNumber: fillerMetals.aNumber,
     }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
@@ -36,6 +36,7 @@ export default defineEventHandler(async (event) => {
     db.select({ total: count() }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).where(where),
   ])
   const support = await supportPqrs(db, rows.map(r => r.id))
-  const items = rows.map(r => ({ ...r, support: support.find(s => s.id === r.id)! }))
+  // One support entry per process of the coupon (a combination PQR has several)
+  const items = rows.map(r => ({ ...r, support: support.find(s => s.id === r.id)!, supports: support.filter(s => s.id === r.id) }))
   return { items, total: totals?.total ?? 0, page: query.page, pageSize: query.pageSize }
 })

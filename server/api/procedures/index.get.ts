@@ -1,4 +1,4 @@
-import { and, count, eq, ilike, or, sql, type SQL } from 'drizzle-orm'
+import { and, arrayContains, count, eq, ilike, or, sql, type SQL } from 'drizzle-orm'
 import { z } from 'zod'
 import { procedures } from '../../database/schema'
 import { listQuerySchema, processSchema } from '#shared/schemas/list'
@@ -19,7 +19,8 @@ export default defineEventHandler(async (event) => {
   const filters: SQL[] = []
   if (user.role === 'welder') filters.push(eq(procedures.status, 'approved'))
   if (query.status) filters.push(eq(procedures.status, query.status))
-  if (query.process) filters.push(eq(procedures.process, query.process))
+  // A WPS with a layer of the process (the process column is its first layer's)
+  if (query.process) filters.push(or(eq(procedures.process, query.process), arrayContains(procedures.processes, [query.process]))!)
   if (query.code) filters.push(eq(procedures.code, query.code))
   if (query.pNumber) filters.push(or(eq(procedures.pNumberA, query.pNumber), eq(procedures.pNumberB, query.pNumber))!)
   if (query.thickness) filters.push(sql`${procedures.thicknessMin} <= ${query.thickness} and ${procedures.thicknessMax} >= ${query.thickness}`)
@@ -33,7 +34,7 @@ export default defineEventHandler(async (event) => {
   const [items, [totals]] = await Promise.all([
     db.select({
       id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, code: procedures.code,
-      edition: procedures.edition, status: procedures.status, unit: procedures.unit, process: procedures.process, transfer: procedures.transfer,
+      edition: procedures.edition, status: procedures.status, unit: procedures.unit, process: procedures.process, processes: procedures.processes, transfer: procedures.transfer,
       pNumberA: procedures.pNumberA, pNumberB: procedures.pNumberB, thicknessMin: procedures.thicknessMin, thicknessMax: procedures.thicknessMax,
       positions: procedures.positions, updatedAt: procedures.updatedAt, current,
     }).from(procedures).where(where).orderBy(orderOf(procedures[query.sort], query.dir), procedures.number, procedures.revision)

@@ -1,4 +1,4 @@
-import { and, count, eq, ilike, or, type SQL } from 'drizzle-orm'
+import { and, arrayContains, count, eq, ilike, or, type SQL } from 'drizzle-orm'
 import { z } from 'zod'
 import { procedures, welders, welderTests } from '../../database/schema'
 import { listQuerySchema, processSchema } from '#shared/schemas/list'
@@ -20,13 +20,14 @@ export default defineEventHandler(async (event) => {
   if (user.role === 'welder') filters.push(eq(welderTests.welderId, user.welderId ?? -1))
   if (query.welderId) filters.push(eq(welderTests.welderId, query.welderId))
   if (query.status) filters.push(eq(welderTests.status, query.status))
-  if (query.process) filters.push(eq(welderTests.process, query.process))
+  // A combination coupon is listed under each of its processes
+  if (query.process) filters.push(or(eq(welderTests.process, query.process), arrayContains(welderTests.processes, [query.process]))!)
   if (query.q) filters.push(or(ilike(welders.name, containsPattern(query.q)), ilike(welders.stamp, containsPattern(query.q)))!)
   const where = filters.length ? and(...filters) : undefined
   const window = pageWindow(query)
   const [items, [totals]] = await Promise.all([
     db.select({
-      id: welderTests.id, testDate: welderTests.testDate, status: welderTests.status, process: welderTests.process,
+      id: welderTests.id, testDate: welderTests.testDate, status: welderTests.status, process: welderTests.process, processes: welderTests.processes,
       transfer: welderTests.transfer, form: welderTests.form, weld: welderTests.weld, positions: welderTests.positions,
       couponThickness: welderTests.couponThickness, outsideDiameter: welderTests.outsideDiameter, unit: welderTests.unit,
       code: welderTests.code, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp,
