@@ -1,7 +1,9 @@
 import { and, asc, eq, inArray } from 'drizzle-orm'
 import { alias } from 'drizzle-orm/pg-core'
 import type { Db } from './client'
-import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, signatures, welders } from './schema'
+import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures, welders } from './schema'
+import { grantedProjectIds } from './projects'
+import type { SessionUser } from '../utils/auth'
 import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
@@ -132,3 +134,20 @@ export function judgedResults(row: Pick<PqrRow, 'id' | 'code' | 'unit'>, results
 }
 
 export { pqrBendSpecimens, pqrTensileSpecimens }
+
+/**
+ * Who may read a PQR, its sheet and its files: staff any; an auditor those supporting a WPS on a granted project;
+ * a welder none. False also when there is no such PQR.
+ */
+export async function mayReadPqr(db: Db, user: SessionUser, id: number) {
+  const [row] = await db.select({ id: pqrs.id }).from(pqrs).where(eq(pqrs.id, id))
+  if (!row) return false
+  if (user.role === 'supervisor' || user.role === 'inspector') return true
+  if (user.role !== 'auditor') return false
+  const granted = await grantedProjectIds(db, user.id)
+  if (!granted.length) return false
+  const hit = await db.select({ id: procedurePqrs.pqrId }).from(procedurePqrs)
+    .innerJoin(projectProcedures, eq(projectProcedures.procedureId, procedurePqrs.procedureId))
+    .where(and(eq(procedurePqrs.pqrId, id), inArray(projectProcedures.projectId, granted))).limit(1)
+  return hit.length > 0
+}

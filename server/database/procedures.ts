@@ -2,6 +2,8 @@ import { and, asc, desc, eq, max } from 'drizzle-orm'
 import type { Db } from './client'
 import { accounts, procedurePqrs, procedures, readings, signatures, welders } from './schema'
 import { supportPqrs } from './pqrs'
+import { auditorMayReadProcedure } from './projects'
+import type { SessionUser } from '../utils/auth'
 import { layeredSupport } from '#shared/qualification/layer-support'
 
 import { columnsOf, draftOf, layersOf, obj, str, type ProcedureRow } from './procedure-columns'
@@ -65,10 +67,14 @@ export async function readingsOf(db: Db, procedureId: number, welderId: number |
     .where(where).orderBy(desc(readings.takenAt)).limit(200)
 }
 
-/** True for a unique-key violation (PostgreSQL 23505), however the driver wraps it. */
-export function isUniqueViolation(error: unknown): boolean {
-  for (let e: unknown = error, depth = 0; e && depth < 4; e = (e as { cause?: unknown }).cause, depth++) {
-    if ((e as { code?: string }).code === '23505') return true
-  }
-  return false
+/**
+ * Who may read a WPS, its sheet and its files: staff any; a welder approved revisions; an auditor those on a granted
+ * project. False also when there is no such WPS.
+ */
+export async function mayReadProcedure(db: Db, user: SessionUser, id: number) {
+  const [row] = await db.select({ status: procedures.status }).from(procedures).where(eq(procedures.id, id))
+  if (!row) return false
+  if (user.role === 'supervisor' || user.role === 'inspector') return true
+  if (user.role === 'welder') return row.status === 'approved'
+  return auditorMayReadProcedure(db, user, id)
 }

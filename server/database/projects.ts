@@ -5,10 +5,17 @@ import {
 } from './schema'
 import type { CustomerInput, ProjectInput } from '../../shared/schemas/project'
 import { recordAudit } from '../utils/audit'
+import type { SessionUser } from '../utils/auth'
+import { conflict, fieldFailure, missing, stale } from '../../shared/types/outcome'
 
 /** Customers and projects: what the quality manager sets up so an auditor can be handed a packet. */
 
 const asTx = (tx: unknown) => tx as Db
+
+const nameTakenFailure = fieldFailure('name', 'A customer of this name exists already')
+const noCustomer = fieldFailure('customerId', 'Choose an existing customer')
+const numberTaken = fieldFailure('number', 'A project of this number exists already')
+const staleProject = stale('Someone changed this project since you opened it; reload and try again.')
 
 export async function listCustomers(db: Db) {
   const rows = await db.select({ id: customers.id, name: customers.name, contact: customers.contact, version: customers.version, projects: count(projects.id) })
@@ -22,33 +29,33 @@ async function nameTaken(db: Db, name: string, except?: number) {
 }
 
 export async function createCustomer(db: Db, input: CustomerInput, accountId: number) {
-  if (await nameTaken(db, input.name)) return { error: 'name' as const }
+  if (await nameTaken(db, input.name)) return nameTakenFailure
   return db.transaction(async (tx) => {
     const [row] = await tx.insert(customers).values(input).returning()
     await recordAudit(asTx(tx), { accountId, action: 'create', recordType: 'customer', recordId: row!.id, after: row })
-    return { row: row! }
+    return row!
   })
 }
 
 export async function updateCustomer(db: Db, id: number, input: CustomerInput & { version: number }, accountId: number) {
   const [before] = await db.select().from(customers).where(eq(customers.id, id))
-  if (!before) return { error: 'missing' as const }
-  if (before.version !== input.version) return { error: 'stale' as const }
-  if (await nameTaken(db, input.name, id)) return { error: 'name' as const }
+  if (!before) return missing('Customer')
+  if (before.version !== input.version) return stale('Someone changed this customer since you opened it; reload and try again.')
+  if (await nameTaken(db, input.name, id)) return nameTakenFailure
   return db.transaction(async (tx) => {
     const [row] = await tx.update(customers).set({ name: input.name, contact: input.contact, version: before.version + 1 })
       .where(and(eq(customers.id, id), eq(customers.version, input.version))).returning()
-    if (!row) return { error: 'stale' as const }
+    if (!row) return stale('Someone changed this customer since you opened it; reload and try again.')
     await recordAudit(asTx(tx), { accountId, action: 'update', recordType: 'customer', recordId: id, before, after: row })
-    return { row }
+    return row
   })
 }
 
 export async function deleteCustomer(db: Db, id: number, accountId: number) {
   const [before] = await db.select().from(customers).where(eq(customers.id, id))
-  if (!before) return { error: 'missing' as const }
+  if (!before) return missing('Customer')
   const [used] = await db.select({ n: count() }).from(projects).where(eq(projects.customerId, id))
-  if ((used?.n ?? 0) > 0) return { error: 'in-use' as const }
+  if ((used?.n ?? 0) > 0) return conflict('This customer has projects; delete or move them first.')
   await db.transaction(async (tx) => {
     await tx.delete(customers).where(eq(customers.id, id))
     await recordAudit(asTx(tx), { accountId, action: 'delete', recordType: 'customer', recordId: id, before })
@@ -66,36 +73,36 @@ async function customerExists(db: Db, id: number) {
 }
 
 export async function createProject(db: Db, input: ProjectInput, accountId: number) {
-  if (!await customerExists(db, input.customerId)) return { error: 'customer' as const }
-  if (await projectNumberTaken(db, input.number)) return { error: 'number' as const }
+  if (!await customerExists(db, input.customerId)) return noCustomer
+  if (await projectNumberTaken(db, input.number)) return numberTaken
   return db.transaction(async (tx) => {
     const [row] = await tx.insert(projects).values(input).returning()
     await recordAudit(asTx(tx), { accountId, action: 'create', recordType: 'project', recordId: row!.id, after: row })
-    return { row: row! }
+    return row!
   })
 }
 
 export async function updateProject(db: Db, id: number, input: Partial<ProjectInput> & { version: number }, accountId: number) {
   const [before] = await db.select().from(projects).where(eq(projects.id, id))
-  if (!before) return { error: 'missing' as const }
-  if (before.version !== input.version) return { error: 'stale' as const }
+  if (!before) return missing('Project')
+  if (before.version !== input.version) return staleProject
   const { version, ...changes } = input
   const next = { ...before, ...changes }
-  if (next.endsOn && next.endsOn < next.startsOn) return { error: 'period' as const }
-  if (changes.customerId !== undefined && !await customerExists(db, changes.customerId)) return { error: 'customer' as const }
-  if (changes.number !== undefined && await projectNumberTaken(db, changes.number, id)) return { error: 'number' as const }
+  if (next.endsOn && next.endsOn < next.startsOn) return fieldFailure('endsOn', 'The end must not be before the start')
+  if (changes.customerId !== undefined && !await customerExists(db, changes.customerId)) return noCustomer
+  if (changes.number !== undefined && await projectNumberTaken(db, changes.number, id)) return numberTaken
   return db.transaction(async (tx) => {
     const [row] = await tx.update(projects).set({ ...changes, version: version + 1 }).where(and(eq(projects.id, id), eq(projects.version, version))).returning()
-    if (!row) return { error: 'stale' as const }
+    if (!row) return staleProject
     await recordAudit(asTx(tx), { accountId, action: 'update', recordType: 'project', recordId: id, before, after: row })
-    return { row }
+    return row
   })
 }
 
 /** A project goes with its links, grants and packets; the records it listed stay. */
 export async function deleteProject(db: Db, id: number, accountId: number) {
   const [before] = await db.select().from(projects).where(eq(projects.id, id))
-  if (!before) return false
+  if (!before) return missing('Project')
   await db.transaction(async (tx) => {
     const ids = (await tx.select({ id: packets.id }).from(packets).where(eq(packets.projectId, id))).map(p => p.id)
     if (ids.length) {
@@ -105,7 +112,7 @@ export async function deleteProject(db: Db, id: number, accountId: number) {
     await tx.delete(projects).where(eq(projects.id, id))
     await recordAudit(asTx(tx), { accountId, action: 'delete', recordType: 'project', recordId: id, before })
   })
-  return true
+  return { ok: true as const }
 }
 
 export async function projectDetail(db: Db, id: number) {
@@ -133,16 +140,16 @@ type Link = 'procedure' | 'welder' | 'auditor'
 /** Attaching twice is harmless; attaching what does not exist (or is not an active auditor) is refused. */
 export async function attach(db: Db, projectId: number, link: Link, targetId: number, accountId: number) {
   const [project] = await db.select({ id: projects.id }).from(projects).where(eq(projects.id, projectId))
-  if (!project) return { error: 'project' as const }
+  if (!project) return missing('Project')
   if (link === 'procedure') {
     const [p] = await db.select({ status: procedures.status }).from(procedures).where(eq(procedures.id, targetId))
-    if (!p) return { error: 'target' as const }
-    if (p.status === 'draft') return { error: 'draft' as const }
+    if (!p) return fieldFailure('procedureId', 'Choose an existing procedure')
+    if (p.status === 'draft') return fieldFailure('procedureId', 'A draft WPS cannot go into a packet; approve it first')
   }
-  if (link === 'welder' && !(await db.select({ id: welders.id }).from(welders).where(eq(welders.id, targetId))).length) return { error: 'target' as const }
+  if (link === 'welder' && !(await db.select({ id: welders.id }).from(welders).where(eq(welders.id, targetId))).length) return fieldFailure('welderId', 'Choose an existing welder')
   if (link === 'auditor') {
     const [a] = await db.select({ role: accounts.role, active: accounts.active }).from(accounts).where(eq(accounts.id, targetId))
-    if (!a || a.role !== 'auditor' || !a.active) return { error: 'target' as const }
+    if (!a || a.role !== 'auditor' || !a.active) return fieldFailure('accountId', 'Choose an active auditor account')
   }
   await db.transaction(async (tx) => {
     if (link === 'procedure') await tx.insert(projectProcedures).values({ projectId, procedureId: targetId }).onConflictDoNothing()
@@ -160,9 +167,9 @@ export async function detach(db: Db, projectId: number, link: Link, targetId: nu
       : link === 'welder'
         ? await tx.delete(projectWelders).where(and(eq(projectWelders.projectId, projectId), eq(projectWelders.welderId, targetId))).returning()
         : await tx.delete(auditorGrants).where(and(eq(auditorGrants.projectId, projectId), eq(auditorGrants.accountId, targetId))).returning()
-    if (!removed.length) return false
+    if (!removed.length) return missing(link === 'auditor' ? 'Grant' : 'Link')
     await recordAudit(asTx(tx), { accountId, action: link === 'auditor' ? 'revoke' : 'detach', recordType: 'project', recordId: projectId, before: { [link]: targetId } })
-    return true
+    return { ok: true as const }
   })
 }
 
@@ -176,4 +183,38 @@ export async function projectChoices(db: Db) {
       .where(and(eq(accounts.role, 'auditor'), eq(accounts.active, true))).orderBy(asc(accounts.name)),
   ])
   return { procedures: procs, welders: roster, auditors }
+}
+
+// Who may read a project: the supervisor any, an auditor those granted to them. The records of a project follow it
+// (mayReadProcedure, mayReadPqr, mayReadWelder, mayReadWelderTest in their own modules).
+
+/** The projects granted to an auditor. */
+export async function grantedProjectIds(db: Db, accountId: number): Promise<number[]> {
+  const rows = await db.select({ id: auditorGrants.projectId }).from(auditorGrants).where(eq(auditorGrants.accountId, accountId))
+  return rows.map(r => r.id)
+}
+
+export async function mayReadProject(db: Db, user: SessionUser, projectId: number) {
+  if (user.role === 'supervisor') return (await db.select({ id: projects.id }).from(projects).where(eq(projects.id, projectId))).length > 0
+  if (user.role === 'auditor') return (await grantedProjectIds(db, user.id)).includes(projectId)
+  return false
+}
+
+/** Whether a welder is on one of the auditor's granted projects (or on `projectId`, when given and granted). */
+export async function auditorMayReadWelder(db: Db, user: SessionUser, welderId: number, projectId?: number) {
+  const granted = await grantedProjectIds(db, user.id)
+  const scope = projectId === undefined ? granted : granted.filter(id => id === projectId)
+  if (!scope.length) return false
+  const hit = await db.select({ id: projectWelders.welderId }).from(projectWelders)
+    .where(and(eq(projectWelders.welderId, welderId), inArray(projectWelders.projectId, scope))).limit(1)
+  return hit.length > 0
+}
+
+/** Whether a WPS is on one of the auditor's granted projects. */
+export async function auditorMayReadProcedure(db: Db, user: SessionUser, procedureId: number) {
+  const granted = await grantedProjectIds(db, user.id)
+  if (!granted.length) return false
+  const hit = await db.select({ id: projectProcedures.procedureId }).from(projectProcedures)
+    .where(and(eq(projectProcedures.procedureId, procedureId), inArray(projectProcedures.projectId, granted))).limit(1)
+  return hit.length > 0
 }

@@ -4,6 +4,7 @@ import { accounts, pqrs, procedures, signatures, signoffRequests, welders, welde
 import type { SignoffRequestInput } from '../../shared/schemas/signoff'
 import type { SessionUser } from '../utils/auth'
 import { recordAudit } from '../utils/audit'
+import { conflict, fieldFailure, forbidden, missing, type Outcome } from '../../shared/types/outcome'
 
 /** What the mail (or any other) plugin receives when a sign-off is asked: hook 'rootface:signoff-requested'. */
 export interface SignoffNotice {
@@ -30,8 +31,6 @@ const rules = {
   witnessed: { signer: 'inspector', asker: 'supervisor', types: ['welder-test'] },
 } as const
 
-export type SignoffProblem = 'role' | 'type' | 'record' | 'recipient' | 'signed' | 'open'
-
 export async function recordLabel(db: Db, type: string, id: number): Promise<{ label: string, version: number } | null> {
   if (type === 'procedure') {
     const [p] = await db.select({ number: procedures.number, revision: procedures.revision, version: procedures.version, title: procedures.title }).from(procedures).where(eq(procedures.id, id))
@@ -46,29 +45,27 @@ export async function recordLabel(db: Db, type: string, id: number): Promise<{ l
   return t ? { label: `WPQ-${t.id} · ${t.name} (${t.stamp}) ${t.process} ${t.testDate}`, version: t.version } : null
 }
 
-export async function requestSignoff(db: Db, user: SessionUser, input: SignoffRequestInput): Promise<{ notice: SignoffNotice } | { problem: SignoffProblem }> {
+export async function requestSignoff(db: Db, user: SessionUser, input: SignoffRequestInput): Promise<Outcome<SignoffNotice>> {
   const rule = rules[input.meaning]
-  if (user.role !== rule.asker) return { problem: 'role' }
-  if (!(rule.types as readonly string[]).includes(input.recordType)) return { problem: 'type' }
+  if (user.role !== rule.asker) return fieldFailure('meaning', 'A quality manager asks an inspector to certify or witness; an inspector asks a quality manager to approve')
+  if (!(rule.types as readonly string[]).includes(input.recordType)) return fieldFailure('recordType', 'That record cannot be signed with this meaning')
   const record = await recordLabel(db, input.recordType, input.recordId)
-  if (!record) return { problem: 'record' }
+  if (!record) return fieldFailure('recordId', 'No such record')
   const signers = await db.select({ id: accounts.id, name: accounts.name, email: accounts.email }).from(accounts)
     .where(and(eq(accounts.role, rule.signer), eq(accounts.active, true), input.requestedOf === null ? undefined : eq(accounts.id, input.requestedOf)))
-  if (!signers.length) return { problem: 'recipient' }
+  if (!signers.length) return fieldFailure('requestedOf', 'Choose an active account of the role that signs this')
   const [signed] = await db.select({ id: signatures.id }).from(signatures).where(and(eq(signatures.recordType, input.recordType),
     eq(signatures.recordId, input.recordId), eq(signatures.meaning, input.meaning), eq(signatures.recordVersion, record.version))).limit(1)
-  if (signed) return { problem: 'signed' }
+  if (signed) return conflict('This version of the record already carries that signature.')
   return db.transaction(async (tx) => {
     const [open] = await tx.select({ id: signoffRequests.id }).from(signoffRequests).where(and(eq(signoffRequests.recordType, input.recordType),
       eq(signoffRequests.recordId, input.recordId), eq(signoffRequests.meaning, input.meaning), eq(signoffRequests.status, 'open'))).limit(1)
-    if (open) return { problem: 'open' as const }
+    if (open) return conflict('A request for this sign-off is already open.')
     const [row] = await tx.insert(signoffRequests).values({ ...input, requestedBy: user.id }).returning()
     await recordAudit(tx as unknown as Db, { accountId: user.id, action: 'signoff.request', recordType: input.recordType, recordId: input.recordId, after: row })
     return {
-      notice: {
-        requestId: row!.id, meaning: input.meaning, record: { type: input.recordType, id: input.recordId, label: record.label },
-        requestedBy: { id: user.id, name: user.name }, recipients: signers, note: input.note,
-      },
+      requestId: row!.id, meaning: input.meaning, record: { type: input.recordType, id: input.recordId, label: record.label },
+      requestedBy: { id: user.id, name: user.name }, recipients: signers, note: input.note,
     }
   })
 }
@@ -97,19 +94,19 @@ export async function listSignoffs(db: Db, user: SessionUser, box: 'inbox' | 'se
 /** The asker withdraws; the one asked (or anyone of the signing role, when no one was named) marks it done. */
 export async function resolveSignoff(db: Db, user: SessionUser, id: number, status: 'done' | 'withdrawn') {
   const [row] = await db.select().from(signoffRequests).where(eq(signoffRequests.id, id))
-  if (!row) return { problem: 'missing' as const }
+  if (!row) return missing('Sign-off request')
   const signer = rules[row.meaning as keyof typeof rules]?.signer
   const addressee = row.requestedOf === null ? user.role === signer : row.requestedOf === user.id
   const allowed = status === 'withdrawn' ? row.requestedBy === user.id : addressee
-  if (!allowed && row.requestedBy !== user.id && !addressee) return { problem: 'missing' as const }
-  if (!allowed) return { problem: 'role' as const }
-  if (row.status !== 'open') return { problem: 'closed' as const }
+  if (!allowed && row.requestedBy !== user.id && !addressee) return missing('Sign-off request')
+  if (!allowed) return forbidden(status === 'withdrawn' ? 'Only the one who asked can withdraw it' : 'Only the one asked can mark it done')
+  if (row.status !== 'open') return conflict('This request is already closed.')
   return db.transaction(async (tx) => {
     const [updated] = await tx.update(signoffRequests).set({ status, resolvedAt: new Date() })
       .where(and(eq(signoffRequests.id, id), eq(signoffRequests.status, 'open'))).returning()
-    if (!updated) return { problem: 'closed' as const }
+    if (!updated) return conflict('This request is already closed.')
     await recordAudit(tx as unknown as Db, { accountId: user.id, action: `signoff.${status}`, recordType: row.recordType, recordId: row.recordId, before: row, after: updated })
-    return { row: updated }
+    return updated
   })
 }
 

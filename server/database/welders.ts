@@ -3,18 +3,12 @@ import type { Db } from './client'
 import { accounts, continuityEntries, welders, welderTests } from './schema'
 import type { WelderInput, WelderPatch } from '../../shared/schemas/welder'
 import { recordAudit } from '../utils/audit'
-import { conflict } from '../utils/errors'
+import type { SessionUser } from '../utils/auth'
+import { auditorMayReadWelder } from './projects'
+import { isUniqueViolation, settle } from '../utils/outcome'
+import { fieldFailure, missing, stale } from '../../shared/types/outcome'
 
-export class DuplicateStamp extends Error {
-  constructor(readonly stamp: string) {
-    super(`Stamp ${stamp} is already on the roster`)
-  }
-}
-
-const isUniqueViolation = (error: unknown) => {
-  const e = error as { code?: string, cause?: { code?: string } }
-  return e?.code === '23505' || e?.cause?.code === '23505'
-}
+const stampTakenFailure = (stamp: string) => fieldFailure('stamp', `Stamp ${stamp} is already on the roster`)
 
 async function stampTaken(db: Db, stamp: string, exceptId?: number) {
   const [hit] = await db.select({ id: welders.id }).from(welders)
@@ -22,8 +16,9 @@ async function stampTaken(db: Db, stamp: string, exceptId?: number) {
   return Boolean(hit)
 }
 
+/** A new roster entry; a stamp already on the roster (any case) is a field failure on `stamp`. */
 export async function insertWelder(db: Db, input: WelderInput, accountId: number) {
-  if (await stampTaken(db, input.stamp)) throw new DuplicateStamp(input.stamp)
+  if (await stampTaken(db, input.stamp)) return stampTakenFailure(input.stamp)
   try {
     return await db.transaction(async (tx) => {
       const [row] = await tx.insert(welders).values(input).returning()
@@ -32,27 +27,27 @@ export async function insertWelder(db: Db, input: WelderInput, accountId: number
     })
   }
   catch (error) {
-    if (isUniqueViolation(error)) throw new DuplicateStamp(input.stamp)
+    if (isUniqueViolation(error)) return stampTakenFailure(input.stamp)
     throw error
   }
 }
 
-/** Null when the welder does not exist; 409 when the version is stale. */
+/** A changed roster entry; missing, stale, or a field failure on a taken stamp. */
 export async function updateWelder(db: Db, id: number, patch: WelderPatch, accountId: number) {
   const { version, ...changes } = patch
-  if (changes.stamp && await stampTaken(db, changes.stamp, id)) throw new DuplicateStamp(changes.stamp)
+  if (changes.stamp && await stampTaken(db, changes.stamp, id)) return stampTakenFailure(changes.stamp)
   try {
-    return await db.transaction(async (tx) => {
+    return await settle(() => db.transaction(async (tx) => {
       const [before] = await tx.select().from(welders).where(eq(welders.id, id)).for('update')
-      if (!before) return null
-      if (before.version !== version) throw conflict(`Someone saved this welder after you opened it (version ${before.version}, yours ${version}). Reload and enter your change again.`)
+      if (!before) throw missing('Welder')
+      if (before.version !== version) throw stale(`Someone saved this welder after you opened it (version ${before.version}, yours ${version}). Reload and enter your change again.`)
       const [row] = await tx.update(welders).set({ ...changes, version: before.version + 1, updatedAt: new Date() }).where(eq(welders.id, id)).returning()
       await recordAudit(tx as unknown as Db, { accountId, action: 'update', recordType: 'welder', recordId: id, before, after: row })
       return row!
-    })
+    }))
   }
   catch (error) {
-    if (isUniqueViolation(error)) throw new DuplicateStamp(changes.stamp ?? '')
+    if (isUniqueViolation(error)) return stampTakenFailure(changes.stamp ?? '')
     throw error
   }
 }
@@ -74,4 +69,14 @@ export async function welderHistory(db: Db, id: number) {
   ])
   const { calendarToken: _secret, ...visible } = welder
   return { welder: visible, account: account[0] ?? null, tests, continuity }
+}
+
+/**
+ * Who may read a welder's page, continuity log and sheets: staff any; a welder themself; an auditor a welder on a
+ * granted project (on `projectId` when given).
+ */
+export async function mayReadWelder(db: Db, user: SessionUser, welderId: number, projectId?: number) {
+  if (user.role === 'supervisor' || user.role === 'inspector') return true
+  if (user.role === 'welder') return user.welderId === welderId
+  return auditorMayReadWelder(db, user, welderId, projectId)
 }

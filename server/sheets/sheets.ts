@@ -15,7 +15,7 @@ import { loadPqr, loadProcedure, loadWelderTest, shopName } from './records'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
 import { todayIso } from '../utils/standings'
-import { attachmentsOf } from '../utils/attachments'
+import { attachmentsOf } from '../database/attachments'
 import type { AttachmentRecordType } from '#shared/schemas/attachment'
 
 /** The public address the QR codes point at: AUTH_ORIGIN in production (required there), else the request's own. */

@@ -1,16 +1,13 @@
 import type { H3Event } from 'h3'
+import { invalid } from '#shared/types/outcome'
+import { httpError } from './outcome'
 import { z, type ZodType, type ZodTypeAny, type ZodTypeDef } from 'zod'
 
 type Schema<T> = ZodType<T, ZodTypeDef, unknown>
 
-function invalid(where: string, error: { flatten: () => { formErrors: string[], fieldErrors: Record<string, string[] | undefined> } }) {
+function schemaFailure(where: string, error: { flatten: () => { formErrors: string[], fieldErrors: Record<string, string[] | undefined> } }) {
   const { formErrors, fieldErrors } = error.flatten()
-  return createError({
-    statusCode: 400,
-    statusMessage: `Invalid ${where}`,
-    message: formErrors[0] ?? Object.entries(fieldErrors).map(([k, v]) => `${k}: ${v?.[0]}`).join('; '),
-    data: { formErrors, fieldErrors },
-  })
+  return httpError(invalid(where, formErrors, fieldErrors as Record<string, string[]>))
 }
 
 /** The path of the first text holding a NUL character, which PostgreSQL cannot store in text. */
@@ -51,20 +48,14 @@ function unknownField(schema: ZodTypeAny, input: unknown): string | null {
 function safeParse<T>(where: string, schema: Schema<T>, input: unknown): T {
   const unknown = where === 'body' ? unknownField(schema, input) : null
   if (unknown !== null) {
-    throw createError({
-      statusCode: 400, statusMessage: 'Invalid body', message: `${unknown || '(empty name)'}: not a field of this form`,
-      data: { formErrors: [], fieldErrors: { [unknown]: ['Not a field of this form'] } },
-    })
+    throw httpError(invalid('body', [], { [unknown]: ['Not a field of this form'] }))
   }
   const nul = nulPath(input)
   if (nul) {
-    throw createError({
-      statusCode: 400, statusMessage: `Invalid ${where}`, message: `${nul}: contains a NUL character`,
-      data: { formErrors: [], fieldErrors: { [nul]: ['Contains a NUL character'] } },
-    })
+    throw httpError(invalid(where, [], { [nul]: ['Contains a NUL character'] }))
   }
   const result = schema.safeParse(input)
-  if (!result.success) throw invalid(where, result.error)
+  if (!result.success) throw schemaFailure(where, result.error)
   return result.data
 }
 
@@ -84,7 +75,7 @@ export async function validBody<T>(event: H3Event, schema: Schema<T>): Promise<T
     body = await readBody(event)
   }
   catch {
-    throw createError({ statusCode: 400, statusMessage: 'Invalid body', message: 'The body is not valid JSON', data: { formErrors: ['The body is not valid JSON'], fieldErrors: {} } })
+    throw httpError(invalid('body', ['The body is not valid JSON'], {}))
   }
   return safeParse('body', schema, body)
 }

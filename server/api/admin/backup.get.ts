@@ -5,7 +5,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const database = await useDatabase()
   if (!database.backup) {
-    throw conflict('This server runs on a PostgreSQL server: back it up with pg_dump (npm run db:backup does so).')
+    throw httpError(conflict('This server runs on a PostgreSQL server: back it up with pg_dump (npm run db:backup does so).'))
   }
   const archive = Buffer.from(await (await database.backup()).arrayBuffer())
   await recordAudit(database.db, { accountId: user.id, action: 'backup', recordType: 'database', after: { bytes: archive.length } })

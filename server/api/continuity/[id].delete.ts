@@ -13,7 +13,7 @@ export default defineEventHandler(async (event) => {
     if (row) await recordAudit(tx as unknown as Db, { accountId: user.id, action: 'delete', recordType: 'continuity', recordId: id, before: row })
     return row
   })
-  if (!removed) throw notFound('Entry')
+  if (!removed) throw httpError(missing('Entry'))
   setResponseStatus(event, 204)
   return null
 })

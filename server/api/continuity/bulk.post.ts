@@ -5,10 +5,10 @@ import { continuityBulkSchema } from '#shared/schemas/continuity'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, staff)
   const input = await validBody(event, continuityBulkSchema)
-  if (input.weldedOn > todayIso()) throw fieldError('weldedOn', 'The date is after today')
+  if (input.weldedOn > todayIso()) throw httpError(fieldFailure('weldedOn', 'The date is after today'))
   const db = await useDb()
   const missing = await missingWelders(db, input.welderIds)
-  if (missing.length) throw fieldError('welderIds', `Not on the roster: ${missing.join(', ')}`)
+  if (missing.length) throw httpError(fieldFailure('welderIds', `Not on the roster: ${missing.join(', ')}`))
   const stored = await insertEntries(db, input.welderIds.map(welderId => ({ welderId, process: input.process, weldedOn: input.weldedOn, reference: input.reference })), user.id, 'bulk')
   setResponseStatus(event, 201)
   return { stored }

@@ -13,10 +13,7 @@ export default defineEventHandler(async (event) => {
   const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
   if (!commit) return { ...summary, stored: 0 }
   if (errors.length) {
-    throw createError({
-      statusCode: 400, statusMessage: 'Invalid body', message: `${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`,
-      data: { formErrors: [`${errors.length} row errors: nothing was imported`], fieldErrors: {}, rowErrors: errors },
-    })
+    throw httpError(invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors))
   }
   const stored = await insertEntries(db, rows.map(({ welderId, process, weldedOn, reference }) => ({ welderId, process, weldedOn, reference })), user.id, 'import')
   return { ...summary, preview: [], stored }

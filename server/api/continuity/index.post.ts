@@ -9,9 +9,9 @@ export default defineEventHandler(async (event) => {
     throw createError({ statusCode: 403, statusMessage: 'Your shop has continuity logged by the inspector or the quality manager' })
   }
   const input = await validBody(event, continuityEntrySchema)
-  if (user.role === 'welder' && input.welderId !== user.welderId) throw notFound('Welder')
-  if (input.weldedOn > todayIso()) throw fieldError('weldedOn', 'The date is after today')
-  if ((await missingWelders(db, [input.welderId])).length) throw fieldError('welderId', 'No such welder on the roster')
+  if (user.role === 'welder' && input.welderId !== user.welderId) throw httpError(missing('Welder'))
+  if (input.weldedOn > todayIso()) throw httpError(fieldFailure('weldedOn', 'The date is after today'))
+  if ((await missingWelders(db, [input.welderId])).length) throw httpError(fieldFailure('welderId', 'No such welder on the roster'))
   await insertEntries(db, [input], user.id, 'create')
   setResponseStatus(event, 201)
   const standings = (await standingsOfWelders(db, [input.welderId])).get(input.welderId) ?? []

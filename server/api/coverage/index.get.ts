@@ -11,7 +11,7 @@ export default defineEventHandler(async (event) => {
   await requireRole(event, staff)
   const query = await validQuery(event, jointSchema)
   const joint = resolveJoint(query)
-  if ('error' in joint) throw fieldError('gauge', joint.error)
+  if ('error' in joint) throw httpError(fieldFailure('gauge', joint.error))
   const db = await useDb()
   const started = performance.now()
   const rows = await coverageCandidates(db, joint.process)

@@ -6,7 +6,7 @@ export default defineEventHandler(async (event) => {
   const body = await validBody(event, runRemindersSchema)
   const testClock = String(useRuntimeConfig().mailTestClock) === 'true'
   if (body.today && !testClock) {
-    throw createError({ statusCode: 400, statusMessage: 'Invalid body', message: 'today: another day can be set only with NUXT_MAIL_TEST_CLOCK=true', data: { formErrors: [], fieldErrors: { today: ['Another day can be set only when the server runs with NUXT_MAIL_TEST_CLOCK=true'] } } })
+    throw httpError(fieldFailure('today', 'Another day can be set only when the server runs with NUXT_MAIL_TEST_CLOCK=true'))
   }
   const { result } = await runTask('mail:reminders', { payload: body.today ? { today: body.today } : {} })
   return result

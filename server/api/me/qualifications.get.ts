@@ -9,7 +9,7 @@ export default defineEventHandler(async (event) => {
   const welderId = user.welderId ?? -1
   const standings = (await standingsOfWelders(db, [welderId])).get(welderId) ?? []
   const own = await ownQualifications(db, welderId, standings)
-  if (!own) throw notFound('Roster entry')
+  if (!own) throw httpError(missing('Roster entry'))
   return {
     ...own, today: todayIso(), logsOwnContinuity: await welderLogsOwnContinuity(db),
     standings: standings.map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),

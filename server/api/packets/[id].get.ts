@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm'
 import { idParamSchema } from '#shared/schemas/list'
 import { packets } from '../../database/schema'
-import { mayReadProject } from '../../sheets/access'
+import { mayReadProject } from '../../database/projects'
 import { failStalePackets, packetColumns } from '../../sheets/packet-job'
 
 /** GET /api/packets/:id: where a packet build stands (status, progress, pages); for polling */
@@ -11,7 +11,7 @@ export default defineEventHandler(async (event) => {
   const db = await useDb()
   await failStalePackets(db)
   const [row] = await db.select(packetColumns).from(packets).where(eq(packets.id, id))
-  if (!row || !await mayReadProject(db, user, row.projectId)) throw notFound('Packet')
+  if (!row || !await mayReadProject(db, user, row.projectId)) throw httpError(missing('Packet'))
   setResponseHeader(event, 'cache-control', 'no-store')
   return row
 })

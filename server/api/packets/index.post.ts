@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { mayReadProject } from '../../sheets/access'
+import { mayReadProject } from '../../database/projects'
 import { startPacket } from '../../sheets/packet-job'
 import { publicOrigin } from '../../sheets/sheets'
 
@@ -10,7 +10,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'auditor'])
   const { projectId } = await validBody(event, bodySchema)
   const db = await useDb()
-  if (!await mayReadProject(db, user, projectId)) throw notFound('Project')
+  if (!await mayReadProject(db, user, projectId)) throw httpError(missing('Project'))
   const packet = await startPacket(db, projectId, user, publicOrigin(event))
   setResponseStatus(event, 202)
   return { id: packet.id, projectId, status: packet.status, progress: packet.progress }

@@ -6,6 +6,6 @@ export default defineEventHandler(async (event) => {
   await requireRole(event, staff)
   const { id } = await validParams(event, idParamSchema)
   const detail = await pqrDetail(await useDb(), id)
-  if (!detail) throw notFound('PQR')
+  if (!detail) throw httpError(missing('PQR'))
   return detail
 })

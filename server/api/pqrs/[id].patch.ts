@@ -7,7 +7,6 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   const { version, pqr } = await validBody(event, pqrPatchSchema)
-  const row = await updatePqr(await useDb(), id, version, pqr, user)
-  if (!row) throw notFound('PQR')
+  const row = orThrow(await updatePqr(await useDb(), id, version, pqr, user))
   return { id: row.id, number: row.number, status: row.status, version: row.version }
 })

@@ -5,7 +5,7 @@ import { createPqr } from '../../database/pqr-writes'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const draft = await validBody(event, pqrDraftSchema)
-  const row = await createPqr(await useDb(), draft, user)
+  const row = orThrow(await createPqr(await useDb(), draft, user))
   setResponseStatus(event, 201)
   return { id: row.id, number: row.number, status: row.status, version: row.version }
 })

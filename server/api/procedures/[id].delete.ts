@@ -7,7 +7,6 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   const { version } = await validBody(event, versionBodySchema)
-  const row = await discardDraft(await useDb(), id, version, user)
-  if (!row) throw notFound('Procedure')
+  const row = orThrow(await discardDraft(await useDb(), id, version, user))
   return { id: row.id, number: row.number, revision: row.revision, discarded: true }
 })

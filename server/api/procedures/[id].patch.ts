@@ -7,7 +7,6 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   const patch = await validBody(event, procedurePatchSchema)
-  const row = await updateDraft(await useDb(), id, patch, user)
-  if (!row) throw notFound('Procedure')
+  const row = orThrow(await updateDraft(await useDb(), id, patch, user))
   return { id: row.id, number: row.number, revision: row.revision, status: row.status, version: row.version }
 })

@@ -5,8 +5,7 @@ import { createDraft } from '../../database/procedure-writes'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const draft = await validBody(event, procedureDraftSchema)
-  const db = await useDb()
-  const row = await createDraft(db, draft, user)
+  const row = orThrow(await createDraft(await useDb(), draft, user))
   setResponseStatus(event, 201)
   return { id: row.id, number: row.number, revision: row.revision, status: row.status, version: row.version }
 })

@@ -5,6 +5,5 @@ import { deleteProject } from '../../database/projects'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
-  if (!await deleteProject(await useDb(), id, user.id)) throw notFound('Project')
-  return { ok: true }
+  return orThrow(await deleteProject(await useDb(), id, user.id))
 })

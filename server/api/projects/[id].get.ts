@@ -1,6 +1,5 @@
 import { idParamSchema } from '#shared/schemas/list'
-import { projectDetail } from '../../database/projects'
-import { mayReadProject } from '../../sheets/access'
+import { projectDetail, mayReadProject } from '../../database/projects'
 import { gapsOfProject, packetPlan, sheetCount } from '../../sheets/packet'
 
 /** GET /api/projects/:id: the project, its WPSs, welders, auditors and who was not current in its period; auditors only granted ones */
@@ -8,10 +7,10 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'auditor'])
   const { id } = await validParams(event, idParamSchema)
   const db = await useDb()
-  if (!await mayReadProject(db, user, id)) throw notFound('Project')
+  if (!await mayReadProject(db, user, id)) throw httpError(missing('Project'))
   const detail = await projectDetail(db, id)
   const plan = await packetPlan(db, id)
-  if (!detail || !plan) throw notFound('Project')
+  if (!detail || !plan) throw httpError(missing('Project'))
   const tests = plan.welders.map(w => ({ welderId: w.id, tests: w.tests }))
   return {
     ...detail,

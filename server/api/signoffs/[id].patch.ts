@@ -7,9 +7,5 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, staff)
   const { id } = await validParams(event, idParamSchema)
   const { status } = await validBody(event, signoffResolveSchema)
-  const result = await resolveSignoff(await useDb(), user, id, status)
-  if ('row' in result) return result.row
-  if (result.problem === 'missing') throw notFound('Sign-off request')
-  if (result.problem === 'role') throw createError({ statusCode: 403, statusMessage: status === 'withdrawn' ? 'Only the one who asked can withdraw it' : 'Only the one asked can mark it done' })
-  throw conflict('This request is already closed.')
+  return orThrow(await resolveSignoff(await useDb(), user, id, status))
 })

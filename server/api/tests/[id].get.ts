@@ -6,6 +6,6 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'inspector', 'welder'])
   const { id } = await validParams(event, idParamSchema)
   const test = await loadWelderTest(await useDb(), id)
-  if (!test || (user.role === 'welder' && test.welderId !== user.welderId)) throw notFound('Test')
+  if (!test || (user.role === 'welder' && test.welderId !== user.welderId)) throw httpError(missing('Test'))
   return test
 })

@@ -1,4 +1,4 @@
-import { RecordError, updateWelderTest } from '../../database/welder-tests'
+import { updateWelderTest } from '../../database/welder-tests'
 import { idParamSchema } from '#shared/schemas/list'
 import { welderTestPatchSchema } from '#shared/schemas/welder-test'
 
@@ -7,13 +7,5 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['inspector'])
   const { id } = await validParams(event, idParamSchema)
   const input = await validBody(event, welderTestPatchSchema)
-  try {
-    const row = await updateWelderTest(await useDb(), id, input, user.id)
-    if (!row) throw notFound('Test')
-    return row
-  }
-  catch (error) {
-    if (error instanceof RecordError) throw fieldError(error.field, error.message)
-    throw error
-  }
+  return orThrow(await updateWelderTest(await useDb(), id, input, user.id))
 })

@@ -7,9 +7,7 @@ import { verifyCode } from '../../sheets/verify'
  */
 export default defineEventHandler(async (event) => {
   const { code } = await validParams(event, verifyCodeSchema)
-  const db = await useDb()
-  const result = await verifyCode(db, code)
-  if (!result) throw createError({ statusCode: 404, statusMessage: 'No sheet has this code' })
+  const result = orThrow(await verifyCode(await useDb(), code) ?? missing('Sheet with this code'))
   setResponseHeader(event, 'cache-control', 'no-store')
   return result
 })

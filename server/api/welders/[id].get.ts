@@ -5,10 +5,10 @@ import { idParamSchema } from '#shared/schemas/list'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'inspector', 'welder'])
   const { id } = await validParams(event, idParamSchema)
-  if (user.role === 'welder' && user.welderId !== id) throw notFound('Welder')
+  if (user.role === 'welder' && user.welderId !== id) throw httpError(missing('Welder'))
   const db = await useDb()
   const history = await welderHistory(db, id)
-  if (!history) throw notFound('Welder')
+  if (!history) throw httpError(missing('Welder'))
   const standings = (await standingsOfWelders(db, [id])).get(id) ?? []
   return { ...history, standings, today: todayIso() }
 })

@@ -1,4 +1,4 @@
-import { DuplicateStamp, updateWelder } from '../../database/welders'
+import { updateWelder } from '../../database/welders'
 import { idParamSchema } from '#shared/schemas/list'
 import { welderPatchSchema } from '#shared/schemas/welder'
 
@@ -7,13 +7,5 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   const patch = await validBody(event, welderPatchSchema)
-  try {
-    const row = await updateWelder(await useDb(), id, patch, user.id)
-    if (!row) throw notFound('Welder')
-    return row
-  }
-  catch (error) {
-    if (error instanceof DuplicateStamp) throw fieldError('stamp', error.message)
-    throw error
-  }
+  return orThrow(await updateWelder(await useDb(), id, patch, user.id))
 })

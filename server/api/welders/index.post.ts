@@ -1,17 +1,11 @@
-import { DuplicateStamp, insertWelder } from '../../database/welders'
+import { insertWelder } from '../../database/welders'
 import { welderSchema } from '#shared/schemas/welder'
 
 /** POST /api/welders: the quality manager adds a welder to the roster (a stamp already used is a 400 on `stamp`) */
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const input = await validBody(event, welderSchema)
-  try {
-    const row = await insertWelder(await useDb(), input, user.id)
-    setResponseStatus(event, 201)
-    return row
-  }
-  catch (error) {
-    if (error instanceof DuplicateStamp) throw fieldError('stamp', error.message)
-    throw error
-  }
+  const row = orThrow(await insertWelder(await useDb(), input, user.id))
+  setResponseStatus(event, 201)
+  return row
 })

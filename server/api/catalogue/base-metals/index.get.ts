@@ -1,9 +1,7 @@
-import { asc } from 'drizzle-orm'
-import { baseMetals } from '../../../database/schema'
+import { listBaseMetals } from '../../../database/catalogue'
 
 /** GET /api/catalogue/base-metals: the base metals the forms pick from (staff) */
 export default defineEventHandler(async (event) => {
   await requireRole(event, staff)
-  const db = await useDb()
-  return db.select().from(baseMetals).orderBy(asc(baseMetals.pNumber), asc(baseMetals.specification), asc(baseMetals.grade))
+  return listBaseMetals(await useDb())
 })

@@ -1,9 +1,7 @@
-import { asc } from 'drizzle-orm'
-import { fillerMetals } from '../../../database/schema'
+import { listFillerMetals } from '../../../database/catalogue'
 
 /** GET /api/catalogue/filler-metals: the filler metals the forms pick from (staff) */
 export default defineEventHandler(async (event) => {
   await requireRole(event, staff)
-  const db = await useDb()
-  return db.select().from(fillerMetals).orderBy(asc(fillerMetals.fNumber), asc(fillerMetals.specification), asc(fillerMetals.classification))
+  return listFillerMetals(await useDb())
 })

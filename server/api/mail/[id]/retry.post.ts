@@ -10,6 +10,6 @@ export default defineEventHandler(async (event) => {
     if (done) await recordAudit(tx, { accountId: user.id, action: 'requeue', recordType: 'mail', recordId: id })
     return done
   })
-  if (!requeued) throw notFound('Failed message')
+  if (!requeued) throw httpError(missing('Failed message'))
   return sendQueuedMail(db)
 })

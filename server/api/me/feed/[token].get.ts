@@ -11,7 +11,7 @@ export default defineEventHandler(async (event) => {
   const { token } = await validParams(event, paramsSchema)
   const db = await useDb()
   const welder = await welderByCalendarToken(db, token.replace(/\.ics$/, ''))
-  if (!welder) throw notFound('Calendar')
+  if (!welder) throw httpError(missing('Calendar'))
   const standings = (await standingsOfWelders(db, [welder.id])).get(welder.id) ?? []
   setResponseHeaders(event, { 'content-type': 'text/calendar; charset=utf-8', 'cache-control': 'private, max-age=3600' })
   return lapseCalendar(welder, standings)

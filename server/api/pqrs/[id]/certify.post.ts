@@ -7,9 +7,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['inspector'])
   const { id } = await validParams(event, idParamSchema)
   const { version } = await validBody(event, versionBodySchema)
-  const result = await certifyPqr(await useDb(), id, version, user)
-  if (!result) throw notFound('PQR')
-  const { pqr, signature } = result
+  const { pqr, signature } = orThrow(await certifyPqr(await useDb(), id, version, user))
   return {
     id: pqr.id, number: pqr.number, status: pqr.status, version: pqr.version,
     signature: { signerName: signature.signerName, meaning: signature.meaning, signedAt: signature.signedAt, sha256: signature.sha256, verifyCode: signature.verifyCode },

@@ -7,7 +7,6 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['inspector'])
   const { id } = await validParams(event, idParamSchema)
   const results = await validBody(event, pqrResultsSchema)
-  const row = await recordResults(await useDb(), id, results, user)
-  if (!row) throw notFound('PQR')
+  const row = orThrow(await recordResults(await useDb(), id, results, user))
   return { id: row.id, number: row.number, status: row.status, version: row.version }
 })

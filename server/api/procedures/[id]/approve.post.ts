@@ -7,9 +7,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   const { version, handCheck } = await validBody(event, approveBodySchema)
-  const result = await approveProcedure(await useDb(), id, version, user, handCheck)
-  if (!result) throw notFound('Procedure')
-  const { procedure, signature, superseded } = result
+  const { procedure, signature, superseded } = orThrow(await approveProcedure(await useDb(), id, version, user, handCheck))
   return {
     id: procedure.id, number: procedure.number, revision: procedure.revision, status: procedure.status, version: procedure.version,
     signature: { signerName: signature.signerName, meaning: signature.meaning, signedAt: signature.signedAt, sha256: signature.sha256, verifyCode: signature.verifyCode },

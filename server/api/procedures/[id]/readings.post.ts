@@ -1,6 +1,5 @@
 import { idParamSchema } from '#shared/schemas/list'
 import { readingSchema } from '#shared/schemas/reading'
-import { findProcedure } from '../../../database/procedures'
 import { recordReading } from '../../../database/procedure-writes'
 
 /** POST /api/procedures/:id/readings: production readings checked against the window of an approved WPS */
@@ -8,10 +7,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'inspector', 'welder'])
   const { id } = await validParams(event, idParamSchema)
   const input = await validBody(event, readingSchema)
-  const db = await useDb()
-  const row = await findProcedure(db, id)
-  if (!row || (user.role === 'welder' && row.status !== 'approved')) throw notFound('Procedure')
-  if (row.status !== 'approved') throw conflict(`Readings are taken against an approved WPS; ${row.number} rev. ${row.revision} is ${row.status}.`)
+  const saved = orThrow(await recordReading(await useDb(), id, input, user))
   setResponseStatus(event, 201)
-  return recordReading(db, row, input, user)
+  return saved
 })

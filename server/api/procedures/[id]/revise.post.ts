@@ -7,8 +7,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { id } = await validParams(event, idParamSchema)
   const { version } = await validBody(event, versionBodySchema)
-  const draft = await reviseProcedure(await useDb(), id, version, user)
-  if (!draft) throw notFound('Procedure')
+  const draft = orThrow(await reviseProcedure(await useDb(), id, version, user))
   setResponseStatus(event, 201)
   return { id: draft.id, number: draft.number, revision: draft.revision, status: draft.status, version: draft.version }
 })

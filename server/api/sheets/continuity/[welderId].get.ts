@@ -1,5 +1,5 @@
 import { continuityQuerySchema, welderParamSchema } from '#shared/schemas/sheet'
-import { mayReadWelder } from '../../../sheets/access'
+import { mayReadWelder } from '../../../database/welders'
 import { firstRecordDay } from '../../../sheets/continuity'
 import { respondWithSheet } from '../../../sheets/download'
 import { continuityLogSheet, projectPeriod, publicOrigin } from '../../../sheets/sheets'
@@ -13,15 +13,15 @@ export default defineEventHandler(async (event) => {
   const { welderId } = await validParams(event, welderParamSchema)
   const query = await validQuery(event, continuityQuerySchema)
   const db = await useDb()
-  if (user.role === 'auditor' && query.projectId === undefined) throw notFound('Continuity log')
-  if (!await mayReadWelder(db, user, welderId, query.projectId)) throw notFound('Continuity log')
+  if (user.role === 'auditor' && query.projectId === undefined) throw httpError(missing('Continuity log'))
+  if (!await mayReadWelder(db, user, welderId, query.projectId)) throw httpError(missing('Continuity log'))
   const today = todayIso()
   const projectSpan = query.projectId === undefined ? null : await projectPeriod(db, query.projectId)
-  if (query.projectId !== undefined && !projectSpan) throw notFound('Project')
+  if (query.projectId !== undefined && !projectSpan) throw httpError(missing('Project'))
   const to = query.to ?? today
   const from = query.from ?? await firstRecordDay(db, welderId) ?? to
   const period = projectSpan ?? { from: from <= to ? from : to, to }
   const sheet = await continuityLogSheet(db, welderId, period, user, publicOrigin(event))
-  if (!sheet) throw notFound('Welder')
+  if (!sheet) throw httpError(missing('Welder'))
   return respondWithSheet(event, db, user, sheet, query.format, { type: 'welder', id: welderId })
 })

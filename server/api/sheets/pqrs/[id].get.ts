@@ -1,6 +1,6 @@
 import { idParamSchema } from '#shared/schemas/list'
 import { sheetQuerySchema } from '#shared/schemas/sheet'
-import { mayReadPqr } from '../../../sheets/access'
+import { mayReadPqr } from '../../../database/pqrs'
 import { respondWithSheet } from '../../../sheets/download'
 import { pqrSheetOf, publicOrigin } from '../../../sheets/sheets'
 
@@ -10,8 +10,8 @@ export default defineEventHandler(async (event) => {
   const { id } = await validParams(event, idParamSchema)
   const { format } = await validQuery(event, sheetQuerySchema)
   const db = await useDb()
-  if (!await mayReadPqr(db, user, id)) throw notFound('PQR')
+  if (!await mayReadPqr(db, user, id)) throw httpError(missing('PQR'))
   const sheet = await pqrSheetOf(db, id, publicOrigin(event))
-  if (!sheet) throw notFound('PQR')
+  if (!sheet) throw httpError(missing('PQR'))
   return respondWithSheet(event, db, user, sheet, format, { type: 'pqr', id })
 })

@@ -1,6 +1,6 @@
 import { idParamSchema } from '#shared/schemas/list'
 import { sheetQuerySchema } from '#shared/schemas/sheet'
-import { mayReadProcedure } from '../../../sheets/access'
+import { mayReadProcedure } from '../../../database/procedures'
 import { respondWithSheet } from '../../../sheets/download'
 import { procedureSheet, publicOrigin } from '../../../sheets/sheets'
 
@@ -10,8 +10,8 @@ export default defineEventHandler(async (event) => {
   const { id } = await validParams(event, idParamSchema)
   const { format } = await validQuery(event, sheetQuerySchema)
   const db = await useDb()
-  if (!await mayReadProcedure(db, user, id)) throw notFound('Procedure')
+  if (!await mayReadProcedure(db, user, id)) throw httpError(missing('Procedure'))
   const sheet = await procedureSheet(db, id, publicOrigin(event))
-  if (!sheet) throw notFound('Procedure')
+  if (!sheet) throw httpError(missing('Procedure'))
   return respondWithSheet(event, db, user, sheet, format, { type: 'procedure', id })
 })

@@ -1,6 +1,6 @@
 import { idParamSchema } from '#shared/schemas/list'
 import { sheetQuerySchema } from '#shared/schemas/sheet'
-import { mayReadWelderTest } from '../../../sheets/access'
+import { mayReadWelderTest } from '../../../database/welder-tests'
 import { respondWithSheet } from '../../../sheets/download'
 import { publicOrigin, welderTestSheet } from '../../../sheets/sheets'
 
@@ -10,8 +10,8 @@ export default defineEventHandler(async (event) => {
   const { id } = await validParams(event, idParamSchema)
   const { format } = await validQuery(event, sheetQuerySchema)
   const db = await useDb()
-  if (!await mayReadWelderTest(db, user, id)) throw notFound('Welder test')
+  if (!await mayReadWelderTest(db, user, id)) throw httpError(missing('Welder test'))
   const sheet = await welderTestSheet(db, id, publicOrigin(event))
-  if (!sheet) throw notFound('Welder test')
+  if (!sheet) throw httpError(missing('Welder test'))
   return respondWithSheet(event, db, user, sheet, format, { type: 'welder-test', id })
 })

@@ -7,7 +7,5 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['inspector'])
   const { id } = await validParams(event, idParamSchema)
   const { version } = await validBody(event, certifySchema)
-  const result = await certifyWelderTest(await useDb(), id, version, user)
-  if (!result) throw notFound('Test')
-  return result
+  return orThrow(await certifyWelderTest(await useDb(), id, version, user))
 })

@@ -7,6 +7,5 @@ const paramsSchema = z.object({ id: z.coerce.number().int().positive().max(2_147
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const params = await validParams(event, paramsSchema)
-  if (!await detach(await useDb(), params.id, 'procedure', params.procedureId, user.id)) throw notFound('Link')
-  return { ok: true }
+  return orThrow(await detach(await useDb(), params.id, 'procedure', params.procedureId, user.id))
 })

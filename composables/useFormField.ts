@@ -1,0 +1,12 @@
+import { useField } from 'vee-validate'
+
+/**
+ * One value of a vee-validate form, bound by its path ("thickness.min", "bends.0.result"), with the input id and the
+ * error id the field components use. Path-bound fields live in components/form/field/.
+ */
+export function useFormField<T>(name: () => string) {
+  const { value, errorMessage } = useField<T>(name)
+  const id = computed(() => `f-${name().replace(/[^\w-]/g, '-')}`)
+  const describedBy = computed(() => (errorMessage.value ? `${id.value}-error` : undefined))
+  return { value, errorMessage, id, describedBy }
+}

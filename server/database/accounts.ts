@@ -1,0 +1,134 @@
+import { and, count, eq, gt, ilike, isNull, ne, or, sql, type SQL } from 'drizzle-orm'
+import type { Db } from './client'
+import { accountTokens, accounts, welders } from './schema'
+import { recordAudit } from '../utils/audit'
+import type { SessionUser } from '../utils/auth'
+import { containsPattern, orderOf, pageWindow } from '../utils/list'
+import { queueMail } from '../utils/mail'
+import { issueAccountLink, setPasswordUrl, shopNameOf } from '../utils/mail-links'
+import { invitationMail } from '../utils/mail-messages'
+import { conflict, fieldFailure, missing, type Outcome } from '../../shared/types/outcome'
+import type { AccountInvite, AccountPatch, accountListQuerySchema } from '../../shared/schemas/account'
+import type { z } from 'zod'
+
+// Accounts as the supervisor manages them: list, read, invite, change, invite again. Sign-in itself is server/utils/auth.ts.
+
+/** The columns of an account as the accounts screens show it (never the password hash). */
+const accountViewColumns = {
+  id: accounts.id, email: accounts.email, name: accounts.name, role: accounts.role, active: accounts.active, createdAt: accounts.createdAt,
+  welderId: accounts.welderId, welderStamp: welders.stamp, welderName: welders.name,
+  hasPassword: sql<boolean>`${accounts.passwordHash} is not null`,
+  invitationExpiresAt: sql<string | null>`(select max(${accountTokens.expiresAt}) from ${accountTokens} where ${and(
+    eq(accountTokens.accountId, accounts.id), eq(accountTokens.purpose, 'invitation'), isNull(accountTokens.usedAt), gt(accountTokens.expiresAt, sql`now()`),
+  )})`,
+}
+
+export type AccountState = 'active' | 'invited' | 'deactivated'
+
+export function accountState(row: { active: boolean, hasPassword: boolean }): AccountState {
+  if (!row.active) return 'deactivated'
+  return row.hasPassword ? 'active' : 'invited'
+}
+
+export async function listAccounts(db: Db, query: z.infer<typeof accountListQuerySchema>) {
+  const filters: SQL[] = []
+  if (query.q) {
+    const pattern = containsPattern(query.q)
+    filters.push(or(ilike(accounts.name, pattern), ilike(accounts.email, pattern), ilike(welders.stamp, pattern))!)
+  }
+  if (query.role) filters.push(eq(accounts.role, query.role))
+  if (query.active) filters.push(eq(accounts.active, query.active === 'true'))
+  const where = filters.length ? and(...filters) : undefined
+  const { limit, offset } = pageWindow(query)
+  const [items, [totals]] = await Promise.all([
+    db.select(accountViewColumns).from(accounts).leftJoin(welders, eq(welders.id, accounts.welderId)).where(where)
+      .orderBy(orderOf(accounts[query.sort], query.dir), accounts.id).limit(limit).offset(offset),
+    db.select({ total: count() }).from(accounts).leftJoin(welders, eq(welders.id, accounts.welderId)).where(where),
+  ])
+  return { items: items.map(a => ({ ...a, state: accountState(a) })), total: totals?.total ?? 0, page: query.page, pageSize: query.pageSize }
+}
+
+export async function findAccount(db: Db, id: number) {
+  const [row] = await db.select(accountViewColumns).from(accounts).leftJoin(welders, eq(welders.id, accounts.welderId)).where(eq(accounts.id, id)).limit(1)
+  return row ? { ...row, state: accountState(row) } : missing('Account')
+}
+
+/** The roster entry exists and no other account is linked to it; null when so. */
+async function linkProblem(db: Db, welderId: number, exceptAccountId?: number) {
+  const [welder] = await db.select({ id: welders.id }).from(welders).where(eq(welders.id, welderId)).limit(1)
+  if (!welder) return fieldFailure('welderId', 'No such welder on the roster')
+  const [linked] = await db.select({ id: accounts.id, email: accounts.email }).from(accounts).where(eq(accounts.welderId, welderId)).limit(1)
+  if (linked && linked.id !== exceptAccountId) return conflict(`This welder is already linked to the account ${linked.email}`, 'welderId')
+  return null
+}
+
+/** Opens an account without a password and queues its invitation; `base` is the app's address for the link. */
+export async function inviteAccount(db: Db, user: SessionUser, body: AccountInvite, base: string) {
+  const email = body.email.toLowerCase()
+  const [taken] = await db.select({ id: accounts.id }).from(accounts).where(eq(sql`lower(${accounts.email})`, email)).limit(1)
+  if (taken) return conflict('An account with this e-mail address exists already', 'email')
+  const problem = body.welderId ? await linkProblem(db, body.welderId) : null
+  if (problem) return problem
+  const shopName = await shopNameOf(db)
+  const account = await db.transaction(async (tx) => {
+    const [created] = await tx.insert(accounts).values({ email, name: body.name, role: body.role, welderId: body.welderId ?? null }).returning()
+    const link = await issueAccountLink(tx, created!.id, 'invitation')
+    await queueMail(tx, invitationMail({
+      tokenId: link.id, accountId: created!.id, to: email, name: body.name, role: body.role, invitedBy: user.name,
+      link: setPasswordUrl(base, link.token), expiresAt: link.expiresAt, shopName,
+    }))
+    await recordAudit(tx, { accountId: user.id, action: 'invite', recordType: 'account', recordId: created!.id, after: { email, name: body.name, role: body.role, welderId: body.welderId ?? null } })
+    return created!
+  })
+  return { id: account.id, email: account.email, name: account.name, role: account.role, welderId: account.welderId, state: 'invited' as const }
+}
+
+/** Renames, links a welder account, deactivates or reactivates; never one's own deactivation, never the last supervisor. */
+export async function updateAccount(db: Db, user: SessionUser, id: number, patch: AccountPatch): Promise<Outcome<{ id: number, name: string, role: string, welderId: number | null, active: boolean }>> {
+  const [before] = await db.select({ id: accounts.id, name: accounts.name, role: accounts.role, welderId: accounts.welderId, active: accounts.active })
+    .from(accounts).where(eq(accounts.id, id)).limit(1)
+  if (!before) return missing('Account')
+  if (patch.welderId !== undefined) {
+    if (before.role !== 'welder') return fieldFailure('welderId', 'Only a welder account links to the roster')
+    const problem = await linkProblem(db, patch.welderId, id)
+    if (problem) return problem
+  }
+  if (patch.active === false && before.active) {
+    if (id === user.id) return conflict('You cannot deactivate your own account', 'active')
+    if (before.role === 'supervisor') {
+      const [others] = await db.select({ n: count() }).from(accounts)
+        .where(and(eq(accounts.role, 'supervisor'), eq(accounts.active, true), ne(accounts.id, id)))
+      if (!others?.n) return conflict('This is the last active quality manager account', 'active')
+    }
+  }
+  return db.transaction(async (tx) => {
+    const [row] = await tx.update(accounts).set({
+      ...(patch.name !== undefined ? { name: patch.name } : {}),
+      ...(patch.welderId !== undefined ? { welderId: patch.welderId } : {}),
+      ...(patch.active !== undefined ? { active: patch.active } : {}),
+    }).where(eq(accounts.id, id)).returning({ id: accounts.id, name: accounts.name, role: accounts.role, welderId: accounts.welderId, active: accounts.active })
+    // A deactivated account's open links stop working at once.
+    if (patch.active === false) await tx.delete(accountTokens).where(and(eq(accountTokens.accountId, id), isNull(accountTokens.usedAt)))
+    await recordAudit(tx, { accountId: user.id, action: patch.active === false ? 'deactivate' : patch.active === true && !before.active ? 'reactivate' : 'update', recordType: 'account', recordId: id, before, after: row })
+    return row!
+  })
+}
+
+/** A new invitation link (the earlier one stops working) for an active account without a password. */
+export async function reinviteAccount(db: Db, user: SessionUser, id: number, base: string) {
+  const [account] = await db.select().from(accounts).where(eq(accounts.id, id)).limit(1)
+  if (!account) return missing('Account')
+  if (!account.active) return conflict('The account is deactivated: reactivate it first')
+  if (account.passwordHash) return conflict('This account has a password already; its holder can reset it from the sign-in page')
+  const shopName = await shopNameOf(db)
+  const link = await db.transaction(async (tx) => {
+    const issued = await issueAccountLink(tx, id, 'invitation')
+    await queueMail(tx, invitationMail({
+      tokenId: issued.id, accountId: id, to: account.email, name: account.name, role: account.role, invitedBy: user.name,
+      link: setPasswordUrl(base, issued.token), expiresAt: issued.expiresAt, shopName,
+    }))
+    await recordAudit(tx, { accountId: user.id, action: 'reinvite', recordType: 'account', recordId: id })
+    return issued
+  })
+  return { id, expiresAt: link.expiresAt }
+}
