@@ -1,8 +1,8 @@
 import { evaluate } from '../rules'
-import type { BendResult, RadiographyResult, WelderRangesResult } from '../rules/results'
+import type { BendResult, RadiographyResult, SpecimenSetResult, WelderRangesResult } from '../rules/results'
 import type { CodeId, Reason, Unit } from '../rules/types'
 import { bendAcceptance, type BendRecord } from './bend-acceptance'
-import { qualifiedRangesOf, type WelderTestVariables } from './test-ranges'
+import { qualifiedRangesOf, specimenSetOf, type WelderTestVariables } from './test-ranges'
 
 export type Outcome = 'pending' | 'passed' | 'failed'
 
@@ -30,6 +30,8 @@ export interface TestOutcome {
   rangesError: string | null
   bend: (BendResult & { caution: string }) | null
   radiography: (RadiographyResult & { caution: string }) | null
+  /** The specimen set against the code's table (bend examination); incomplete keeps the test pending. */
+  specimenSet?: SpecimenSetResult | null
 }
 
 const visualClause: Record<CodeId, string> = {
@@ -97,8 +99,20 @@ function bendStep(test: TestRecord, steps: OutcomeStep[], ranges: TestOutcome['r
     steps.push({ step: 'bend', state: 'pending', text: `${test.bends.length} of ${required} bend specimens recorded; every one so far is acceptable.`, clause })
     return done('pending', { bend })
   }
-  steps.push({ step: 'bend', state: 'passed', text: `All ${test.bends.length} bend specimens acceptable.`, clause })
-  return done('passed', { bend })
+  const set = specimenSetOf(test, test.bends.map(b => b.type))
+  const specimenSet = 'error' in set ? null : set as unknown as SpecimenSetResult
+  if (specimenSet?.answer === 'incomplete') {
+    const tableClause = specimenSet.reasons[0]?.clause ?? clause
+    steps.push({ step: 'bend', state: 'pending', text: `Incomplete: every specimen is acceptable, but the set is not the one the table asks for (${specimenSet.allowed.map(s => Object.entries(s).map(([k, n]) => `${n} ${k}`).join(' + ')).join(', or ')}); missing ${specimenSet.missing.join(', ')}.`, clause: tableClause })
+    return done('pending', { bend, specimenSet })
+  }
+  if (specimenSet === null || specimenSet.answer === 'cannot-tell') {
+    const why = specimenSet === null ? String((set as { error: unknown }).error) : specimenSet.undetermined.map(u => u.needed).join('; ')
+    steps.push({ step: 'bend', state: 'passed', text: `All ${test.bends.length} bend specimens acceptable. The specimen set is not checked by Rootface here (${why}): the inspector checks it by hand.`, clause })
+    return done('passed', { bend, specimenSet })
+  }
+  steps.push({ step: 'bend', state: 'passed', text: `All ${test.bends.length} bend specimens acceptable; the set (${Object.entries(specimenSet.given).map(([k, n]) => `${n} ${k}`).join(' + ')}) is the one the table asks for.`, clause })
+  return done('passed', { bend, specimenSet })
 }
 
 function radiographyStep(test: TestRecord, steps: OutcomeStep[], done: (o: Outcome, e?: Partial<TestOutcome>) => TestOutcome) {

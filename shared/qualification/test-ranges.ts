@@ -1,4 +1,5 @@
 import { evaluate } from '../rules'
+import type { ProcessVariables } from '../rules/inputs'
 import type { CodeId, Unit } from '../rules/types'
 
 export interface WelderTestVariables {
@@ -17,19 +18,37 @@ export interface WelderTestVariables {
   fNumber?: string | null
   backing?: boolean | null
   positions: string[]
+  /** Combination coupon: each process with its own deposit (the single-process fields are then ignored). */
+  processes?: ProcessVariables[] | null
+  progression?: 'uphill' | 'downhill' | null
+  fillerAdded?: boolean | null
+  consumableInsert?: boolean | null
+  fillerForm?: 'solid' | 'metal-cored' | 'flux-cored' | 'powder' | null
+  backingGas?: boolean | null
+  current?: 'AC' | 'DCEP' | 'DCEN' | null
 }
 
 const defined = (o: Record<string, unknown>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== null && v !== undefined))
 
 /** The rules input for a stored welder test. */
 export function welderRangesInput(test: WelderTestVariables) {
-  return defined({
-    process: test.process, transfer: test.transfer, form: test.form, weld: test.weld, testPositions: test.positions,
-    couponThickness: test.couponThickness, depositThickness: test.depositThickness, layers: test.layers,
+  const coupon = {
+    form: test.form, weld: test.weld, testPositions: test.positions, couponThickness: test.couponThickness,
     outsideDiameter: test.outsideDiameter, backing: test.backing, pNumber: test.pNumber,
+  }
+  if (test.processes && test.processes.length > 0) return defined({ ...coupon, processes: test.processes.map(p => defined({ ...p })) })
+  return defined({
+    ...coupon, process: test.process, transfer: test.transfer, depositThickness: test.depositThickness, layers: test.layers,
     // Stored as text ("4"); the rules take the F-Number as a number.
     fNumber: test.fNumber === null || test.fNumber === undefined || test.fNumber === '' ? undefined : Number(test.fNumber),
+    progression: test.progression, fillerAdded: test.fillerAdded, consumableInsert: test.consumableInsert, fillerForm: test.fillerForm,
+    backingGas: test.backingGas, current: test.current,
   })
+}
+
+/** Whether the coupon's specimen set matches the code's table (QW-452.1(a), D1.1 Tables 6.11/10.13), or `{ error }`. */
+export function specimenSetOf(test: WelderTestVariables, types: string[]) {
+  return evaluate({ code: test.code, check: 'specimens', unit: test.unit, edition: test.edition, input: { test: welderRangesInput(test), specimens: types.map(type => ({ type })) } })
 }
 
 /** What a welder test qualifies, or `{ error }` when the rules cannot evaluate it. */

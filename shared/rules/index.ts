@@ -44,6 +44,8 @@ function run(ruleSet: RuleSet, check: CheckName, input: unknown, context: RuleCo
     case 'gauge': return { ...ruleSet.gauge(inputSchemas[check].parse(input), context) }
     case 'tensile': return { ...ruleSet.tensile(inputSchemas[check].parse(input), context) }
     case 'readings': return { ...ruleSet.readings(inputSchemas[check].parse(input), context) }
+    case 'specimens': return ruleSet.specimens ? { ...ruleSet.specimens(inputSchemas[check].parse(input), context) } : missing(ruleSet, check)
+    case 'toughness': return ruleSet.toughness ? { ...ruleSet.toughness(inputSchemas[check].parse(input), context) } : missing(ruleSet, check)
   }
 }
 

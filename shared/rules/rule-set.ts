@@ -1,9 +1,9 @@
 import type { ContinuityInput, ContinuityResult } from './continuity'
 import type { GaugeInput, GaugeResult } from './gauge'
 import type { HeatInputInput, HeatInputResult } from './heat-input'
-import type { BendInput, CoversInput, ProcedureRangesInput, RadiographyInput, WelderTestInput, WpsSupportInput } from './inputs'
+import type { BendInput, CoversInput, ProcedureRangesInput, RadiographyInput, SpecimenSetInput, ToughnessInput, WelderTestInput, WpsSupportInput } from './inputs'
 import type { ReadingsInput, ReadingsResult } from './readings'
-import type { BendResult, CoversResult, ProcedureRangesResult, RadiographyResult, WelderRangesResult, WpsSupportResult } from './results'
+import type { BendResult, CoversResult, ProcedureRangesResult, RadiographyResult, SpecimenSetResult, ToughnessResult, WelderRangesResult, WpsSupportResult } from './results'
 import type { TensileInput, TensileResult } from './tensile'
 import type { CodeId, RuleContext, Unit } from './types'
 
@@ -31,4 +31,8 @@ export interface RuleSet {
   gauge: Rule<GaugeInput, GaugeResult>
   tensile: Rule<TensileInput, TensileResult>
   readings: Rule<ReadingsInput, ReadingsResult>
+  /** Specimen types and counts of a welder test coupon against the code's table. */
+  specimens?: Rule<SpecimenSetInput, SpecimenSetResult>
+  /** Charpy results against the acceptance values entered (procedure qualification). */
+  toughness?: Rule<ToughnessInput, ToughnessResult>
 }

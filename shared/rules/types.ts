@@ -36,6 +36,8 @@ export type CheckName
     | 'tensile'
     | 'readings'
     | 'wps-support'
+    | 'specimens'
+    | 'toughness'
 
 /** What every result carries besides its own fields. */
 export interface ResultMeta {

@@ -1,91 +1,260 @@
-import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
+import type { CoversInput, FillerForm, ProcessVariables, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
-import { coversAny, finding, inRange, rangeText } from '../coverage'
+import { inRange, rangeText } from '../coverage'
+import { productionLayers, productionPositions, strip, testLayers } from '../layers'
 import { refuse } from '../refusal'
-import { formatLength, pick, toMicro } from '../units'
+import { formatLength, fromMicro, pick, toMicro } from '../units'
+import { categorical, layerBacking, reason, show, weldsVertical } from '../variables'
+import { coversEach } from '../covers-each'
 import { qw4231 } from './base-metals'
+import { diameterBand } from './diameter'
+import { qw433 } from './f-numbers'
 import { asme } from './limits'
-import { describeLetters } from './positions'
-import { asmeProcess } from './processes'
-import { welderRanges } from './welder-ranges'
+import { describeLetters, qw4619, type Letter } from './positions'
+import { asmeProcess, isShortCircuit } from './processes'
+import { listsVariable } from './variables'
+import { welderDeposit } from './welder-deposit'
 
-function one(test: WelderTestInput, production: ProductionWeld, context: RuleContext): CoverReason[] {
+const formFamily = (f: FillerForm) => (f === 'flux-cored' ? 'flux-cored' : f === 'powder' ? 'powder' : 'solid or metal-cored')
+const yesNo = (what: string) => show.bool(`with ${what}`, `without ${what}`)
+
+/** Positions: every production position in the QW-461.9 column of the test (column A or B by OD for groove welds). */
+function positionFindings(test: WelderTestInput, production: ProductionWeld, letters: Letter[], context: RuleContext): CoverReason[] {
   const u = context.unit
   const f = (m: number) => formatLength(m, u)
-  const ranges = welderRanges(test, context)
-  const reasons: CoverReason[] = []
-  const position = production.position.toUpperCase()
-  if (!['F', 'H', 'V', 'O'].includes(position)) refuse(`production.position: "${production.position}" is not F, H, V or O (QW-461.1, QW-461.2)`)
-  if (production.form === 'pipe' && production.outsideDiameter === undefined) refuse('production.outsideDiameter: a pipe weld needs its outside diameter')
-  const od = production.outsideDiameter === undefined ? undefined : toMicro(production.outsideDiameter)
-
-  if (production.process !== undefined) {
-    const same = asmeProcess(production.process) === asmeProcess(test.process)
-    reasons.push(finding(same, 'QW-350', same ? `Process ${test.process} was tested.` : `The test was ${test.process}; ${production.process} needs its own test.`, 'partial'))
+  const pos = qw4619(test.form, test.weld, test.testPositions)
+  if (production.weld === 'fillet') {
+    const bad = letters.filter(p => !pos.fillet.includes(p))
+    return [reason(bad.length ? 'not-met' : 'met', 'position', 'QW-461.9', `Fillet ${letters.join(', ')}: the test qualifies ${describeLetters(pos.fillet)}${bad.length ? `; not ${bad.join(', ')}` : ''}.`, pos.fromMemory ? 'memory' : 'verified')]
   }
+  const od24 = pick(asme.od24, u)
+  const od = production.outsideDiameter === undefined ? undefined : toMicro(production.outsideDiameter)
+  if (production.form === 'pipe' && od === undefined) {
+    // Column B (pipe of 24 in OD or less) is never wider than column A: a position in B is qualified whatever the OD.
+    const bad = letters.filter(p => !pos.groovePipe.includes(p))
+    const unknown = bad.filter(p => pos.groove.includes(p))
+    const no = bad.filter(p => !pos.groove.includes(p))
+    if (no.length) return [reason('not-met', 'position', 'QW-461.9', `Groove ${no.join(', ')} on pipe: the test qualifies ${describeLetters(pos.groove)} at most.`, 'verified')]
+    if (unknown.length) return [reason('not-recorded', 'position', 'QW-461.9', `Groove ${unknown.join(', ')} on pipe is qualified only over ${f(od24)} OD (column A); the pipe OD is not given.`, 'verified', { record: 'production.outsideDiameter' })]
+    return [reason('met', 'position', 'QW-461.9', `Groove ${letters.join(', ')} on pipe of any OD: the test qualifies ${describeLetters(pos.groovePipe)}.`, 'verified')]
+  }
+  const over24 = production.form === 'plate' || (od !== undefined && od > od24)
+  const column = over24 ? pos.groove : pos.groovePipe
+  const where = over24 ? (production.form === 'plate' ? 'plate' : `pipe over ${f(od24)} OD`) : `pipe of ${f(od24)} OD or less`
+  const bad = letters.filter(p => !column.includes(p))
+  return [reason(bad.length ? 'not-met' : 'met', 'position', 'QW-461.9', `Groove ${letters.join(', ')} on ${where}: the test qualifies ${describeLetters(column)}${bad.length ? `; not ${bad.join(', ')}` : ''}.`, 'verified')]
+}
 
-  if (production.weld === 'groove') {
-    const isGroove = test.weld === 'groove'
-    reasons.push(finding(isGroove, isGroove ? 'QW-303.1' : 'QW-452.5', isGroove ? 'A groove test qualifies groove welds.' : 'A fillet test qualifies fillet welds only, not groove welds.', 'verified'))
-    if (isGroove) {
-      const over24 = production.form === 'plate' || (od !== undefined && od > pick(asme.od24, u))
-      const column = over24 ? ranges.positions.groove : ranges.positions.groovePipe ?? []
-      const where = over24 ? (production.form === 'plate' ? 'plate' : `pipe over ${f(pick(asme.od24, u))} OD`) : `pipe of ${f(pick(asme.od24, u))} OD or less`
-      const ok = column.includes(position)
-      reasons.push(finding(ok, 'QW-461.9', `Groove ${position} on ${where}: the test qualifies ${describeLetters(column)}.`, 'verified'))
-      if (production.form === 'pipe' && production.outsideDiameter !== undefined && ranges.diameter) {
-        const within = inRange(production.outsideDiameter, ranges.diameter)
-        reasons.push(finding(within, test.form === 'plate' ? 'QW-461.9 †' : 'QW-452.3', `OD ${production.outsideDiameter} ${u}: qualified ${rangeText(ranges.diameter, u)}.`, 'verified'))
-      }
-      if (production.thickness !== undefined) {
-        const max = ranges.depositMax
-        const ok = max === null || max === undefined || toMicro(production.thickness) <= toMicro(max)
-        reasons.push(finding(ok, test.transfer === 'short-circuit' && test.process.toUpperCase() === 'GMAW' ? 'QW-404.32' : 'QW-452.1(b)',
-          `Deposit ${production.thickness} ${u}: qualified up to ${max === null || max === undefined ? 'the maximum to be welded' : `${max} ${u}`}.`, 'verified'))
-      }
-    }
+/** Diameter (QW-403.16): QW-452.3 for grooves, QW-452.4 for fillet tests, plate tests 2-7/8 in and over (†). */
+function diameterFinding(test: WelderTestInput, production: ProductionWeld, context: RuleContext): CoverReason | null {
+  const u = context.unit
+  if (production.form !== 'pipe') return null
+  if (production.weld === 'fillet' && test.weld === 'groove') return reason('met', 'diameter', 'QW-452.6', 'A groove test qualifies fillet welds of all sizes, thicknesses and diameters.', 'verified')
+  if (production.outsideDiameter === undefined) return reason('not-recorded', 'diameter', 'QW-403.16', 'The pipe OD is not given.', 'verified', { record: 'production.outsideDiameter' })
+  const two78 = pick(asme.od2_7_8, u)
+  let min: number
+  let clause: string
+  if (test.form === 'plate') {
+    min = two78
+    clause = 'QW-461.9 †'
   }
   else {
-    const column = ranges.positions.fillet
-    const ok = column.includes(position)
-    reasons.push(finding(ok, 'QW-461.9', `Fillet ${position}: the test qualifies ${describeLetters(column)}.`, 'verified'))
-    if (test.weld === 'groove') {
-      reasons.push(finding(true, 'QW-452.6', 'A groove test qualifies fillet welds of all sizes, thicknesses and diameters.', 'verified'))
+    if (test.outsideDiameter === undefined) return reason('not-recorded', 'diameter', test.weld === 'groove' ? 'QW-452.3' : 'QW-452.4', 'The test pipe OD was not recorded.', 'verified', { record: 'test.outsideDiameter' })
+    min = diameterBand(toMicro(test.outsideDiameter), u).min
+    clause = test.weld === 'groove' ? 'QW-452.3' : 'QW-452.4'
+  }
+  const range = { min: fromMicro(min), max: null }
+  const ok = inRange(production.outsideDiameter, range)
+  return reason(ok ? 'met' : 'not-met', 'diameter', clause, `OD ${production.outsideDiameter} ${u}: qualified ${rangeText(range, u)}.`, 'verified')
+}
+
+/** The variables of one production process against one test layer of the same process. */
+function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: number, pi: number }, test: WelderTestInput, production: ProductionWeld, letters: Letter[], context: RuleContext): CoverReason[] {
+  const u = context.unit
+  const f = (m: number) => formatLength(m, u)
+  const { t, p } = pair
+  const process = asmeProcess(t.process)
+  const reasons: CoverReason[] = []
+  const tag = { process }
+  const push = (r: CoverReason | null) => {
+    if (r) reasons.push(r)
+  }
+  const testSingle = test.processes === undefined
+  const prodSingle = production.processes === undefined
+  const tf = testSingle ? '' : `processes[${pair.ti}].`
+  const pf = prodSingle ? '' : `processes[${pair.pi}].`
+  const fix = (r: CoverReason | null) => (r && r.record ? { ...r, record: r.record.replace(/^test\./, `test.${tf}`).replace(/^production\./, `production.${pf}`) } : r)
+  const groove = production.weld === 'groove'
+  const testBacking = layerBacking(test.backing, pair.ti)
+  const prodBacking = layerBacking(production.backing, pair.pi)
+
+  if (listsVariable(process, 'transfer')) {
+    push(fix(categorical({
+      variable: 'transfer', clause: 'QW-409.2', basis: 'memory', field: 'transfer', process, test: t.transfer, production: p.transfer,
+      qualifies: (a, b) => (a === 'short-circuit') === (b === 'short-circuit'), show: v => `${v} transfer`,
+    })))
+  }
+  if (p.fNumber !== undefined || t.fNumber !== undefined) {
+    push(fix(categorical({
+      variable: 'f-number', clause: 'QW-404.15, QW-433', basis: 'memory', field: 'fNumber', process, test: t.fNumber, production: p.fNumber, unstated: 'not-stated',
+      qualifies: (a, b) => qw433(a, false, context.edition).numbers.includes(b), show: v => `F-No. ${v}`,
+    })))
+  }
+  if (groove && listsVariable(process, 'deposit')) {
+    const given = t.depositThickness ?? (testSingle ? test.couponThickness : undefined)
+    const produced = p.depositThickness
+    if (given === undefined) {
+      if (produced !== undefined) reasons.push(reason('not-recorded', 'deposit', 'QW-452.1(b)', `Production deposit ${produced} ${u} with ${process}: the test's ${process} deposit was not recorded.`, 'verified', { ...tag, record: `test.${tf}depositThickness` }))
+      else reasons.push(reason('not-stated', 'deposit', 'QW-452.1(b)', `Neither the test's nor the production's ${process} deposit is given: not compared.`, 'verified', tag))
     }
     else {
-      if (production.form === 'pipe' && production.outsideDiameter !== undefined && ranges.diameter) {
-        const within = inRange(production.outsideDiameter, ranges.diameter)
-        reasons.push(finding(within, test.form === 'plate' ? 'QW-461.9 †' : 'QW-452.4', `OD ${production.outsideDiameter} ${u}: qualified ${rangeText(ranges.diameter, u)}.`, 'verified'))
+      const layers = t.layers ?? (testSingle ? test.layers : undefined)
+      const short = isShortCircuit(process, t.transfer)
+      const max = welderDeposit(toMicro(given), layers, short, u).max
+      const clause = short && toMicro(given) < pick(asme.t1_2, u) ? 'QW-404.32' : 'QW-404.30, QW-452.1(b)'
+      const limit = max === null ? 'the maximum to be welded' : f(max)
+      if (produced === undefined) {
+        if (max === null) reasons.push(reason('met', 'deposit', clause, `The ${process} deposit qualifies the maximum to be welded.`, 'verified', tag))
+        else reasons.push(reason('not-stated', 'deposit', clause, `The test qualifies a ${process} deposit up to ${limit}; the production deposit is not given: not compared.`, 'verified', tag))
       }
-      if (production.thickness !== undefined && ranges.thickness) {
-        const within = inRange(production.thickness, ranges.thickness)
-        reasons.push(finding(within, 'QW-452.5', `Base metal ${production.thickness} ${u}: qualified ${rangeText(ranges.thickness, u)}.`, ranges.thickness.min === null ? 'partial' : 'memory'))
+      else {
+        const ok = max === null || toMicro(produced) <= max
+        reasons.push(reason(ok ? 'met' : 'not-met', 'deposit', clause, `${process} deposit ${produced} ${u}: qualified up to ${limit}.`, 'verified', tag))
       }
     }
   }
-
-  if (production.fNumber !== undefined) {
-    if (!ranges.fNumbers) refuse('test.fNumber: give the test F-Number (and backing) to check the production F-Number')
-    if (production.backing === undefined) refuse('production.backing: say whether the production weld has backing, to check F-Numbers (QW-433)')
-    const inGroup = ranges.fNumbers.numbers.includes(production.fNumber)
-    const backingOk = production.backing ? ranges.fNumbers.withBacking : ranges.fNumbers.withoutBacking
-    reasons.push(finding(inGroup && backingOk, 'QW-433', `F-No. ${production.fNumber} ${production.backing ? 'with' : 'without'} backing: the test qualifies F-No. ${ranges.fNumbers.numbers.join(', ')} ${ranges.fNumbers.withoutBacking ? 'with and without backing' : 'with backing only'}.`, 'memory'))
+  if (groove && listsVariable(process, 'backing')) {
+    push(fix(categorical({
+      variable: 'backing', clause: 'QW-402.4', basis: 'memory', field: 'backing', process, test: testBacking, production: prodBacking, unstated: 'not-stated',
+      qualifies: (a, b) => !a || b, qualifiesAll: a => !a, qualifiedByAll: b => b, show: yesNo('backing'),
+    })))
   }
-  else if (production.backing === false && test.backing === true) {
-    reasons.push(finding(false, 'QW-402.4', 'The test had backing; welding without backing needs a test without backing.', 'memory'))
+  if (groove && listsVariable(process, 'backing-added')) {
+    push(fix(categorical({
+      variable: 'backing-added', clause: 'QW-402.7', basis: 'memory', field: 'backing', process, test: testBacking, production: prodBacking,
+      qualifies: (a, b) => a || !b, qualifiesAll: a => a, qualifiedByAll: b => !b, show: yesNo('backing'),
+    })))
   }
-
-  if (production.pNumber !== undefined) {
-    if (test.pNumber === undefined) refuse('test.pNumber: give the test P-Number to check the production base metal')
-    const p = qw4231(test.pNumber, context.edition)
-    const ok = p.contains(production.pNumber)
-    reasons.push(finding(ok, 'QW-423.1', `P-No. ${production.pNumber}: the test qualifies ${p.groups.join('; ')}.`, 'verified'))
+  if (listsVariable(process, 'progression') && weldsVertical(letters)) {
+    push(fix(categorical({
+      variable: 'progression', clause: 'QW-405.3', basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression,
+      qualifies: (a, b) => a === b, show: v => `${v} vertical`,
+    })))
+  }
+  if (listsVariable(process, 'filler-added')) {
+    push(fix(categorical({
+      variable: 'filler-added', clause: 'QW-404.14', basis: 'memory', field: 'fillerAdded', process, test: t.fillerAdded, production: p.fillerAdded,
+      qualifies: (a, b) => a === b, show: yesNo('filler metal'),
+    })))
+  }
+  // QW-404.22 and QW-408.8 matter in single-welded groove welds without backing (open root).
+  const openRoot = groove && prodBacking !== true
+  if (listsVariable(process, 'consumable-insert') && openRoot) {
+    push(fix(categorical({
+      variable: 'consumable-insert', clause: 'QW-404.22', basis: 'memory', field: 'consumableInsert', process, test: t.consumableInsert, production: p.consumableInsert,
+      qualifies: (a, b) => a === b, show: yesNo('a consumable insert'),
+    })))
+  }
+  if (listsVariable(process, 'filler-form')) {
+    push(fix(categorical({
+      variable: 'filler-form', clause: 'QW-404.23', basis: 'memory', field: 'fillerForm', process, test: t.fillerForm, production: p.fillerForm,
+      qualifies: (a, b) => formFamily(a) === formFamily(b), show: v => `${v} filler`,
+    })))
+  }
+  if (listsVariable(process, 'backing-gas') && openRoot) {
+    push(fix(categorical({
+      variable: 'backing-gas', clause: 'QW-408.8', basis: 'memory', field: 'backingGas', process, test: t.backingGas, production: p.backingGas,
+      qualifies: (a, b) => !a || b, qualifiesAll: a => !a, qualifiedByAll: b => b, show: yesNo('inert backing gas'),
+    })))
+  }
+  if (listsVariable(process, 'current')) {
+    push(fix(categorical({
+      variable: 'current', clause: 'QW-409.4', basis: 'memory', field: 'current', process, test: t.current, production: p.current,
+      qualifies: (a, b) => a === b, show: v => v,
+    })))
   }
   return reasons
 }
 
-/** Does an ASME IX welder test (or set of tests) cover a production weld? */
+/** A production weld that names no process, as a layer of its own variables. */
+function stripProduction(production: ProductionWeld): Omit<ProcessVariables, 'process'> {
+  const { transfer, fNumber, progression, fillerAdded, consumableInsert, fillerForm, backingGas, current, fillerType } = production
+  return strip({ transfer, depositThickness: production.thickness, fNumber, progression, fillerAdded, consumableInsert, fillerForm, backingGas, current, fillerType })
+}
+
+function one(test: WelderTestInput, production: ProductionWeld, context: RuleContext): CoverReason[] {
+  const u = context.unit
+  const reasons: CoverReason[] = []
+  const letters = productionPositions(production).map((p) => {
+    const letter = p.toUpperCase()
+    if (!['F', 'H', 'V', 'O'].includes(letter)) refuse(`production.position: "${p}" is not F, H, V or O (QW-461.1, QW-461.2)`)
+    return letter as Letter
+  })
+  const tLayers = testLayers(test)
+  tLayers.forEach(l => asmeProcess(l.process))
+  qw4619(test.form, test.weld, test.testPositions)
+
+  if (production.code !== undefined) {
+    const same = production.code === 'asme-ix'
+    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'QW-301', same ? 'The joint is welded to ASME IX.' : `The joint is welded to ${production.code}; an ASME IX test does not qualify it.`, 'convention'))
+  }
+  const isGroove = test.weld === 'groove'
+  if (production.weld === 'groove') {
+    reasons.push(reason(isGroove ? 'met' : 'not-met', 'weld', isGroove ? 'QW-303.1' : 'QW-452.5', isGroove ? 'A groove test qualifies groove welds.' : 'A fillet test qualifies fillet welds only, not groove welds.', 'verified'))
+  }
+  else if (isGroove) {
+    reasons.push(reason('met', 'weld', 'QW-452.6, QW-303.1', 'A groove test qualifies fillet welds of all sizes, thicknesses and diameters.', 'verified'))
+  }
+  reasons.push(...positionFindings(test, production, letters, context))
+  const dia = diameterFinding(test, production, context)
+  if (dia) reasons.push(dia)
+
+  // Fillet test, fillet production: base metal thickness (QW-452.5).
+  if (production.weld === 'fillet' && !isGroove) {
+    if (test.couponThickness === undefined) {
+      reasons.push(reason('not-recorded', 'thickness', 'QW-452.5', 'The fillet test coupon thickness was not recorded.', 'partial', { record: 'test.couponThickness' }))
+    }
+    else if (toMicro(test.couponThickness) < pick(asme.t3_16, u)) {
+      const range = { min: test.couponThickness, max: fromMicro(2 * toMicro(test.couponThickness)) }
+      if (production.thickness === undefined) reasons.push(reason('not-recorded', 'thickness', 'QW-452.5', `The test qualifies base metal ${rangeText(range, u)}; the production thickness is not given.`, 'memory', { record: 'production.thickness' }))
+      else reasons.push(reason(inRange(production.thickness, range) ? 'met' : 'not-met', 'thickness', 'QW-452.5', `Base metal ${production.thickness} ${u}: qualified ${rangeText(range, u)}.`, 'memory'))
+    }
+    else {
+      reasons.push(reason('met', 'thickness', 'QW-452.5', `A fillet test coupon of ${formatLength(pick(asme.t3_16, u), u)} or more qualifies all base metal thicknesses and fillet sizes.`, 'partial'))
+    }
+  }
+
+  // Processes: each production process against a test layer of the same process.
+  const named = productionLayers(production)
+  const pLayers = named.length > 0 ? named : tLayers.length === 1 ? [{ ...stripProduction(production), process: tLayers[0]!.process }] : []
+  if (named.length === 0) {
+    // Production names no process: the variables of the test's process are compared as if production were welded with it, and the process itself is not stated.
+    reasons.push(reason('not-stated', 'process', 'QW-350', `Production does not name its process: not compared; the test was ${tLayers.map(l => l.process).join(' + ')}, and its other variables are compared as for that process.`, 'partial'))
+  }
+  pLayers.forEach((p, pi) => {
+    const process = asmeProcess(p.process)
+    const candidates = tLayers.map((t, ti) => ({ t, ti })).filter(({ t }) => asmeProcess(t.process) === process)
+    if (candidates.length === 0) {
+      reasons.push(reason('not-met', 'process', 'QW-350', `The test was ${tLayers.map(l => l.process).join(' + ')}; ${process} needs its own test.`, 'partial', { process }))
+      return
+    }
+    const judged = candidates.map(({ t, ti }) => layerFindings({ t, p, ti, pi }, test, production, letters, context))
+    const best = judged.find(rs => rs.every(r => r.met)) ?? judged.find(rs => rs.every(r => r.state !== 'not-met')) ?? judged[0]!
+    reasons.push(reason('met', 'process', 'QW-350', `${process} was tested${tLayers.length > 1 ? ' in the combination coupon (QW-306; each process within its own deposit)' : ''}.`, 'partial', { process }))
+    reasons.push(...best)
+  })
+
+  // P-No. (QW-403.18, QW-423.1).
+  const pNo = categorical({
+    variable: 'p-number', clause: 'QW-403.18, QW-423.1', basis: 'verified', field: 'pNumber', test: test.pNumber, production: production.pNumber, unstated: 'not-stated',
+    qualifies: (a, b) => qw4231(a, context.edition).contains(b), show: v => `P-No. ${v}`,
+  })
+  if (pNo) reasons.push(pNo)
+  return reasons
+}
+
+/** Does an ASME IX welder test (or set of tests) cover a production weld? Every QW-350 variable both sides state is compared. */
 export function covers(input: CoversInput, context: RuleContext): CoversResult {
-  return coversAny(input, (test, production) => one(test, production, context))
+  return coversEach(input, (test, production) => one(test, production, context))
 }

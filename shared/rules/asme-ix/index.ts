@@ -11,6 +11,8 @@ import { procedureRanges } from './procedure-ranges'
 import { radiography } from './radiography'
 import { welderRanges } from './welder-ranges'
 import { wpsSupport } from './wps-support'
+import { specimens } from './specimens'
+import { toughness } from '../toughness'
 
 /** ASME BPVC Section IX: procedure and performance qualification. */
 export const asmeIx: RuleSet = {
@@ -36,4 +38,6 @@ export const asmeIx: RuleSet = {
   gauge: gaugeThickness,
   tensile: tensileStrength,
   readings: (input, context) => checkReadings(input, context.unit),
+  specimens,
+  toughness,
 }

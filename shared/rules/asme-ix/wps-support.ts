@@ -2,6 +2,7 @@ import type { PqrRecord, WpsSupportInput } from '../inputs'
 import type { CoverReason, WpsSupportResult } from '../results'
 import type { RuleContext } from '../types'
 import { finding } from '../coverage'
+import { pqrLayers, wpsLayers } from '../layers'
 import { refuse } from '../refusal'
 import { formatLength, formatRange, toMicro } from '../units'
 import { asmeProcess, isShortCircuit } from './processes'
@@ -28,17 +29,17 @@ export function wpsSupport(input: WpsSupportInput, context: RuleContext): WpsSup
   const u = context.unit
   const f = (m: number) => formatLength(m, u)
   const wps = input.wps
-  const process = asmeProcess(wps.process)
+  const process = asmeProcess(wpsLayers(wps)[0]!.process)
   if (input.pqrs.length === 0) refuse('pqrs: give at least one supporting PQR')
   const reasons: CoverReason[] = []
-  const sameProcess = input.pqrs.map((pqr, i) => ({ pqr, i })).filter(({ pqr }) => asmeProcess(pqr.process) === process)
+  const sameProcess = input.pqrs.map((pqr, i) => ({ pqr, i })).filter(({ pqr }) => asmeProcess(pqrLayers(pqr)[0]!.process) === process)
   reasons.push(finding(sameProcess.length > 0, 'QW-200.2', sameProcess.length > 0
     ? `${process} is qualified by ${sameProcess.map(({ pqr, i }) => label(pqr, i)).join(', ')}.`
     : `No supporting PQR was welded with ${process}.`, 'memory'))
 
   // QW-409.2 (from memory): short-circuiting transfer and the other GMAW modes qualify each other not.
   const wpsShort = isShortCircuit(process, wps.transfer)
-  const matching = sameProcess.filter(({ pqr }) => process !== 'GMAW' || isShortCircuit(pqr.process, pqr.transfer) === wpsShort)
+  const matching = sameProcess.filter(({ pqr }) => process !== 'GMAW' || isShortCircuit(pqrLayers(pqr)[0]!.process, pqr.transfer) === wpsShort)
   if (process === 'GMAW') {
     reasons.push(finding(matching.length > 0, 'QW-409.2', matching.length > 0
       ? `${wpsShort ? 'Short-circuiting' : 'Spray, globular or pulsed'} transfer is qualified by ${matching.map(({ pqr, i }) => label(pqr, i)).join(', ')}.`
@@ -54,7 +55,7 @@ export function wpsSupport(input: WpsSupportInput, context: RuleContext): WpsSup
   }
 
   // QW-403.8 → Table QW-451.1 (and QW-403.6/.9/.10): base metal thickness.
-  const ranges = usable.map(({ pqr, i }) => ({ id: label(pqr, i), pqr, r: procedureRanges({ ...pqr, toughness: wps.toughness ?? false }, context) }))
+  const ranges = usable.map(({ pqr, i }) => ({ id: label(pqr, i), pqr, r: procedureRanges({ ...pqr, process: pqrLayers(pqr)[0]!.process, toughness: wps.toughness ?? false }, context) }))
   const joined = union(ranges.map(({ r }) => [toMicro(r.baseMetal.min ?? 0), r.baseMetal.max === null ? Infinity : toMicro(r.baseMetal.max)]))
   const wMin = wps.thickness.min === null ? null : toMicro(wps.thickness.min)
   const wMax = wps.thickness.max === null ? null : toMicro(wps.thickness.max)
@@ -100,5 +101,5 @@ export function wpsSupport(input: WpsSupportInput, context: RuleContext): WpsSup
   }
 
   const violations = reasons.filter(r => !r.met).map(({ clause, text, basis }) => ({ clause, text, basis }))
-  return { supported: violations.length === 0, violations, reasons }
+  return { supported: violations.length === 0, answer: violations.length === 0 ? 'supported' : 'not-supported', violations, reasons, layers: [], procedure: [], byHand: [], record: [], undetermined: [] }
 }

@@ -19,5 +19,8 @@ export function d11Tables(edition: string) {
     pipeRanges: old ? 'Table 4.11' : 'Table 10.13',
     continuity: old ? '4.2.3.1' : '6.2.3',
     bend: old ? '4.9.3.3' : 'Clause 6 bend acceptance (4.9.3.3 in the 2015 edition)',
+    // From memory: the WPQ essential-variable table (Table 4.12 in 2015) and the SMAW electrode groups (Table 4.13 in 2015).
+    essentials: old ? 'Table 4.12' : 'Clause 6 WPQ essential variables table (Table 4.12 in 2015)',
+    electrodeGroups: old ? 'Table 4.13' : 'Clause 6 electrode groups table (Table 4.13 in 2015)',
   }
 }

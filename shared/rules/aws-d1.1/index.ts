@@ -7,6 +7,7 @@ import { tensileStrength } from '../tensile'
 import { bend } from './bend'
 import { covers } from './covers'
 import { d11DefaultEdition, d11Editions, d11Tables } from './editions'
+import { specimens } from './specimens'
 import { welderRanges } from './welder-ranges'
 
 /** AWS D1.1 Structural Welding Code — Steel: welder qualification. */
@@ -30,4 +31,5 @@ export const awsD11: RuleSet = {
   gauge: gaugeThickness,
   tensile: tensileStrength,
   readings: (input, context) => checkReadings(input, context.unit),
+  specimens,
 }

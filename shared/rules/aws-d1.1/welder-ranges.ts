@@ -1,6 +1,7 @@
 import type { WelderTestInput } from '../inputs'
-import type { BendSpecimenCount, WelderRangesResult } from '../results'
+import type { BendSpecimenCount, Undetermined, WelderRangesResult } from '../results'
 import type { Basis, Range, Reason, RuleContext } from '../types'
+import { testProcess } from '../layers'
 import { refuse } from '../refusal'
 import { formatLength, formatRange, fromMicro, pick, toMicro } from '../units'
 import { d11Tables } from './editions'
@@ -23,7 +24,7 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
   const u = context.unit
   const f = (m: number) => formatLength(m, u)
   const tables = d11Tables(context.edition)
-  d11Process(input.process)
+  d11Process(testProcess(input))
   const si: Basis = u === 'mm' ? 'memory' : 'verified'
   const reasons: Reason[] = []
   const pos = d11Positions(input.form, input.weld, input.testPositions)
@@ -37,8 +38,14 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
     reasons.push({ clause: input.form === 'plate' ? tables.plateThickness : tables.pipeRanges, text: 'The thickness range of a fillet test is not carried by this module: read it in the table.', basis: 'convention' })
   }
 
-  if (input.weld === 'groove' && input.form === 'plate') {
-    if (input.couponThickness === undefined) refuse(`couponThickness: a plate groove test needs its plate thickness (${tables.plateThickness})`)
+  const undetermined: Undetermined[] = []
+  result.undetermined = undetermined
+  if (input.weld === 'groove' && input.form === 'plate' && input.couponThickness === undefined) {
+    undetermined.push({ field: 'couponThickness', needed: `${tables.plateThickness}: the plate thickness gives the thickness range and the bend specimens` })
+    result.positions.groovePipe = pos.groove
+    result.positions.groovePipeMinDiameter = fromMicro(pick(d11.od24, u))
+  }
+  if (input.weld === 'groove' && input.form === 'plate' && input.couponThickness !== undefined) {
     const T = toMicro(input.couponThickness)
     const t38 = pick(d11.t3_8, u)
     const min = pick(d11.t1_8, u)
@@ -62,7 +69,11 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
   }
 
   if (input.weld === 'groove' && input.form === 'pipe') {
-    if (input.outsideDiameter === undefined || input.couponThickness === undefined) refuse(`outsideDiameter and couponThickness: a pipe groove test needs its size and wall (${tables.pipeRanges})`)
+    if (input.outsideDiameter === undefined) undetermined.push({ field: 'outsideDiameter', needed: `${tables.pipeRanges}: the test pipe size gives the sizes and walls qualified and the bend specimens` })
+    if (input.couponThickness === undefined) undetermined.push({ field: 'couponThickness', needed: `${tables.pipeRanges}: the test pipe wall gives the walls qualified and the bend specimens` })
+    result.positions.groovePipe = pos.groove
+  }
+  if (input.weld === 'groove' && input.form === 'pipe' && input.outsideDiameter !== undefined && input.couponThickness !== undefined) {
     const od = toMicro(input.outsideDiameter)
     const wall = toMicro(input.couponThickness)
     const small = od <= pick(d11.od4, u)
@@ -85,7 +96,8 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
   }
 
   if (input.weld === 'fillet' && input.form === 'pipe' && input.outsideDiameter === undefined) {
-    refuse('outsideDiameter: a pipe fillet test needs its outside diameter')
+    undetermined.push({ field: 'outsideDiameter', needed: `${tables.pipeRanges}: the size of a pipe fillet test` })
   }
+  if (undetermined.length === 0) delete result.undetermined
   return result
 }

@@ -3,6 +3,7 @@ import { continuity } from '../continuity'
 import { gaugeThickness } from '../gauge'
 import { arcEnergyClauses, heatInput } from '../heat-input'
 import { checkReadings } from '../readings'
+import { specimensByHand } from '../specimens-by-hand'
 import { tensileStrength } from '../tensile'
 import { covers } from './covers'
 import { welderRanges } from './welder-ranges'
@@ -28,4 +29,5 @@ export const awsD13: RuleSet = {
   gauge: gaugeThickness,
   tensile: tensileStrength,
   readings: (input, context) => checkReadings(input, context.unit),
+  specimens: specimensByHand('AWS D1.3', 'D1.3 4.7'),
 }

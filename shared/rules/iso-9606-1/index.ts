@@ -3,6 +3,7 @@ import { continuity } from '../continuity'
 import { gaugeThickness } from '../gauge'
 import { arcEnergyClauses, heatInput } from '../heat-input'
 import { checkReadings } from '../readings'
+import { specimensByHand } from '../specimens-by-hand'
 import { tensileStrength } from '../tensile'
 import { covers } from './covers'
 import { welderRanges } from './welder-ranges'
@@ -30,4 +31,5 @@ export const iso96061: RuleSet = {
   gauge: gaugeThickness,
   tensile: tensileStrength,
   readings: (input, context) => checkReadings(input, context.unit),
+  specimens: specimensByHand('ISO 9606-1', 'ISO 9606-1, 6.4'),
 }

@@ -49,8 +49,9 @@ describe('ASME IX coverage of a production weld by a welder test (QW-461.9, QW-4
     expect(none.covered).toBe(false)
     expect(none.reasons.some(r => String((r as { text: string }).text).startsWith('Test 2:'))).toBe(true)
   })
-  it('refuses a pipe production weld without its diameter, and a position that is not F, H, V or O', () => {
-    expect(refused({ code: 'asme-ix', check: 'covers', unit: 'in', input: { test: plate3G4G, production: { form: 'pipe', weld: 'groove', position: 'F' } } })).toContain('outsideDiameter')
+  it('a pipe production weld without its diameter: cannot tell, record it (QW-461.9 †); refuses a position that is not F, H, V or O', () => {
+    const r = covers(plate3G4G, { form: 'pipe', weld: 'groove', position: 'F' })
+    expect([r.covered, r.answer, r.record]).toEqual([false, 'cannot-tell', ['production.outsideDiameter']])
     expect(refused({ code: 'asme-ix', check: 'covers', unit: 'in', input: { test: plate3G4G, production: { form: 'plate', weld: 'groove', position: '3G' } } })).toContain('not F, H, V or O')
   })
 })

@@ -167,7 +167,9 @@ describe('ASME IX base metals QW-423.1 (2015, 2023 editions; older edition) and 
     expect((plate(['1G'], { fNumber: 22, backing: true }).fNumbers as { numbers: number[] }).numbers).toContain(26)
     expect((wr({ process: 'GTAW', form: 'plate', weld: 'groove', testPositions: ['1G'], couponThickness: 0.375, fNumber: 22, backing: true }, 'in', '2010').fNumbers as { numbers: number[] }).numbers).not.toContain(26)
   })
-  it('refuses an F-Number without the backing condition', () => {
-    expect(refused({ code: 'asme-ix', check: 'welder-ranges', unit: 'in', input: { process: 'SMAW', form: 'plate', weld: 'groove', testPositions: ['1G'], couponThickness: 0.375, fNumber: 4 } })).toContain('backing')
+  it('an F-Number without the backing condition: with backing only, and backing listed as undetermined (QW-433, QW-402.4, from memory)', () => {
+    const r = ok({ code: 'asme-ix', check: 'welder-ranges', unit: 'in', input: { process: 'SMAW', form: 'plate', weld: 'groove', testPositions: ['1G'], couponThickness: 0.375, fNumber: 4 } })
+    expect(r.fNumbers).toEqual({ numbers: [1, 2, 3, 4], withBacking: true, withoutBacking: false })
+    expect(r.undetermined).toEqual([expect.objectContaining({ field: 'backing' })])
   })
 })
