@@ -32,6 +32,14 @@ const fillerOf = (f: Loose, unit: Unit, fNumberFallback: string | null) => ({
   fNumber: str(f.fNumber) ?? fNumberFallback ?? '', aNumber: str(f.aNumber), size: sizeOf(f.size, unit),
 })
 
+/** An older filler whose size text names several sizes ("1/8 in and 5/32 in") reads as one filler row per size. */
+function fillersOf(f: Loose, unit: Unit, fNumberFallback: string | null) {
+  const text = typeof f.size === 'string' ? f.size : null
+  const parts = text ? text.split(/\s*(?:,|\band\b|\bor\b|;)\s*/).filter(Boolean) : []
+  if (parts.length < 2 || parts.some(p => sizeOf(p, unit) === null)) return [fillerOf(f, unit, fNumberFallback)]
+  return parts.map(p => fillerOf({ ...f, size: p }, unit, fNumberFallback))
+}
+
 const bool = (v: unknown) => (typeof v === 'boolean' ? v : null)
 
 /** One stored layer as the form's layer, reading partial values with empty defaults. */
@@ -43,7 +51,7 @@ export function layerOf(raw: unknown, unit: Unit): ProcedureLayer {
   const enumOr = <T extends string>(v: unknown, allowed: readonly T[], fallback: T): T => (allowed.includes(v as T) ? v as T : fallback)
   return {
     ...blank, passes: str(l.passes), transfer: (str(l.transfer) as ProcedureLayer['transfer']) ?? null,
-    fillers: Array.isArray(l.fillers) ? l.fillers.map(f => fillerOf(obj(f), unit, null)) : [],
+    fillers: Array.isArray(l.fillers) ? l.fillers.flatMap(f => fillersOf(obj(f), unit, null)) : [],
     fillerAdded: bool(l.fillerAdded), depositMax: num(l.depositMax),
     current: enumOr(l.current, currentTypes, blank.current),
     amps: windowRange(l.amps), volts: windowRange(l.volts), wireFeed: windowRange(l.wireFeed), travelSpeed: windowRange(l.travelSpeed),
@@ -72,7 +80,7 @@ export function layersOf(row: Pick<ProcedureRow, 'layers' | 'process' | 'transfe
       name: 'all passes', process: row.process, transfer: row.transfer, depositMax: v.depositMax, current: el.current, amps: el.amps,
       volts: el.volts, wireFeed: el.wireFeed, travelSpeed: el.travelSpeed, heatInputMax: el.heatInputMax, ctwd: tech.ctwd, gas: v.gas, bead: tech.bead,
     }, unit),
-    fillers: fillers.map((f, i) => fillerOf(f, unit, row.fNumbers[i] ?? row.fNumbers[0] ?? null)),
+    fillers: fillers.flatMap((f, i) => fillersOf(f, unit, row.fNumbers[i] ?? row.fNumbers[0] ?? null)),
   }]
 }
 

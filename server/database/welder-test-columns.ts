@@ -1,6 +1,8 @@
 import type { welderTestBends, welderTests } from './schema'
 import { testOutcome, type TestRecord } from '../../shared/qualification/test-outcome'
-import { qualifiedRangesOf } from '../../shared/qualification/test-ranges'
+import type { WelderTestVariables } from '../../shared/qualification/test-ranges'
+import type { ProcessVariables } from '../../shared/rules/inputs'
+import type { WelderRangesResult } from '../../shared/rules/results'
 import { combinedProcess, type WelderTestInput } from '../../shared/schemas/welder-test'
 import type { CodeId, Unit } from '../../shared/rules/types'
 
@@ -19,21 +21,6 @@ export function examRecordOf(input: Pick<WelderTestInput, 'examination' | 'radio
   return null
 }
 
-/** The rules' view of a stored test. */
-export function recordOf(row: Row, bends: Pick<Bend, 'type' | 'largestIndication' | 'atCorner'>[]): TestRecord {
-  const exam = row.radiography as ExamRecord | null
-  return {
-    code: row.code as CodeId, edition: row.edition, unit: row.unit as Unit, process: row.process, transfer: row.transfer,
-    form: row.form as 'plate' | 'pipe', weld: row.weld as 'groove' | 'fillet', couponThickness: row.couponThickness,
-    depositThickness: row.depositThickness, layers: row.layers, outsideDiameter: row.outsideDiameter, pNumber: row.pNumber,
-    fNumber: row.fNumber, backing: row.backing, positions: row.positions, visualAccepted: row.visualAccepted, visualNotes: row.visualNotes,
-    examination: row.examination as TestRecord['examination'],
-    bends: bends.map(b => ({ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner })),
-    radiography: exam?.kind === 'radiography' ? { indications: exam.indications } : null,
-    macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,
-  }
-}
-
 /** A stored process of a coupon: its process, transfer, own deposit and what that deposit qualifies. */
 export interface StoredDeposit { process: string, transfer: string | null, depositThickness: number | null, fNumber?: string | null, depositMax?: number | null, error?: string }
 
@@ -43,22 +30,60 @@ export function depositsOf(row: Pick<Row, 'deposits' | 'process' | 'transfer' | 
   return list.length ? list : [{ process: row.process, transfer: row.transfer, depositThickness: row.depositThickness }]
 }
 
+const fNo = (v: string | null | undefined) => (v && /^\d+$/.test(v) ? Number(v) : undefined)
+
+/** A combination coupon's processes as the rules take them (each its own deposit and F-No.); null for a single process. */
+export function rulesProcesses(list: { process: string, transfer: string | null, depositThickness: number | null, fNumber?: string | null }[], fNumber: string | null, progression: string | null): ProcessVariables[] | null {
+  if (list.length < 2) return null
+  return list.map(p => Object.fromEntries(Object.entries({
+    process: p.process, transfer: p.transfer ?? undefined, depositThickness: p.depositThickness ?? undefined, fNumber: fNo(p.fNumber ?? fNumber),
+    progression: progression ?? undefined,
+  }).filter(([, v]) => v !== undefined)) as unknown as ProcessVariables)
+}
+
+/** The rules' variables of a stored test (a combination coupon with its processes). */
+export function variablesOf(row: Row): WelderTestVariables {
+  return {
+    code: row.code as CodeId, edition: row.edition, unit: row.unit as Unit, process: row.process, transfer: row.transfer,
+    form: row.form as 'plate' | 'pipe', weld: row.weld as 'groove' | 'fillet', couponThickness: row.couponThickness,
+    depositThickness: row.depositThickness, layers: row.layers, outsideDiameter: row.outsideDiameter, pNumber: row.pNumber,
+    fNumber: row.fNumber, backing: row.backing, positions: row.positions, progression: row.progression as 'uphill' | 'downhill' | null,
+    processes: rulesProcesses(depositsOf(row), row.fNumber, row.progression),
+  }
+}
+
+/** The rules' view of a stored test. */
+export function recordOf(row: Row, bends: Pick<Bend, 'type' | 'largestIndication' | 'atCorner'>[]): TestRecord {
+  const exam = row.radiography as ExamRecord | null
+  return {
+    ...variablesOf(row), visualAccepted: row.visualAccepted, visualNotes: row.visualNotes,
+    examination: row.examination as TestRecord['examination'],
+    bends: bends.map(b => ({ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner })),
+    radiography: exam?.kind === 'radiography' ? { indications: exam.indications } : null,
+    macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,
+  }
+}
+
 /**
  * The columns of a test from its input, with the ranges and bend verdicts the rules give. The first process is kept in
- * `process` and the whole deposit in `depositThickness` (the sum of the processes' deposits: QW-452.1(b), the combination
- * qualifies the sum); each process's own deposit and what it qualifies go in `deposits`.
+ * `process` and the whole deposit in `depositThickness` (the sum of the processes' deposits); each process, its own
+ * deposit and the deposit it qualifies (ASME IX QW-452.1(b): each process its own) go in `deposits`.
  */
 export function columnsOf(input: WelderTestInput) {
   const { bends, radiography: _r, macro: _m, processes, ...variables } = input
   const combined = combinedProcess(processes)
-  const record: TestRecord = { ...variables, ...combined, bends, radiography: input.radiography, macro: input.macro }
+  const record: TestRecord = {
+    ...variables, ...combined, processes: rulesProcesses(processes, variables.fNumber, variables.progression),
+    bends, radiography: input.radiography, macro: input.macro,
+  }
   const outcome = testOutcome(record)
   const verdicts = outcome.bend?.specimens ?? []
+  const ranges = outcome.ranges as (WelderRangesResult & { deposits?: { process: string, depositMax?: number | null }[] }) | null
   const deposits: StoredDeposit[] = processes.map((p) => {
-    const own = qualifiedRangesOf({ ...record, process: p.process, transfer: p.transfer, depositThickness: p.depositThickness, fNumber: p.fNumber ?? record.fNumber })
-    return 'error' in own
-      ? { ...p, error: String(own.error) }
-      : { ...p, depositMax: (own as unknown as { depositMax?: number | null }).depositMax ?? null }
+    if (!ranges) return { ...p, error: outcome.rangesError ?? 'the rules could not evaluate this coupon' }
+    if (processes.length === 1) return { ...p, depositMax: ranges.depositMax ?? null }
+    const own = ranges.deposits?.find(d => d.process === p.process)
+    return own && own.depositMax !== undefined ? { ...p, depositMax: own.depositMax } : { ...p, error: 'cannot tell: record this process\'s deposit thickness' }
   })
   return {
     values: {

@@ -1,5 +1,5 @@
-import { depositsOf } from '../database/welder-test-columns'
-import { qualifiedRangesOf, type WelderTestVariables } from '#shared/qualification/test-ranges'
+import { depositsOf, variablesOf } from '../database/welder-test-columns'
+import { qualifiedRangesOf } from '#shared/qualification/test-ranges'
 import type { Reason, Unit, WelderRangesResult } from '#shared/rules'
 import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { WelderTestRecord } from './records'
@@ -13,7 +13,7 @@ function rangesOf(record: WelderTestRecord): { ranges: Ranges | null, error: str
   const stored = record.test.ranges as (Ranges | { error: string } | null)
   if (stored && !('error' in stored) && Array.isArray(stored.reasons)) return { ranges: stored, error: null, recomputed: false }
   const t = record.test
-  const live = qualifiedRangesOf({ ...t, positions: [...t.positions] } as unknown as WelderTestVariables)
+  const live = qualifiedRangesOf(variablesOf(t))
   if ('error' in live) return { ranges: null, error: String(live.error), recomputed: true }
   return { ranges: live as unknown as Ranges, error: null, recomputed: true }
 }

@@ -23,7 +23,7 @@ export function setPointText(w: Window | null | undefined, unit: string): string
   if (w.min === null || w.max === null) return `${sp}${u}${w.min !== null ? `, ${w.min}${u} minimum` : w.max !== null ? `, ${w.max}${u} maximum` : ''}`
   const low = sp - w.min
   const high = w.max - sp
-  const places = Math.max(decimals(sp), decimals(w.min), decimals(w.max), 1)
+  const places = Math.max(decimals(sp), decimals(w.min), decimals(w.max))
   if (Math.abs(low - high) < 1e-9) return `${sp.toFixed(Math.max(decimals(sp), 0))}${u} ± ${low.toFixed(places)}${u}`
   return `${sp}${u} (${w.min} to ${w.max}${u})`
 }

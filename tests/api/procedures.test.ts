@@ -240,8 +240,8 @@ describe('discarding a draft', () => {
   it('a draft another record refers to stays (409), never a 500', async () => {
     const created = await send(supervisor, 'POST', '/api/procedures', await sheetDraft('KB-T41'))
     const test = await send(inspector, 'POST', '/api/tests', {
-      welderId: 1, procedureId: created.body.id, testDate: '2026-06-01', code: 'asme-ix', edition: '2023', unit: 'in', process: 'GMAW',
-      transfer: 'short-circuit', form: 'plate', weld: 'groove', couponThickness: 0.1345, positions: ['1G'], examination: 'bend',
+      welderId: 1, procedureId: created.body.id, testDate: '2026-06-01', code: 'asme-ix', edition: '2023', unit: 'in',
+      processes: [{ process: 'GMAW', transfer: 'short-circuit' }], form: 'plate', weld: 'groove', couponThickness: 0.1345, positions: ['1G'], examination: 'bend',
     })
     expect(test.status, JSON.stringify(test.body)).toBe(201)
     const res = await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, { version: 1 })
@@ -255,9 +255,9 @@ describe('a code whose support rules are not carried', () => {
     const bases = await supervisor.json<{ id: number, specification: string, grade: string }[]>('/api/catalogue/base-metals')
     const fillers = await supervisor.json<{ id: number, classification: string }[]>('/api/catalogue/filler-metals')
     const pqr = await send(supervisor, 'POST', '/api/pqrs', {
-      number: 'PQR-D11', testDate: '2026-05-04', code: 'aws-d1.1', edition: '2020', unit: 'in', process: 'SMAW', transfer: null,
-      couponThickness: 0.375, depositThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id,
-      fillerMetalId: fillers.body.find(f => f.classification === 'E7018')!.id, actuals: {},
+      number: 'PQR-D11', testDate: '2026-05-04', code: 'aws-d1.1', edition: '2020', unit: 'in',
+      couponThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id, actuals: {},
+      layers: [{ name: 'all passes', process: 'SMAW', fillerMetalId: fillers.body.find(f => f.classification === 'E7018')!.id, depositThickness: 0.375 }],
     })
     expect(pqr.status).toBe(201)
     const results = await send(inspector, 'PUT', `/api/pqrs/${pqr.body.id}/results`, {
