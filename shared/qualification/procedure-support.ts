@@ -1,5 +1,6 @@
 import { codes, evaluate, getRuleSet } from '../rules'
 import { convertLength } from '../rules/units'
+import type { ToughnessResults } from '../rules/inputs'
 import type { Basis, CodeId, Range, Unit } from '../rules/types'
 
 /** A supporting PQR as the support check needs it (lengths in the PQR's own unit). */
@@ -20,6 +21,10 @@ export interface SupportPqr {
   status: string
   /** Every tensile and bend specimen recorded and accepted. */
   resultsPass: boolean
+  /** Base metal B when the coupon joined two P-Nos. (pNumber is then base metal A). */
+  pNumberB?: string | null
+  /** Charpy results and the acceptance values entered: a toughness WPS is supported only when they are recorded and accepted. */
+  toughnessResults?: ToughnessResults | null
 }
 
 /** The WPS variables the support check reads; a half-filled form is fine. */
@@ -100,6 +105,8 @@ function pqrRecord(pqr: SupportPqr, unit: Unit) {
     id: pqr.number, process: pqr.process, transfer, couponThickness: inUnit(pqr.couponThickness, pqr.unit, unit),
     depositThickness: pqr.depositThickness === null ? undefined : inUnit(pqr.depositThickness, pqr.unit, unit),
     toughness: pqr.toughnessTested, heatInput: heat, fNumber,
+    baseMetals: pqr.pNumber ? { a: { pNumber: pqr.pNumber }, ...(pqr.pNumberB ? { b: { pNumber: pqr.pNumberB } } : {}) } : undefined,
+    toughnessResults: pqr.toughnessResults ?? undefined,
   })
 }
 
@@ -172,6 +179,7 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
           thickness: { min: isNumber(groove.min) ? groove.min : null, max: isNumber(groove.max) ? groove.max : null },
           depositMax: isNumber(wps.depositMax) ? wps.depositMax : undefined, toughness: wps.toughnessRequired ?? false,
           heatInputMax: isNumber(wps.electrical?.heatInputMax) ? wps.electrical.heatInputMax : undefined, fNumber,
+          baseMetals: baseMetalsOf(wps),
         }),
         pqrs: sameCode.map(p => pqrRecord(p, wps.unit)),
       },
@@ -188,29 +196,16 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
       findings.push({ ...r, field: fieldOf(r.clause) })
     }
   }
-  if (wps.code === 'asme-ix') findings.push(...pNumberFindings(wps, sameCode), ...unlimitedFindings(wps))
+  if (wps.code === 'asme-ix') findings.push(...unlimitedFindings(wps))
   return result(true, caution)
 }
 
-/**
- * QW-403.11 and QW-424.1 (from memory): base metals of the P-No. welded on the PQR qualify that P-No.;
- * a WPS joining P-No. A to P-No. B needs a PQR welded on A to B (or each to itself where QW-424.1 allows).
- */
-function pNumberFindings(wps: SupportWps, pqrs: SupportPqr[]): SupportFinding[] {
+/** The WPS base metals for QW-424.1 (the rules compare them with each PQR's A and B), when both are given. */
+function baseMetalsOf(wps: SupportWps) {
   const a = wps.baseMetals?.a?.pNumber?.trim()
   const b = wps.baseMetals?.b?.pNumber?.trim()
-  if (!a || !b) return []
-  const welded = [...new Set(pqrs.map(p => p.pNumber).filter((p): p is string => !!p))]
-  if (!welded.length) {
-    return [{ met: false, clause: 'QW-424.1', text: 'No supporting PQR names its base metal P-No.', basis: 'memory', field: 'baseMetals' }]
-  }
-  const ok = welded.includes(a) && welded.includes(b)
-  return [{
-    met: ok, clause: 'QW-424.1', basis: 'memory', field: 'baseMetals',
-    text: ok
-      ? `P-No. ${a} to P-No. ${b}: qualified by a PQR welded on P-No. ${welded.join(', ')}.`
-      : `P-No. ${a} to P-No. ${b} is outside what the PQRs qualify (welded on P-No. ${welded.join(', ')}).`,
-  }]
+  if (!a || !b || !/^\d{1,2}[A-Z]?$/i.test(a) || !/^\d{1,2}[A-Z]?$/i.test(b)) return undefined
+  return { a: { pNumber: a }, b: { pNumber: b } }
 }
 
 /**

@@ -27,7 +27,8 @@ export function matchSpecimens(allowed: SpecimenCountSet[], specimens: SpecimenS
   const given = countSpecimens(specimens)
   const gaps = allowed.map(set => missingFor(set, given))
   const index = gaps.findIndex(g => g.length === 0)
-  const nearest = gaps.reduce((best, g) => (g.length < best.length ? g : best), gaps[0] ?? [])
+  const size = (g: string[]) => g.reduce((n, text) => n + Number.parseInt(text, 10), 0)
+  const nearest = gaps.reduce((best, g) => (size(g) < size(best) ? g : best), gaps[0] ?? [])
   const complete = index >= 0
   reasons.push({
     clause: reasons[0]?.clause ?? 'specimens',

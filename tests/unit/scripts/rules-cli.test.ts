@@ -44,4 +44,21 @@ describe('scripts/rules.ts (npm run --silent rules)', () => {
       expect(out.stderr).toBe('')
     }
   }, 60_000)
+
+  it('the fields added for several processes and positions: answer, record and undetermined come back (ASME IX QW-405.3, QW-452.1(b), QW-424.1: see the rule tests)', () => {
+    const spray = { process: 'GMAW', transfer: 'spray', form: 'plate', weld: 'groove', testPositions: ['3G'], couponThickness: 1, progression: 'uphill' }
+    const out = run(JSON.stringify([
+      { code: 'asme-ix', check: 'covers', unit: 'in', input: { test: spray, production: { form: 'plate', weld: 'groove', positions: ['F', 'V'], process: 'GMAW', transfer: 'spray', progression: 'downhill', thickness: 1 } } },
+      { code: 'asme-ix', check: 'covers', unit: 'in', input: { test: { ...spray, progression: undefined }, production: { form: 'plate', weld: 'groove', positions: ['F', 'V'], process: 'GMAW', transfer: 'spray', progression: 'uphill', thickness: 1 } } },
+      { code: 'asme-ix', check: 'welder-ranges', unit: 'in', input: { process: 'SMAW', form: 'plate', weld: 'groove', testPositions: ['3G'] } },
+      { code: 'asme-ix', check: 'wps-support', unit: 'in', input: { wps: { thickness: { min: 0.1875, max: 2 }, baseMetals: { a: { pNumber: '1' }, b: { pNumber: '8' } }, layers: [{ process: 'SMAW' }] }, pqrs: [{ process: 'SMAW', couponThickness: 1, baseMetals: { a: { pNumber: '1' } } }, { process: 'SMAW', couponThickness: 1, baseMetals: { a: { pNumber: '8' } } }] } },
+      { code: 'asme-ix', check: 'covers', unit: 'in', input: { test: spray, production: { form: 'plate', weld: 'groove', position: 'F', progression: 'sideways' } } },
+    ]))
+    const [downhill, unrecorded, ranges, support, bad] = out.json as Record<string, unknown>[]
+    expect(downhill).toMatchObject({ covered: false, answer: 'not-covered' })
+    expect(unrecorded).toMatchObject({ covered: false, answer: 'cannot-tell', record: ['test.progression'] })
+    expect(ranges).toMatchObject({ positions: { groove: ['F', 'V'] }, undetermined: [{ field: 'depositThickness' }] })
+    expect(support).toMatchObject({ supported: false, answer: 'not-supported' })
+    expect(bad).toEqual({ error: expect.stringContaining('progression must be') })
+  }, 30_000)
 })

@@ -3,6 +3,8 @@ import { ok } from '../helpers'
 
 const support = (wps: Record<string, unknown>, pqrs: unknown[], edition?: string) =>
   ok({ code: 'asme-ix', check: 'wps-support', unit: 'in', ...(edition ? { edition } : {}), input: { wps, pqrs } })
+// A toughness-tested PQR supports a toughness WPS only with its Charpy results recorded and accepted (values invented, judged against themselves).
+const charpy = { toughnessResults: { specimens: [{ energy: 30 }, { energy: 28 }, { energy: 32 }], acceptance: { averageEnergy: 20, singleEnergy: 15 } } }
 const violations = (r: Record<string, unknown>) => (r.violations as { clause: string }[]).map(v => v.clause)
 
 describe('ASME IX WPS supported by its PQRs, variable by variable (QW-451.1 ranges from the 2017 table)', () => {
@@ -19,12 +21,12 @@ describe('ASME IX WPS supported by its PQRs, variable by variable (QW-451.1 rang
     expect(r.supported).toBe(true)
   })
   it('toughness on the WPS: minimum per QW-403.6 and a toughness-tested PQR', () => {
-    expect(violations(support({ process: 'SMAW', toughness: true, thickness: { min: 0.1875, max: 2 } }, [{ process: 'SMAW', couponThickness: 1, toughness: true }]))).toContain('QW-403.8, QW-451.1')
-    expect(support({ process: 'SMAW', toughness: true, thickness: { min: 0.625, max: 2 } }, [{ process: 'SMAW', couponThickness: 1, toughness: true }]).supported).toBe(true)
+    expect(violations(support({ process: 'SMAW', toughness: true, thickness: { min: 0.1875, max: 2 } }, [{ process: 'SMAW', couponThickness: 1, toughness: true, ...charpy }]))).toContain('QW-403.8, QW-451.1')
+    expect(support({ process: 'SMAW', toughness: true, thickness: { min: 0.625, max: 2 } }, [{ process: 'SMAW', couponThickness: 1, toughness: true, ...charpy }]).supported).toBe(true)
     expect(violations(support({ process: 'SMAW', toughness: true, thickness: { min: 0.625, max: 2 } }, [{ process: 'SMAW', couponThickness: 1 }]))).toContain('QW-403.6')
   })
   it('heat input above the PQR with toughness required is a QW-409.1 violation (12,880 J/in worked example)', () => {
-    const pqr = { process: 'GMAW', transfer: 'spray', couponThickness: 1, toughness: true, heatInput: 12880 }
+    const pqr = { process: 'GMAW', transfer: 'spray', couponThickness: 1, toughness: true, heatInput: 12880, ...charpy }
     expect(support({ process: 'GMAW', transfer: 'spray', toughness: true, heatInputMax: 12880, thickness: { min: 0.625, max: 2 } }, [pqr]).supported).toBe(true)
     expect(violations(support({ process: 'GMAW', transfer: 'spray', toughness: true, heatInputMax: 13000, thickness: { min: 0.625, max: 2 } }, [pqr]))).toContain('QW-409.1')
   })
