@@ -1,12 +1,13 @@
+import bcrypt from 'bcryptjs'
 import { and, count, eq, gt, ilike, isNull, ne, or, sql, type SQL } from 'drizzle-orm'
+import { accountLinkState, linkProblem, issueAccountLink, setPasswordUrl, shopNameOf } from '../utils/mail-links'
+import { passwordResetMail, invitationMail } from '../utils/mail-messages'
+import { sendQueuedMail, queueMail } from '../utils/mail'
 import type { Db } from './client'
-import { accountTokens, accounts, welders } from './schema'
-import { recordAudit } from '../utils/audit'
+import { accountTokens, accounts, mailMessages, welders } from './schema'
+import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
 import { containsPattern, orderOf, pageWindow } from '../utils/list'
-import { queueMail } from '../utils/mail'
-import { issueAccountLink, setPasswordUrl, shopNameOf } from '../utils/mail-links'
-import { invitationMail } from '../utils/mail-messages'
 import { conflict, fieldFailure, missing, type Outcome } from '../../shared/types/outcome'
 import type { AccountInvite, AccountPatch, accountListQuerySchema } from '../../shared/schemas/account'
 import type { z } from 'zod'
@@ -54,7 +55,7 @@ export async function findAccount(db: Db, id: number) {
 }
 
 /** The roster entry exists and no other account is linked to it; null when so. */
-async function linkProblem(db: Db, welderId: number, exceptAccountId?: number) {
+async function welderLinkProblem(db: Db, welderId: number, exceptAccountId?: number) {
   const [welder] = await db.select({ id: welders.id }).from(welders).where(eq(welders.id, welderId)).limit(1)
   if (!welder) return fieldFailure('welderId', 'No such welder on the roster')
   const [linked] = await db.select({ id: accounts.id, email: accounts.email }).from(accounts).where(eq(accounts.welderId, welderId)).limit(1)
@@ -67,7 +68,7 @@ export async function inviteAccount(db: Db, user: SessionUser, body: AccountInvi
   const email = body.email.toLowerCase()
   const [taken] = await db.select({ id: accounts.id }).from(accounts).where(eq(sql`lower(${accounts.email})`, email)).limit(1)
   if (taken) return conflict('An account with this e-mail address exists already', 'email')
-  const problem = body.welderId ? await linkProblem(db, body.welderId) : null
+  const problem = body.welderId ? await welderLinkProblem(db, body.welderId) : null
   if (problem) return problem
   const shopName = await shopNameOf(db)
   const account = await db.transaction(async (tx) => {
@@ -90,7 +91,7 @@ export async function updateAccount(db: Db, user: SessionUser, id: number, patch
   if (!before) return missing('Account')
   if (patch.welderId !== undefined) {
     if (before.role !== 'welder') return fieldFailure('welderId', 'Only a welder account links to the roster')
-    const problem = await linkProblem(db, patch.welderId, id)
+    const problem = await welderLinkProblem(db, patch.welderId, id)
     if (problem) return problem
   }
   if (patch.active === false && before.active) {
@@ -131,4 +132,45 @@ export async function reinviteAccount(db: Db, user: SessionUser, id: number, bas
     return issued
   })
   return { id, expiresAt: link.expiresAt }
+}
+
+// At most one reset e-mail per account in each ten-minute window.
+const resetWindowMinutes = 10
+
+/** E-mails a reset link if an active account has this address; nothing happens otherwise (the caller answers the same). */
+export async function requestPasswordReset(db: Db, email: string, base: string) {
+  const [account] = await db.select({ id: accounts.id, name: accounts.name, email: accounts.email }).from(accounts)
+    .where(and(eq(sql`lower(${accounts.email})`, email), eq(accounts.active, true))).limit(1)
+  if (!account) return
+  const dedupeKey = `password-reset:${account.id}:${Math.floor(Date.now() / (resetWindowMinutes * 60_000))}`
+  const [already] = await db.select({ id: mailMessages.id }).from(mailMessages).where(eq(mailMessages.dedupeKey, dedupeKey)).limit(1)
+  if (already) return
+  const shopName = await shopNameOf(db)
+  await db.transaction(async (tx) => {
+    const link = await issueAccountLink(tx, account.id, 'password-reset')
+    const queued = await queueMail(tx, passwordResetMail({ dedupeKey, to: account.email, name: account.name, link: setPasswordUrl(base, link.token), expiresAt: link.expiresAt, shopName }))
+    if (!queued) throw new Error('a reset for this account was queued a moment ago') // rolls the new link back
+    await recordAudit(tx, { accountId: null, action: 'request-password-reset', recordType: 'account', recordId: account.id })
+  })
+  await sendQueuedMail(db)
+}
+
+/** Sets the password with a one-time link; the link is claimed in the statement that checks it, so it works once. */
+export async function setPasswordWithLink(db: Db, token: string, password: string) {
+  const state = await accountLinkState(db, token)
+  if (!state.ok) return linkProblem(state.reason)
+  const passwordHash = await bcrypt.hash(password, 10)
+  const done = await db.transaction(async (tx) => {
+    const [claimed] = await tx.update(accountTokens).set({ usedAt: sql`now()` })
+      .where(and(eq(accountTokens.id, state.tokenId), isNull(accountTokens.usedAt), gt(accountTokens.expiresAt, sql`now()`)))
+      .returning({ id: accountTokens.id })
+    if (!claimed) return false
+    await tx.update(accounts).set({ passwordHash }).where(eq(accounts.id, state.account.id))
+    // Any other open link of the account stops working once a password is chosen.
+    await tx.delete(accountTokens).where(and(eq(accountTokens.accountId, state.account.id), isNull(accountTokens.usedAt), ne(accountTokens.id, claimed.id)))
+    await recordAudit(tx, { accountId: state.account.id, action: state.purpose === 'invitation' ? 'accept-invitation' : 'reset-password', recordType: 'account', recordId: state.account.id })
+    return true
+  })
+  if (!done) return linkProblem('used')
+  return { email: state.account.email }
 }

@@ -1,7 +1,7 @@
 import { and, asc, eq, ne } from 'drizzle-orm'
 import type { Db } from './client'
 import { baseMetals, fillerMetals, pqrs } from './schema'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from './audit'
 import { isUniqueViolation, settle } from '../utils/outcome'
 import { conflict, missing } from '../../shared/types/outcome'
 import type { BaseMetalInput, FillerMetalInput } from '../../shared/schemas/catalogue'

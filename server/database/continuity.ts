@@ -1,9 +1,15 @@
 import Papa from 'papaparse'
-import { eq, inArray, sql } from 'drizzle-orm'
+import { count, eq, gte, ilike, inArray, lte, or, sql } from 'drizzle-orm'
+import { standingsOf } from './standings'
+import type { SessionUser } from '../utils/auth'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import { fieldFailure, forbidden, invalid, missing, type Outcome } from '../../shared/types/outcome'
+import type { ContinuityBulkInput, ContinuityEntryInput } from '../../shared/schemas/continuity'
+import type { ContinuityListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { continuityEntries, shopSettings, welders } from './schema'
+import { accounts, continuityEntries, shopSettings, welders } from './schema'
 import { continuityImportRowSchema, importHeaders } from '../../shared/schemas/continuity'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from './audit'
 
 export interface NewEntry { welderId: number, process: string, weldedOn: string, reference: string }
 export interface RowError { line: number, field: string, message: string }
@@ -78,4 +84,69 @@ export async function checkImport(db: Db, csv: string, today: string): Promise<{
   })
   if (!rows.length && !errors.length) errors.push({ line: 1, field: 'file', message: 'The file has a header but no rows' })
   return { rows, errors: errors.sort((a, b) => a.line - b.line) }
+}
+
+/** Staff log continuity for anyone; a welder for themselves, and only when the shop allows it (403 otherwise). */
+export async function mayLogContinuity(db: Db, user: SessionUser): Promise<Outcome<true>> {
+  if (user.role === 'welder' && !await welderLogsOwnContinuity(db)) return forbidden('Your shop has continuity logged by the inspector or the quality manager')
+  return true
+}
+
+/** One entry, checked against today and the roster; answers the welder's standings after it. */
+export async function logEntry(db: Db, user: SessionUser, input: ContinuityEntryInput, today: string) {
+  if (user.role === 'welder' && input.welderId !== user.welderId) return missing('Welder')
+  if (input.weldedOn > today) return fieldFailure('weldedOn', 'The date is after today')
+  if ((await missingWelders(db, [input.welderId])).length) return fieldFailure('welderId', 'No such welder on the roster')
+  await insertEntries(db, [input], user.id, 'create')
+  const standings = (await standingsOf(db, [input.welderId], today)).get(input.welderId) ?? []
+  return { stored: 1, standings }
+}
+
+/** One process and date for many welders, all stored or none. */
+export async function logBulk(db: Db, user: SessionUser, input: ContinuityBulkInput, today: string) {
+  if (input.weldedOn > today) return fieldFailure('weldedOn', 'The date is after today')
+  const unknown = await missingWelders(db, input.welderIds)
+  if (unknown.length) return fieldFailure('welderIds', `Not on the roster: ${unknown.join(', ')}`)
+  const stored = await insertEntries(db, input.welderIds.map(welderId => ({ welderId, process: input.process, weldedOn: input.weldedOn, reference: input.reference })), user.id, 'bulk')
+  return { stored }
+}
+
+/** A CSV import: without `commit` the preview and row errors; with it every row in one transaction, or nothing when any row is wrong. */
+export async function importLog(db: Db, user: SessionUser, csv: string, commit: boolean, today: string) {
+  const { rows, errors } = await checkImport(db, csv, today)
+  const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
+  if (!commit) return { ...summary, stored: 0 }
+  if (errors.length) return invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors)
+  const stored = await insertEntries(db, rows.map(({ welderId, process, weldedOn, reference }) => ({ welderId, process, weldedOn, reference })), user.id, 'import')
+  return { ...summary, preview: [], stored }
+}
+
+const entrySortColumns = { weldedOn: continuityEntries.weldedOn, welder: welders.name, process: continuityEntries.process }
+
+/** The continuity log, paged; a welder sees only their own entries. */
+export async function listEntries(db: Db, user: SessionUser, query: ContinuityListQuery) {
+  const where = allOf([
+    user.role === 'welder' && eq(continuityEntries.welderId, user.welderId ?? -1),
+    query.welderId && eq(continuityEntries.welderId, query.welderId),
+    query.process && eq(continuityEntries.process, query.process),
+    query.from && gte(continuityEntries.weldedOn, query.from),
+    query.to && lte(continuityEntries.weldedOn, query.to),
+    query.q && or(ilike(welders.name, containsPattern(query.q)), ilike(continuityEntries.reference, containsPattern(query.q))),
+  ])
+  return pageOf(query, ({ limit, offset }) => db.select({
+    id: continuityEntries.id, weldedOn: continuityEntries.weldedOn, process: continuityEntries.process, reference: continuityEntries.reference,
+    welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp, recordedBy: accounts.name,
+  }).from(continuityEntries).innerJoin(welders, eq(welders.id, continuityEntries.welderId)).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))
+    .where(where).orderBy(orderOf(entrySortColumns[query.sort], query.dir), continuityEntries.id).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(continuityEntries).innerJoin(welders, eq(welders.id, continuityEntries.welderId)).where(where))
+}
+
+/** Removes an entry logged by mistake (kept in the audit trail). */
+export async function removeEntry(db: Db, user: SessionUser, id: number) {
+  const removed = await db.transaction(async (tx) => {
+    const [row] = await tx.delete(continuityEntries).where(eq(continuityEntries.id, id)).returning()
+    if (row) await recordAudit(tx as unknown as Db, { accountId: user.id, action: 'delete', recordType: 'continuity', recordId: id, before: row })
+    return row
+  })
+  return removed ?? missing('Entry')
 }

@@ -7,6 +7,12 @@ import { depositsOf, variablesOf } from './welder-test-columns'
 import { rangesInWords } from '../../shared/qualification/plain-words'
 import type { WelderRangesResult } from '../../shared/rules/results'
 import type { Unit } from '../../shared/rules/types'
+import { renewalOf } from '../../shared/qualification/renewal'
+import { missing } from '../../shared/types/outcome'
+import { welderLogsOwnContinuity } from './continuity'
+import { standingsOf } from './standings'
+import { recordAudit } from './audit'
+import type { SessionUser } from '../utils/auth'
 
 /** A welder's own page: every test, what each certified one covers in plain words, and the WPSs of their current processes. */
 export async function ownQualifications(db: Db, welderId: number, standings: { process: string, standing: string }[]) {
@@ -30,15 +36,18 @@ export async function ownQualifications(db: Db, welderId: number, standings: { p
   return { welder: { id: welder.id, name: welder.name, stamp: welder.stamp }, hasFeed: Boolean(welder.calendarToken), tests: described, procedures: wps }
 }
 
-/** A new secret for the welder's subscribable calendar (the old link stops working). */
-export async function rotateCalendarToken(db: Db, welderId: number) {
+/** A new secret for the welder's subscribable calendar (the old link stops working); its address. */
+export async function rotateCalendarToken(db: Db, user: SessionUser) {
   const token = randomBytes(24).toString('base64url')
-  await db.update(welders).set({ calendarToken: token }).where(eq(welders.id, welderId))
-  return token
+  await db.update(welders).set({ calendarToken: token }).where(eq(welders.id, user.welderId ?? -1))
+  await recordAudit(db, { accountId: user.id, action: 'calendar-feed', recordType: 'welder', recordId: user.welderId })
+  return { path: `/api/me/feed/${token}.ics` }
 }
 
-export async function clearCalendarToken(db: Db, welderId: number) {
-  await db.update(welders).set({ calendarToken: null }).where(eq(welders.id, welderId))
+/** Turns the subscription address off. */
+export async function clearCalendarToken(db: Db, user: SessionUser) {
+  await db.update(welders).set({ calendarToken: null }).where(eq(welders.id, user.welderId ?? -1))
+  await recordAudit(db, { accountId: user.id, action: 'calendar-feed-off', recordType: 'welder', recordId: user.welderId })
 }
 
 export async function welderByCalendarToken(db: Db, token: string) {
@@ -50,4 +59,22 @@ export async function welderByCalendarToken(db: Db, token: string) {
 export async function welderName(db: Db, welderId: number) {
   const [row] = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp }).from(welders).where(eq(welders.id, welderId)).limit(1)
   return row ?? null
+}
+
+/** The signed-in welder's page: tests, what each covers, standings with how to renew, usable WPSs. */
+export async function myQualifications(db: Db, welderId: number, today: string) {
+  const standings = (await standingsOf(db, [welderId], today)).get(welderId) ?? []
+  const own = await ownQualifications(db, welderId, standings)
+  if (!own) return missing('Roster entry')
+  return {
+    ...own, today, logsOwnContinuity: await welderLogsOwnContinuity(db),
+    standings: standings.map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),
+  }
+}
+
+/** A welder (by roster id, or by the secret of their calendar address) and where they stand, for the lapse calendar. */
+export async function calendarOf(db: Db, who: { welderId: number } | { token: string }, today: string) {
+  const welder = 'token' in who ? await welderByCalendarToken(db, who.token) : await welderName(db, who.welderId)
+  if (!welder) return missing('token' in who ? 'Calendar' : 'Roster entry')
+  return { welder, standings: (await standingsOf(db, [welder.id], today)).get(welder.id) ?? [] }
 }

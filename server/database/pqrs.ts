@@ -1,5 +1,7 @@
-import { and, asc, eq, inArray } from 'drizzle-orm'
+import { and, arrayContains, asc, count, eq, ilike, inArray, or } from 'drizzle-orm'
 import { alias } from 'drizzle-orm/pg-core'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import type { PqrListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures, welders } from './schema'
 import { grantedProjectIds } from './projects'
@@ -150,4 +152,26 @@ export async function mayReadPqr(db: Db, user: SessionUser, id: number) {
     .innerJoin(projectProcedures, eq(projectProcedures.procedureId, procedurePqrs.procedureId))
     .where(and(eq(procedurePqrs.pqrId, id), inArray(projectProcedures.projectId, granted))).limit(1)
   return hit.length > 0
+}
+
+/** The PQR list with what the support check needs of each (staff). */
+export async function listPqrs(db: Db, query: PqrListQuery) {
+  const where = allOf([
+    query.status && eq(pqrs.status, query.status),
+    query.process && or(eq(pqrs.process, query.process), arrayContains(pqrs.processes, [query.process])),
+    query.code && eq(pqrs.code, query.code),
+    query.pNumber && eq(baseMetals.pNumber, query.pNumber),
+    query.q && or(ilike(pqrs.number, containsPattern(query.q)), ilike(pqrs.labReportNumber, containsPattern(query.q))),
+  ])
+  const page = await pageOf(query, ({ limit, offset }) => db.select({
+    id: pqrs.id, number: pqrs.number, testDate: pqrs.testDate, code: pqrs.code, edition: pqrs.edition, unit: pqrs.unit, process: pqrs.process,
+    transfer: pqrs.transfer, processes: pqrs.processes, couponThickness: pqrs.couponThickness, status: pqrs.status, labReportNumber: pqrs.labReportNumber,
+    baseMetalId: pqrs.baseMetalId, baseMetal: baseMetals.specification, baseGrade: baseMetals.grade, pNumber: baseMetals.pNumber, groupNumber: baseMetals.groupNumber,
+    fillerMetalId: pqrs.fillerMetalId, fillerSpecification: fillerMetals.specification, filler: fillerMetals.classification, fNumber: fillerMetals.fNumber, aNumber: fillerMetals.aNumber,
+  }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
+    .where(where).orderBy(orderOf(pqrs[query.sort], query.dir), asc(pqrs.number)).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).where(where))
+  const support = await supportPqrs(db, page.items.map(r => r.id))
+  // One support entry per process of the coupon (a combination PQR has several)
+  return { ...page, items: page.items.map(r => ({ ...r, support: support.find(s => s.id === r.id)!, supports: support.filter(s => s.id === r.id) })) }
 }

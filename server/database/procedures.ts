@@ -1,4 +1,6 @@
-import { and, asc, desc, eq, max } from 'drizzle-orm'
+import { and, arrayContains, asc, count, desc, eq, ilike, max, or, sql } from 'drizzle-orm'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import type { ProcedureListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { accounts, procedurePqrs, procedures, readings, signatures, welders } from './schema'
 import { supportPqrs } from './pqrs'
@@ -77,4 +79,29 @@ export async function mayReadProcedure(db: Db, user: SessionUser, id: number) {
   if (user.role === 'supervisor' || user.role === 'inspector') return true
   if (user.role === 'welder') return row.status === 'approved'
   return auditorMayReadProcedure(db, user, id)
+}
+
+/** The WPS list; a welder sees approved revisions only. `current` marks the highest approved revision of a number. */
+export async function listProcedures(db: Db, user: SessionUser, query: ProcedureListQuery) {
+  const where = allOf([
+    user.role === 'welder' && eq(procedures.status, 'approved'),
+    query.status && eq(procedures.status, query.status),
+    // A WPS with a layer of the process (the process column is its first layer's)
+    query.process && or(eq(procedures.process, query.process), arrayContains(procedures.processes, [query.process])),
+    query.code && eq(procedures.code, query.code),
+    query.pNumber && or(eq(procedures.pNumberA, query.pNumber), eq(procedures.pNumberB, query.pNumber)),
+    query.thickness && sql`${procedures.thicknessMin} <= ${query.thickness} and ${procedures.thicknessMax} >= ${query.thickness}`,
+    query.q && or(ilike(procedures.number, containsPattern(query.q)), ilike(procedures.title, containsPattern(query.q))),
+  ])
+  // The outer row is named in full: drizzle prints columns of a one-table query unqualified, which inside the
+  // subquery would bind to p2.
+  const current = sql<boolean>`${procedures.status} = 'approved' and ${procedures.revision} = (
+    select max(p2.revision) from procedures p2 where p2.number = "procedures"."number" and p2.status = 'approved')`
+  return pageOf(query, ({ limit, offset }) => db.select({
+    id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, code: procedures.code,
+    edition: procedures.edition, status: procedures.status, unit: procedures.unit, process: procedures.process, processes: procedures.processes, transfer: procedures.transfer,
+    pNumberA: procedures.pNumberA, pNumberB: procedures.pNumberB, thicknessMin: procedures.thicknessMin, thicknessMax: procedures.thicknessMax,
+    positions: procedures.positions, updatedAt: procedures.updatedAt, current,
+  }).from(procedures).where(where).orderBy(orderOf(procedures[query.sort], query.dir), procedures.number, procedures.revision).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(procedures).where(where))
 }

@@ -4,7 +4,8 @@ import {
   accounts, auditorGrants, customers, packetFiles, packets, procedures, projectProcedures, projectWelders, projects, welders,
 } from './schema'
 import type { CustomerInput, ProjectInput } from '../../shared/schemas/project'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from './audit'
+import { gapsOfProject, packetPlan, sheetCount } from '../sheets/packet'
 import type { SessionUser } from '../utils/auth'
 import { conflict, fieldFailure, missing, stale } from '../../shared/types/outcome'
 
@@ -217,4 +218,32 @@ export async function auditorMayReadProcedure(db: Db, user: SessionUser, procedu
   const hit = await db.select({ id: projectProcedures.procedureId }).from(projectProcedures)
     .where(and(eq(projectProcedures.procedureId, procedureId), inArray(projectProcedures.projectId, granted))).limit(1)
   return hit.length > 0
+}
+
+/** Every project for the quality manager; an auditor only the projects granted to them. */
+export async function listProjects(db: Db, user: SessionUser) {
+  const base = db.select({
+    id: projects.id, number: projects.number, name: projects.name, startsOn: projects.startsOn, endsOn: projects.endsOn, customer: customers.name,
+  }).from(projects).innerJoin(customers, eq(customers.id, projects.customerId))
+  if (user.role === 'supervisor') return base.orderBy(asc(projects.number))
+  const granted = db.select({ id: auditorGrants.projectId }).from(auditorGrants).where(eq(auditorGrants.accountId, user.id))
+  return base.where(inArray(projects.id, granted)).orderBy(asc(projects.number))
+}
+
+/** A project's page: its WPSs, welders, auditors (the grants for the quality manager only), PQRs, tests and who was not current. */
+export async function projectPage(db: Db, user: SessionUser, id: number) {
+  if (!await mayReadProject(db, user, id)) return missing('Project')
+  const detail = await projectDetail(db, id)
+  const plan = await packetPlan(db, id)
+  if (!detail || !plan) return missing('Project')
+  return {
+    ...detail,
+    // An auditor sees who was granted only as far as themselves
+    auditors: user.role === 'supervisor' ? detail.auditors : [],
+    pqrs: plan.pqrs,
+    tests: plan.welders.map(w => ({ welderId: w.id, tests: w.tests })),
+    period: plan.period,
+    sheetCount: sheetCount(plan),
+    notCurrent: await gapsOfProject(db, plan),
+  }
 }

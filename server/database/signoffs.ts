@@ -3,7 +3,7 @@ import type { Db } from './client'
 import { accounts, pqrs, procedures, signatures, signoffRequests, welders, welderTests } from './schema'
 import type { SignoffRequestInput } from '../../shared/schemas/signoff'
 import type { SessionUser } from '../utils/auth'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from './audit'
 import { conflict, fieldFailure, forbidden, missing, type Outcome } from '../../shared/types/outcome'
 
 /** What the mail (or any other) plugin receives when a sign-off is asked: hook 'rootface:signoff-requested'. */

@@ -1,6 +1,10 @@
-import { and, asc, between, desc, eq, inArray, sql } from 'drizzle-orm'
+import { and, asc, between, desc, eq, ilike, inArray, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
-import { continuityEntries, processStandings, standingRefresh, welders, welderTests } from './schema'
+import { continuityEntries, procedures, processStandings, standingRefresh, welders, welderTests } from './schema'
+import { allOf, containsPattern } from '../utils/list'
+import { lapseWeeks } from '../../shared/qualification/lapse-weeks'
+import { renewalOf } from '../../shared/qualification/renewal'
+import type { StandingsQuery } from '../../shared/schemas/list-queries'
 import { continuityChain, standingOn, type Chain, type ProcessStanding } from '../../shared/qualification/process-standing'
 import type { CodeId } from '../../shared/rules/types'
 
@@ -98,4 +102,54 @@ export async function lapsesBetween(db: Db, from: string, to: string, today: str
   await refreshStandings(db)
   const rows = await lapseListQuery(db, from, to)
   return rows.map(r => ({ ...standingOn(chainOf(r.standing), today), welderId: r.standing.welderId, welderName: r.welderName, welderStamp: r.welderStamp }))
+}
+
+/** Each active welder × process standing today, with the welder's name and stamp, soonest lapse first. */
+async function activeRosterStandings(db: Db, today: string, q?: string) {
+  const pattern = q ? containsPattern(q) : ''
+  const roster = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp }).from(welders)
+    .where(allOf([eq(welders.status, 'active'), q ? or(ilike(welders.name, pattern), ilike(welders.stamp, pattern)) : undefined]))
+    .orderBy(asc(welders.stamp))
+  const standings = await standingsOf(db, roster.map(w => w.id), today)
+  return roster.flatMap(w => (standings.get(w.id) ?? []).map(s => ({ ...s, welderId: w.id, welderName: w.name, welderStamp: w.stamp })))
+    .sort((a, b) => a.lapsesOn.localeCompare(b.lapsesOn) || a.welderStamp.localeCompare(b.welderStamp))
+}
+
+/** The continuity board: each active welder × process, soonest lapse first (the first `limit`, with the total). */
+export async function standingsBoard(db: Db, query: StandingsQuery, today: string) {
+  const rows = (await activeRosterStandings(db, today, query.q))
+    .map(r => ({ ...r, renewal: r.standing === 'lapsed' ? renewalOf[r.code] : null }))
+    .filter(r => (!query.process || r.process === query.process) && (!query.standing || r.standing === query.standing))
+  return { today, rows: rows.slice(0, query.limit), total: rows.length }
+}
+
+// The dashboard lists stop at this many rows (a large shop sees the rest on the continuity page); the counts are whole.
+const listLimit = 200
+
+/** The staff dashboard: who lapses in the next 30/60/90 days, who has lapsed, the lapse timeline, tests awaiting certification. */
+export async function dashboard(db: Db, today: string) {
+  const [board, awaiting, [waiting]] = await Promise.all([
+    activeRosterStandings(db, today),
+    db.select({
+      id: welderTests.id, testDate: welderTests.testDate, process: welderTests.process, positions: welderTests.positions, form: welderTests.form,
+      weld: welderTests.weld, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp, procedureNumber: procedures.number,
+    }).from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
+      .where(eq(welderTests.status, 'recorded')).orderBy(asc(welderTests.testDate)).limit(100),
+    db.select({ n: sql<number>`count(*)::int` }).from(welderTests).where(eq(welderTests.status, 'recorded')),
+  ])
+  const rows = board.sort((a, b) => a.lapsesOn.localeCompare(b.lapsesOn) || a.welderName.localeCompare(b.welderName))
+  // Most recently lapsed first: the ones a renewal test can still catch up with soonest
+  const lapsed = rows.filter(r => r.daysLeft <= 0).reverse()
+  const upcoming = rows.filter(r => r.daysLeft > 0 && r.daysLeft <= 90)
+  return {
+    today,
+    lapsed: lapsed.slice(0, listLimit).map(r => ({ ...r, renewal: renewalOf[r.code] })),
+    lapsedCount: lapsed.length,
+    upcoming: upcoming.slice(0, listLimit),
+    upcomingCounts: { 30: upcoming.filter(r => r.daysLeft <= 30).length, 60: upcoming.filter(r => r.daysLeft <= 60).length, 90: upcoming.length },
+    currentCount: rows.filter(r => r.daysLeft > 30).length,
+    timeline: lapseWeeks(rows, today),
+    awaitingCertification: waiting?.n ?? 0,
+    awaiting,
+  }
 }

@@ -1,14 +1,16 @@
-import { and, asc, eq } from 'drizzle-orm'
+import { and, arrayContains, asc, count, eq, ilike, or } from 'drizzle-orm'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import type { WelderTestListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { accounts, pqrs, procedures, signatures, welders, welderTestBends, welderTests } from './schema'
 import { contentHash, currentContentFormat, newVerifyCode } from './signing'
 import { testOutcome } from '../../shared/qualification/test-outcome'
 import { columnsOf, depositsOf, examRecordOf, recordOf, type ExamRecord, type StoredDeposit } from './welder-test-columns'
 import type { WelderTestInput } from '../../shared/schemas/welder-test'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from './audit'
 import { settle } from '../utils/outcome'
 import { conflict, fieldFailure, frozen, missing, stale } from '../../shared/types/outcome'
-import { todayIso } from '../utils/standings'
+import { todayIso } from '../utils/today'
 import type { SessionUser } from '../utils/auth'
 import { auditorMayReadWelder } from './projects'
 
@@ -135,4 +137,34 @@ export async function mayReadWelderTest(db: Db, user: SessionUser, id: number) {
   if (user.role === 'supervisor' || user.role === 'inspector') return true
   if (user.role === 'welder') return user.welderId === row.welderId
   return row.status === 'certified' && auditorMayReadWelder(db, user, row.welderId)
+}
+
+const testSortColumns = { testDate: welderTests.testDate, welder: welders.name, process: welderTests.process, status: welderTests.status }
+
+/** Welder tests, paged; a welder sees only their own. */
+export async function listWelderTests(db: Db, user: SessionUser, query: WelderTestListQuery) {
+  const where = allOf([
+    user.role === 'welder' && eq(welderTests.welderId, user.welderId ?? -1),
+    query.welderId && eq(welderTests.welderId, query.welderId),
+    query.status && eq(welderTests.status, query.status),
+    // A combination coupon is listed under each of its processes
+    query.process && or(eq(welderTests.process, query.process), arrayContains(welderTests.processes, [query.process])),
+    query.q && or(ilike(welders.name, containsPattern(query.q)), ilike(welders.stamp, containsPattern(query.q))),
+  ])
+  return pageOf(query, ({ limit, offset }) => db.select({
+    id: welderTests.id, testDate: welderTests.testDate, status: welderTests.status, process: welderTests.process, processes: welderTests.processes,
+    transfer: welderTests.transfer, form: welderTests.form, weld: welderTests.weld, positions: welderTests.positions,
+    couponThickness: welderTests.couponThickness, outsideDiameter: welderTests.outsideDiameter, unit: welderTests.unit,
+    code: welderTests.code, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp,
+    procedureNumber: procedures.number, procedureRevision: procedures.revision,
+  }).from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
+    .where(where).orderBy(orderOf(testSortColumns[query.sort], query.dir), welderTests.id).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).where(where))
+}
+
+/** One test a user may read (a welder only their own); missing otherwise. */
+export async function readWelderTest(db: Db, user: SessionUser, id: number) {
+  const test = await loadWelderTest(db, id)
+  if (!test || (user.role === 'welder' && test.welderId !== user.welderId)) return missing('Test')
+  return test
 }

@@ -1,8 +1,12 @@
-import { and, desc, eq, ne, sql } from 'drizzle-orm'
+import { and, count, desc, eq, ilike, ne, or, sql } from 'drizzle-orm'
+import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
+import { standingsOf } from './standings'
+import { todayIso } from '../utils/today'
+import type { WelderListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { accounts, continuityEntries, welders, welderTests } from './schema'
 import type { WelderInput, WelderPatch } from '../../shared/schemas/welder'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
 import { auditorMayReadWelder } from './projects'
 import { isUniqueViolation, settle } from '../utils/outcome'
@@ -79,4 +83,30 @@ export async function mayReadWelder(db: Db, user: SessionUser, welderId: number,
   if (user.role === 'supervisor' || user.role === 'inspector') return true
   if (user.role === 'welder') return user.welderId === welderId
   return auditorMayReadWelder(db, user, welderId, projectId)
+}
+
+/** The roster, paged, with where each welder stands per process today. */
+export async function listWelders(db: Db, query: WelderListQuery) {
+  const pattern = query.q ? containsPattern(query.q) : ''
+  const where = allOf([
+    query.q && or(ilike(welders.name, pattern), ilike(welders.stamp, pattern), ilike(welders.employeeNumber, pattern)),
+    query.status && eq(welders.status, query.status),
+  ])
+  const page = await pageOf(query, ({ limit, offset }) => db.select({
+    id: welders.id, name: welders.name, stamp: welders.stamp, employeeNumber: welders.employeeNumber, status: welders.status,
+    email: welders.email, version: welders.version, createdAt: welders.createdAt, updatedAt: welders.updatedAt,
+  }).from(welders).where(where).orderBy(orderOf(welders[query.sort], query.dir), welders.id).limit(limit).offset(offset),
+  () => db.select({ total: count() }).from(welders).where(where))
+  const standings = await standingsOf(db, page.items.map(w => w.id), todayIso())
+  return { ...page, items: page.items.map(w => ({ ...w, standings: standings.get(w.id) ?? [] })) }
+}
+
+/** A welder's page with where they stand today; a welder reads only their own. */
+export async function welderPage(db: Db, user: SessionUser, id: number) {
+  if (user.role === 'welder' && user.welderId !== id) return missing('Welder')
+  const history = await welderHistory(db, id)
+  if (!history) return missing('Welder')
+  const today = todayIso()
+  const standings = (await standingsOf(db, [id], today)).get(id) ?? []
+  return { ...history, standings, today }
 }

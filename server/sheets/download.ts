@@ -4,7 +4,7 @@ import type { SessionUser } from '../utils/auth'
 import type { SheetModel } from './model'
 import { sheetReference } from './model'
 import { renderSheet, sendPdf, sheetFileName } from './sheets'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from '../database/audit'
 
 /** Hands out a sheet as JSON (the read-only view) or as a PDF download, which goes into the audit trail. */
 export async function respondWithSheet(event: H3Event, db: Db, user: SessionUser, sheet: SheetModel, format: 'pdf' | 'json', record: { type: string, id: number }) {

@@ -5,7 +5,7 @@ import { packetFiles, packets } from '../database/schema'
 import { appendFiles, appendicesOf } from './appendices'
 import type { SessionUser } from '../utils/auth'
 import { buildPacket, packetPlan } from './packet'
-import { recordAudit } from '../utils/audit'
+import { recordAudit } from '../database/audit'
 
 /** A build not touched for this long was interrupted (its server stopped); it is reported as failed. */
 const staleAfterMs = 10 * 60 * 1000

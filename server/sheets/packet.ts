@@ -8,7 +8,7 @@ import type { PacketDocumentInput, PacketEntry } from './packet-document'
 import { renderPacket } from './packet-render'
 import { pqrIdsOf, shopName } from './records'
 import { continuityLogSheet, pqrSheetOf, procedureSheet, projectPeriod, welderTestSheet } from './sheets'
-import { todayIso } from '../utils/standings'
+import { todayIso } from '../utils/today'
 
 export interface PacketPlan {
   project: { id: number, number: string, name: string, customer: string }

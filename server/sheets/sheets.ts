@@ -14,7 +14,7 @@ import { pqrSheet } from './pqr'
 import { loadPqr, loadProcedure, loadWelderTest, shopName } from './records'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
-import { todayIso } from '../utils/standings'
+import { todayIso } from '../utils/today'
 import { attachmentsOf } from '../database/attachments'
 import type { AttachmentRecordType } from '#shared/schemas/attachment'
 

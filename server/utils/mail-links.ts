@@ -2,6 +2,7 @@ import { createHash, randomBytes } from 'node:crypto'
 import type { H3Event } from 'h3'
 import { and, eq, isNull } from 'drizzle-orm'
 import type { Db } from '../database/client'
+import { gone, missing } from '../../shared/types/outcome'
 import { accountTokens, accounts, shopSettings } from '../database/schema'
 
 // One-time links for invitations and password resets. The link carries 32 random bytes; the database keeps only
@@ -73,7 +74,7 @@ export async function shopNameOf(db: Db) {
   return row?.name || useRuntimeConfig().public.shopName
 }
 
-/** 404 for a link that never existed, 410 for one used or expired. */
+/** Missing (404) for a link that never existed, gone (410) for one used or expired. */
 export function linkProblem(reason: 'unknown' | 'used' | 'expired') {
-  return createError({ statusCode: reason === 'unknown' ? 404 : 410, statusMessage: reason === 'unknown' ? 'Link not valid' : `Link ${reason}`, message: linkProblemWords[reason], data: { reason } })
+  return reason === 'unknown' ? missing('Link', linkProblemWords[reason]) : gone(linkProblemWords[reason], `Link ${reason}`)
 }

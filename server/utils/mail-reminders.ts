@@ -2,6 +2,7 @@ import { and, eq } from 'drizzle-orm'
 import type { Db } from '../database/client'
 import { accounts, welders } from '../database/schema'
 import { digestWindowDays, isoWeekOf, reminderStepFor } from '#shared/mail/reminder-steps'
+import { standingsOf } from '../database/standings'
 import { queueMail } from './mail'
 import { lapseReminderMail, weeklyDigestMail, type DigestRow } from './mail-messages'
 
@@ -25,7 +26,7 @@ export async function queueReminders(db: Db, today: string, base: string, shopNa
     .where(eq(welders.status, 'active')).orderBy(welders.stamp)
   const byId = new Map<number, (typeof roster)[number]>()
   for (const w of roster) if (!byId.has(w.id)) byId.set(w.id, w)
-  const standings = await standingsOfWelders(db, [...byId.keys()], today)
+  const standings = await standingsOf(db, [...byId.keys()], today)
 
   const run: ReminderRun = { today, week: isoWeekOf(today), remindersQueued: 0, digestsQueued: 0, withoutAddress: [] }
   const digest: DigestRow[] = []

@@ -5,7 +5,7 @@ import { isFailure, type Failure, type Outcome } from '../../shared/types/outcom
 export function httpError(failure: Failure): H3Error {
   switch (failure.fail) {
     case 'missing':
-      return createError({ statusCode: 404, statusMessage: `${failure.what} not found` })
+      return createError({ statusCode: 404, statusMessage: `${failure.what} not found`, ...(failure.message ? { message: failure.message } : {}) })
     case 'forbidden':
       return createError({ statusCode: 403, statusMessage: failure.message })
     case 'field': {
@@ -27,7 +27,7 @@ export function httpError(failure: Failure): H3Error {
         ...(failure.path ? { data: { formErrors: [], fieldErrors: { [failure.path]: [failure.message] } } } : {}),
       })
     case 'gone':
-      return createError({ statusCode: 410, statusMessage: 'File missing', message: failure.message })
+      return createError({ statusCode: 410, statusMessage: failure.title ?? 'File missing', message: failure.message })
     case 'refused':
       return createError({ statusCode: 422, statusMessage: failure.title, message: failure.message, ...(failure.detail ? { data: failure.detail } : {}) })
     default:

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { codeIds } from '../vocabulary/records'
 
 /** Small field builders shared by the record schemas: form inputs give '' for an empty box, the API gives null. */
 
@@ -64,7 +65,7 @@ export function windowOf(what: string) {
 export const idSchema = z.number({ invalid_type_error: 'must be a record id' }).int('must be a record id').positive('must be a record id').max(2_147_483_647)
 export const versionSchema = z.number({ required_error: 'Send the version you edited', invalid_type_error: 'version must be a whole number' })
   .int('version must be a whole number').positive('version must be a whole number')
-export const codeIdSchema = z.enum(['asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1'], { errorMap: () => ({ message: 'Pick a code' }) })
+export const codeIdSchema = z.enum(codeIds, { errorMap: () => ({ message: 'Pick a code' }) })
 export const unitIdSchema = z.enum(['in', 'mm'], { errorMap: () => ({ message: 'Pick in or mm' }) })
 export const transferIdSchema = z.enum(['short-circuit', 'globular', 'spray', 'pulse'], { errorMap: () => ({ message: 'Pick a transfer mode' }) })
 export const editionSchema = z.string({ required_error: 'Enter the edition' }).trim().regex(/^\d{4}$/, 'Enter the edition year, e.g. 2023')

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { processIds } from '../vocabulary/records'
 
 /** Paging, sorting and a free-text filter, shared by every list route and its table. */
 export function listQuerySchema<const S extends readonly [string, ...string[]]>(sortable: S) {
@@ -19,4 +20,4 @@ export interface Page<T> {
 }
 
 export const idParamSchema = z.object({ id: z.coerce.number().int().positive().max(2_147_483_647) })
-export const processSchema = z.enum(['SMAW', 'GTAW', 'GMAW', 'FCAW', 'SAW', 'PAW', 'OFW', 'ESW', 'EGW', 'LLBW'])
+export const processSchema = z.enum(processIds)

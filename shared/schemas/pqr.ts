@@ -7,7 +7,7 @@ import {
 
 /** A PQR: the coupon as welded (supervisor) and its test results (inspector). Lengths in the record's unit. */
 
-export const pqrStatuses = ['recorded', 'certified', 'failed'] as const
+export { pqrStatuses } from '../vocabulary/records'
 export const breakLocations = ['base metal', 'weld metal', 'heat-affected zone', 'fusion line'] as const
 export const pqrBendTypes = ['face', 'root', 'side', 'longitudinal-face', 'longitudinal-root'] as const
 

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import type { procedureStatuses } from '../vocabulary/records'
 import { processSchema } from './list'
 import {
   codeIdSchema, editionSchema, idSchema, optionalNumber, optionalText, rangeOf, requiredText, transferIdSchema, unitIdSchema,
@@ -13,7 +14,7 @@ import {
 export const positionLetters = ['F', 'H', 'V', 'O'] as const
 export const positionNames: Record<typeof positionLetters[number], string> = { F: 'flat', H: 'horizontal', V: 'vertical', O: 'overhead' }
 export const currentTypes = ['DCEP', 'DCEN', 'AC'] as const
-export const procedureStatuses = ['draft', 'approved', 'superseded'] as const
+export { procedureStatuses } from '../vocabulary/records'
 export type ProcedureStatus = typeof procedureStatuses[number]
 
 const baseMetalSide = (side: string) => z.object({

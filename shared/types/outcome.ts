@@ -15,26 +15,26 @@
  *   `detail` carries what the screen lists (blockers, violations)
  */
 export type Failure
-  = | { fail: 'missing', what: string }
+  = | { fail: 'missing', what: string, message?: string }
     | { fail: 'forbidden', message: string }
     | { fail: 'stale', message: string }
     | { fail: 'frozen', message: string }
     | { fail: 'conflict', message: string, path?: string }
     | { fail: 'field', path: string, message: string, status?: 413 | 415 }
     | { fail: 'invalid', where: string, message: string, formErrors: string[], fieldErrors: Record<string, string[]>, rowErrors?: unknown[] }
-    | { fail: 'gone', message: string }
+    | { fail: 'gone', message: string, title?: string }
     | { fail: 'refused', title: string, message: string, detail?: Record<string, unknown> }
 
 /** A value, or the reason there is none. Values never carry a `fail` key. */
 export type Outcome<T> = T | Failure
 
-export const missing = (what: string): Failure => ({ fail: 'missing', what })
+export const missing = (what: string, message?: string): Failure => ({ fail: 'missing', what, ...(message ? { message } : {}) })
 export const forbidden = (message: string): Failure => ({ fail: 'forbidden', message })
 export const stale = (message: string): Failure => ({ fail: 'stale', message })
 export const frozen = (message: string): Failure => ({ fail: 'frozen', message })
 export const conflict = (message: string, path?: string): Failure => ({ fail: 'conflict', message, ...(path ? { path } : {}) })
 export const fieldFailure = (path: string, message: string, status?: 413 | 415): Failure => ({ fail: 'field', path, message, ...(status ? { status } : {}) })
-export const gone = (message: string): Failure => ({ fail: 'gone', message })
+export const gone = (message: string, title?: string): Failure => ({ fail: 'gone', message, ...(title ? { title } : {}) })
 export const refused = (title: string, message: string, detail?: Record<string, unknown>): Failure => ({ fail: 'refused', title, message, ...(detail ? { detail } : {}) })
 
 /** Many field messages at once (a failed schema, a rejected import). */

@@ -1,4 +1,5 @@
 import { format } from 'date-fns'
+import { recordAudit } from '../../database/audit'
 
 /** GET /api/admin/backup: a restorable archive of the embedded database, taken while it runs (supervisor) */
 export default defineEventHandler(async (event) => {

@@ -1,4 +1,4 @@
-import { checkImport, insertEntries } from '../../database/continuity'
+import { importLog } from '../../database/continuity'
 import { continuityImportSchema } from '#shared/schemas/continuity'
 
 /**
@@ -8,13 +8,5 @@ import { continuityImportSchema } from '#shared/schemas/continuity'
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, staff)
   const { csv, commit } = await validBody(event, continuityImportSchema)
-  const db = await useDb()
-  const { rows, errors } = await checkImport(db, csv, todayIso())
-  const summary = { total: rows.length, errors, preview: rows.slice(0, 200), welders: new Set(rows.map(r => r.welderId)).size }
-  if (!commit) return { ...summary, stored: 0 }
-  if (errors.length) {
-    throw httpError(invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors))
-  }
-  const stored = await insertEntries(db, rows.map(({ welderId, process, weldedOn, reference }) => ({ welderId, process, weldedOn, reference })), user.id, 'import')
-  return { ...summary, preview: [], stored }
+  return orThrow(await importLog(await useDb(), user, csv, commit, todayIso()))
 })

@@ -1,8 +1,8 @@
-import { sql } from 'drizzle-orm'
+import { ping } from '../../database/admin'
 
 /** GET /api/health: public; answers once the database is open and migrated */
 export default defineEventHandler(async () => {
   const { db, driver } = await useDatabase()
-  await db.execute(sql`select 1`)
+  await ping(db)
   return { ok: true, driver }
 })

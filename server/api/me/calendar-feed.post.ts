@@ -7,8 +7,5 @@ const bodySchema = z.object({ rotate: z.literal(true, { errorMap: () => ({ messa
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['welder'])
   await validBody(event, bodySchema)
-  const db = await useDb()
-  const token = await rotateCalendarToken(db, user.welderId ?? -1)
-  await recordAudit(db, { accountId: user.id, action: 'calendar-feed', recordType: 'welder', recordId: user.welderId })
-  return { path: `/api/me/feed/${token}.ics` }
+  return rotateCalendarToken(await useDb(), user)
 })

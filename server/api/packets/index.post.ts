@@ -1,6 +1,5 @@
 import { z } from 'zod'
-import { mayReadProject } from '../../database/projects'
-import { startPacket } from '../../sheets/packet-job'
+import { requestPacket } from '../../database/packets'
 import { publicOrigin } from '../../sheets/sheets'
 
 const bodySchema = z.object({ projectId: z.number({ required_error: 'projectId is required', invalid_type_error: 'projectId must be a number' }).int().positive().max(2_147_483_647) }).strict()
@@ -9,9 +8,7 @@ const bodySchema = z.object({ projectId: z.number({ required_error: 'projectId i
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'auditor'])
   const { projectId } = await validBody(event, bodySchema)
-  const db = await useDb()
-  if (!await mayReadProject(db, user, projectId)) throw httpError(missing('Project'))
-  const packet = await startPacket(db, projectId, user, publicOrigin(event))
+  const packet = orThrow(await requestPacket(await useDb(), user, projectId, publicOrigin(event)))
   setResponseStatus(event, 202)
-  return { id: packet.id, projectId, status: packet.status, progress: packet.progress }
+  return packet
 })

@@ -4,6 +4,6 @@ import { linkQuerySchema } from '#shared/schemas/password'
 export default defineEventHandler(async (event) => {
   const { token } = await validQuery(event, linkQuerySchema)
   const state = await accountLinkState(await useDb(), token)
-  if (!state.ok) throw linkProblem(state.reason)
+  if (!state.ok) throw httpError(linkProblem(state.reason))
   return { purpose: state.purpose, email: state.account.email, name: state.account.name }
 })

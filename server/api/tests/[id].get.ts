@@ -1,11 +1,9 @@
-import { loadWelderTest } from '../../database/welder-tests'
+import { readWelderTest } from '../../database/welder-tests'
 import { idParamSchema } from '#shared/schemas/list'
 
 /** GET /api/tests/:id: one test with its verdicts, ranges and signatures; a welder may read only their own (404 otherwise) */
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor', 'inspector', 'welder'])
   const { id } = await validParams(event, idParamSchema)
-  const test = await loadWelderTest(await useDb(), id)
-  if (!test || (user.role === 'welder' && test.welderId !== user.welderId)) throw httpError(missing('Test'))
-  return test
+  return orThrow(await readWelderTest(await useDb(), user, id))
 })

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { welderByCalendarToken } from '../../../database/me'
+import { calendarOf } from '../../../database/me'
 
 const paramsSchema = z.object({ token: z.string().regex(/^[\w-]{20,64}(\.ics)?$/, 'Not a calendar address') })
 
@@ -9,10 +9,7 @@ const paramsSchema = z.object({ token: z.string().regex(/^[\w-]{20,64}(\.ics)?$/
  */
 export default defineEventHandler(async (event) => {
   const { token } = await validParams(event, paramsSchema)
-  const db = await useDb()
-  const welder = await welderByCalendarToken(db, token.replace(/\.ics$/, ''))
-  if (!welder) throw httpError(missing('Calendar'))
-  const standings = (await standingsOfWelders(db, [welder.id])).get(welder.id) ?? []
+  const { welder, standings } = orThrow(await calendarOf(await useDb(), { token: token.replace(/\.ics$/, '') }, todayIso()))
   setResponseHeaders(event, { 'content-type': 'text/calendar; charset=utf-8', 'cache-control': 'private, max-age=3600' })
   return lapseCalendar(welder, standings)
 })
