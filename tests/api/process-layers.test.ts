@@ -16,7 +16,7 @@ const none = { min: null, max: null, setPoint: null }
 const win = (setPoint: number, trim: number) => ({ min: setPoint - trim, max: setPoint + trim, setPoint })
 let ids: { bases: Record<string, number>, fillers: Record<string, number>, welder: number } = { bases: {}, fillers: {}, welder: 0 }
 
-const layer = (over: Record<string, unknown>) => ({
+const layer = (over: Record<string, unknown>): Record<string, unknown> => ({
   name: 'all passes', passes: null, process: 'SMAW', transfer: null, fillers: [], fillerAdded: null, depositMax: null, current: 'DCEP',
   amps: none, volts: none, wireFeed: none, travelSpeed: none, heatInputMax: null, ctwd: none, gas: { composition: null, flow: none },
   bead: 'stringer', pulsing: false, oscillation: null, electrodes: 'single', passesPerSide: null, backGouging: false,

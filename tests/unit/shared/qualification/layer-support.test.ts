@@ -5,7 +5,7 @@ import type { SupportPqr } from '../../../../shared/qualification/procedure-supp
 import { blankLayer, blankProcedureDraft, type ProcedureDraft, type ProcedureLayer } from '../../../../shared/schemas/procedure'
 
 // A combination coupon, invented: T = 1/2 in, GTAW root t = 1/8 in, SMAW fill and cap t = 3/8 in, P-No. 1 to P-No. 8.
-const coupon = (process: string, deposit: number, fNumber: string, over: Partial<SupportPqr> = {}): SupportPqr & { pNumberB: string } => ({
+const coupon = (process: string, deposit: number, fNumber: string | null, over: Partial<SupportPqr> = {}): SupportPqr => ({
   id: 1, number: `PQR-C (${process})`, code: 'asme-ix', edition: '2023', unit: 'in', process, transfer: null,
   couponThickness: 0.5, depositThickness: deposit, toughnessTested: false, heatInput: null, fNumber, pNumber: '1', pNumberB: '8',
   status: 'certified', resultsPass: true, ...over,
