@@ -22,7 +22,8 @@ export async function coverageCandidates(db: Db, process: string): Promise<{ pro
   const tests = await db.execute(sql`
     select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, ${process}::text as process,
            case when d.e is null then t.transfer else d.e->>'transfer' end as transfer, t.form, t.weld, t.coupon_thickness,
-           case when d.e is null then t.deposit_thickness else (d.e->>'depositThickness')::float8 end as deposit_thickness, t.layers, t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions,
+           case when d.e is null then t.deposit_thickness else (d.e->>'depositThickness')::float8 end as deposit_thickness, t.layers,
+           t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions, t.progression,
            w.name, w.stamp, s.code as chain_code, s.edition as chain_edition, s.test_date::text as chain_test_date,
            s.last_use::text as chain_last_use, s.lapses_on::text as chain_lapses_on, s.rule as chain_rule
     from welder_tests t

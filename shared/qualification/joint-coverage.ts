@@ -1,12 +1,12 @@
 import { evaluate, getRuleSet, RuleRefusal } from '../rules'
 import type { ProductionWeld, WelderTestInput } from '../rules/inputs'
-import type { CoverReason } from '../rules/results'
+import type { CoverAnswer, CoverReason } from '../rules/results'
 import type { CodeId, Unit } from '../rules/types'
 import { convertLength } from '../rules/units'
 import { standingOn, type Chain } from './process-standing'
 import { procedureCovers } from './wps-coverage'
 import { welderRangesInput } from './test-ranges'
-import type { Joint } from '../schemas/coverage'
+import { jointPositions, type Joint } from '../schemas/coverage'
 
 /** Rows of the coverage query (snake_case, as the database returns them). */
 export interface ProcedureRow {
@@ -45,6 +45,8 @@ export interface TestRow {
   f_number: string | null
   backing: boolean
   positions: string[]
+  /** Vertical progression as recorded (null on records made before it was captured: "not recorded"). */
+  progression?: string | null
 }
 /** A welder with their certified tests of the process and their continuity chain for it (kept per welder and process by the server). */
 export interface CandidateRow { id: number, name: string, stamp: string, tests: TestRow[], chain: Chain }
@@ -66,17 +68,22 @@ export function judgeProcedures(rows: ProcedureRow[], joint: ResolvedJoint) {
     const verdict = procedureCovers({
       code: p.code as CodeId, unit: p.unit as Unit, process: p.process, transfer: p.transfer, pNumberA: p.p_number_a, pNumberB: p.p_number_b,
       thicknessMin: p.thickness_min, thicknessMax: p.thickness_max, diameterMin: p.diameter_min, positions: p.positions, fNumbers: p.f_numbers,
-    }, joint)
+    }, { ...joint, positions: jointPositions(joint) })
     return { id: p.id, number: p.number, revision: p.revision, title: p.title, code: p.code, edition: p.edition, ...verdict }
   })
 }
 
+const tungsten = (process: string) => process === 'GTAW' || process === 'PAW'
+
 function productionIn(joint: ResolvedJoint, unit: Unit) {
   const len = (v: number | undefined) => (v === undefined ? undefined : convertLength(v, joint.unit, unit))
+  const gtaw = tungsten(joint.process)
   return Object.fromEntries(Object.entries({
-    form: joint.form, weld: joint.weld, position: joint.position, process: joint.process, transfer: joint.transfer,
+    code: joint.code, form: joint.form, weld: joint.weld, positions: jointPositions(joint), process: joint.process, transfer: joint.transfer,
     thickness: len(joint.thickness), outsideDiameter: len(joint.outsideDiameter), pNumber: joint.pNumber,
-    fNumber: joint.fNumber, backing: joint.fNumber !== undefined || joint.backing === false ? joint.backing : undefined,
+    fNumber: joint.fNumber, backing: joint.backing, progression: joint.progression,
+    fillerAdded: gtaw ? joint.fillerAdded : undefined, consumableInsert: gtaw ? joint.consumableInsert : undefined, fillerForm: gtaw ? joint.fillerForm : undefined,
+    backingGas: joint.backingGas, current: gtaw ? joint.current : undefined,
   }).filter(([, v]) => v !== undefined))
 }
 
@@ -84,6 +91,7 @@ const variablesOf = (t: TestRow) => ({
   code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit, process: t.process, transfer: t.transfer, form: t.form as 'plate' | 'pipe',
   weld: t.weld as 'groove' | 'fillet', couponThickness: t.coupon_thickness, depositThickness: t.deposit_thickness, layers: t.layers,
   outsideDiameter: t.outside_diameter, pNumber: t.p_number, fNumber: t.f_number, backing: t.backing, positions: t.positions,
+  progression: t.progression,
 })
 
 /**
@@ -94,20 +102,21 @@ const variablesOf = (t: TestRow) => ({
 export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: string) {
   const productions = new Map<Unit, ProductionWeld>()
   const productionOf = (unit: Unit) => productions.get(unit) ?? productions.set(unit, productionIn(joint, unit) as unknown as ProductionWeld).get(unit)!
-  const verdicts = new Map<string, { covered: boolean, reasons: CoverReason[] }>()
-  const judge = (t: TestRow) => {
+  type Verdict = { covered: boolean, answer: CoverAnswer, record: string[], reasons: CoverReason[] }
+  const verdicts = new Map<string, Verdict>()
+  const judge = (t: TestRow): Verdict => {
     const test = welderRangesInput(variablesOf(t)) as unknown as WelderTestInput
     const key = `${t.code}|${t.edition}|${t.unit}|${JSON.stringify(test)}`
     const known = verdicts.get(key)
     if (known) return known
-    let verdict: { covered: boolean, reasons: CoverReason[] }
+    let verdict: Verdict
     try {
       // Stored tests passed the same schemas when they were saved, so the rule is called without re-parsing them.
       verdict = getRuleSet(t.code as CodeId).covers({ test, production: productionOf(t.unit as Unit) }, { code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit })
     }
     catch (error) {
       if (!(error instanceof RuleRefusal)) throw error
-      verdict = { covered: false, reasons: [{ met: false, clause: 'rules', text: `Cannot judge this test: ${error.message}`, basis: 'convention' }] }
+      verdict = { covered: false, answer: 'cannot-tell', record: [], reasons: [{ met: false, state: 'not-recorded', clause: 'rules', text: `Cannot judge this test: ${error.message}`, basis: 'convention' }] }
     }
     verdicts.set(key, verdict)
     return verdict
@@ -116,7 +125,12 @@ export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: 
     const standing = standingOn(w.chain, today)
     const judged = w.tests.map(t => ({ id: t.id, ...judge(t) }))
     const covering = judged.find(j => j.covered)
-    const shown = covering ?? judged[0]!
-    return { id: w.id, name: w.name, stamp: w.stamp, covered: Boolean(covering), current: standing.standing !== 'lapsed', standing, reasons: shown.reasons, testIds: covering ? [covering.id] : judged.map(j => j.id) }
+    const telling = judged.find(j => j.answer === 'cannot-tell')
+    const shown = covering ?? telling ?? judged[0]!
+    const answer: CoverAnswer = covering ? 'covered' : telling ? 'cannot-tell' : 'not-covered'
+    // reasons: the variables compared; notStated: those the joint does not state (not compared, shown apart).
+    const reasons = shown.reasons.filter(r => r.state !== 'not-stated')
+    const notStated = shown.reasons.filter(r => r.state === 'not-stated')
+    return { id: w.id, name: w.name, stamp: w.stamp, covered: Boolean(covering), answer, record: shown.record, current: standing.standing !== 'lapsed', standing, reasons, notStated, testIds: covering ? [covering.id] : judged.map(j => j.id) }
   })
 }

@@ -20,7 +20,8 @@ export interface WelderTestVariables {
   positions: string[]
   /** Combination coupon: each process with its own deposit (the single-process fields are then ignored). */
   processes?: ProcessVariables[] | null
-  progression?: 'uphill' | 'downhill' | null
+  /** Stored as text: only "uphill" or "downhill" is passed to the rules. */
+  progression?: string | null
   fillerAdded?: boolean | null
   consumableInsert?: boolean | null
   fillerForm?: 'solid' | 'metal-cored' | 'flux-cored' | 'powder' | null
@@ -41,7 +42,7 @@ export function welderRangesInput(test: WelderTestVariables) {
     ...coupon, process: test.process, transfer: test.transfer, depositThickness: test.depositThickness, layers: test.layers,
     // Stored as text ("4"); the rules take the F-Number as a number.
     fNumber: test.fNumber === null || test.fNumber === undefined || test.fNumber === '' ? undefined : Number(test.fNumber),
-    progression: test.progression, fillerAdded: test.fillerAdded, consumableInsert: test.consumableInsert, fillerForm: test.fillerForm,
+    progression: test.progression === 'uphill' || test.progression === 'downhill' ? test.progression : undefined, fillerAdded: test.fillerAdded, consumableInsert: test.consumableInsert, fillerForm: test.fillerForm,
     backingGas: test.backingGas, current: test.current,
   })
 }

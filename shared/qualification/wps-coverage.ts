@@ -25,8 +25,12 @@ export interface JointToWeld {
   form: 'plate' | 'pipe'
   outsideDiameter?: number
   weld: 'groove' | 'fillet'
-  position: string
+  /** One position, or `positions` for a joint welded in several (each must be listed on the WPS). */
+  position?: string
+  positions?: string[]
   fNumber?: number
+  /** The code the joint is welded to: a WPS of another code does not cover it. */
+  code?: CodeId
 }
 
 const asmeClauses = { process: 'QW-401', transfer: 'QW-409.2', pNumber: 'QW-403.11, QW-424', thickness: 'QW-403.8, QW-451.1', fillet: 'QW-202.2(c)', position: 'QW-405.1', fNumber: 'QW-404.4', diameter: 'WPS stated range' }
@@ -48,6 +52,7 @@ export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { cov
   const add = (met: boolean, clause: string, text: string) => reasons.push({ met, clause, text, basis: 'convention' })
   const inUnit = (v: number) => convertLength(v, joint.unit, u)
 
+  if (joint.code !== undefined) add(wps.code === joint.code, 'code', wps.code === joint.code ? `The WPS is written to ${wps.code}, the joint's code.` : `The WPS is written to ${wps.code}; the joint is welded to ${joint.code}.`)
   add(wps.process === joint.process, c.process, `Process ${wps.process}${wps.process === joint.process ? '' : `, not ${joint.process}`}.`)
   if (joint.transfer && wps.transfer) {
     const sameFamily = (wps.transfer === 'short-circuit') === (joint.transfer === 'short-circuit')
@@ -73,8 +78,9 @@ export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { cov
     const od = inUnit(joint.outsideDiameter)
     add(toMicro(od) >= toMicro(wps.diameterMin), c.diameter, `Pipe OD ${od} ${u}: the WPS states ${wps.diameterMin} ${u} and over.`)
   }
-  const position = joint.position.toUpperCase()
-  add(wps.positions.includes(position), c.position, `Position ${position}: the WPS lists ${wps.positions.join(', ') || 'none'}.`)
+  const positions = [...new Set([...(joint.positions ?? []), ...(joint.position ? [joint.position] : [])].map(p => p.toUpperCase()))]
+  const missing = positions.filter(p => !wps.positions.includes(p))
+  add(positions.length > 0 && missing.length === 0, c.position, `Position ${positions.join(', ') || 'not given'}: the WPS lists ${wps.positions.join(', ') || 'none'}.`)
   if (joint.fNumber !== undefined) {
     add(wps.fNumbers.includes(String(joint.fNumber)), c.fNumber, `F-No. ${joint.fNumber}: the WPS lists F-No. ${wps.fNumbers.join(', ') || 'none'}.`)
   }

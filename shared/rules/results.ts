@@ -89,7 +89,7 @@ export interface QualifiedVariable extends Reason {
  * The state of one variable compared: met; not met; not recorded (one side states it, the other did
  * not record it: "cannot tell: record X"); not checked (Rootface does not compare it: check by hand);
  * not stated (the production weld leaves out a field it has always been allowed to leave out —
- * process, thickness, P-No., F-No., backing —: not compared, and the text says what the test qualifies).
+ * process, thickness, P-No., F-No., backing, vertical progression —: not compared, and the text says what the test qualifies).
  */
 export type VariableState = 'met' | 'not-met' | 'not-recorded' | 'not-checked' | 'not-stated'
 

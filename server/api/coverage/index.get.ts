@@ -4,7 +4,7 @@ import { judgeProcedures, judgeWelders, resolveJoint } from '#shared/qualificati
 import { jointSchema } from '#shared/schemas/coverage'
 
 /**
- * GET /api/coverage?process=…&position=…: who can weld this joint today: the approved WPSs that cover it and the
+ * GET /api/coverage?process=…&positions=F,V,O (or position=…)&code=…: who can weld this joint today: the approved WPSs that cover it and the
  * active welders whose certified tests cover it and who are current, each with the findings behind the answer.
  */
 export default defineEventHandler(async (event) => {
@@ -23,7 +23,8 @@ export default defineEventHandler(async (event) => {
   const timing = { queryMs: Math.round((queried - started) * 10) / 10, rulesMs: Math.round((judged - queried) * 10) / 10, candidates: rows.welders.length }
   setResponseHeader(event, 'server-timing', `db;dur=${timing.queryMs}, rules;dur=${timing.rulesMs}`)
   const lapsed = welders.filter(w => w.covered && !w.current)
-  const notCovered = welders.filter(w => !w.covered)
+  const notCovered = welders.filter(w => w.answer === 'not-covered')
+  const undecided = welders.filter(w => w.answer === 'cannot-tell')
   return {
     today, joint, timing,
     procedures: procedures.sort((a, b) => Number(b.covered) - Number(a.covered)),
@@ -34,8 +35,11 @@ export default defineEventHandler(async (event) => {
       lapsed: lapsed.slice(0, 100).map(({ id, name, stamp, standing }) => ({ id, name, stamp, standing })),
       lapsedCount: lapsed.length,
       // Tested in the process but no test covers the joint: the findings that are not met
-      notCovered: notCovered.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => !r.met) })),
+      notCovered: notCovered.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => r.state === 'not-met' || (r.state === undefined && !r.met)) })),
       notCoveredCount: notCovered.length,
+      // A variable the joint states was not recorded on their tests (or the reverse): cannot tell until it is recorded
+      undecided: undecided.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => !r.met) })),
+      undecidedCount: undecided.length,
     },
   }
 })

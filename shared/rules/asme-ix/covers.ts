@@ -138,7 +138,7 @@ function layerFindings(pair: { t: ProcessVariables, p: ProcessVariables, ti: num
   }
   if (listsVariable(process, 'progression') && weldsVertical(letters)) {
     push(fix(categorical({
-      variable: 'progression', clause: 'QW-405.3', basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression,
+      variable: 'progression', clause: 'QW-405.3', basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression, unstated: 'not-stated',
       qualifies: (a, b) => a === b, show: v => `${v} vertical`,
     })))
   }

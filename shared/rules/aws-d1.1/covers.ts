@@ -68,7 +68,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
     }
     if (weldsVertical(letters)) {
       push(fix(categorical({
-        variable: 'progression', clause: tables.essentials, basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression,
+        variable: 'progression', clause: tables.essentials, basis: 'memory', field: 'progression', process, test: t.progression, production: p.progression, unstated: 'not-stated',
         qualifies: (a, b) => a === b, show: v => `${v} vertical`,
       })))
     }

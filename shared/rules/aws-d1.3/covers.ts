@@ -61,7 +61,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   }
   push(categorical({ variable: 'coating', clause: 'D1.3 4.7 (coating)', basis: 'partial', field: 'coating', test: test.coating, production: production.coating, qualifies: (a, b) => norm(a) === norm(b), show: v => (norm(v) === 'none' ? 'uncoated' : `${v} coated`) }))
   if (weldsVertical(letters)) {
-    push(categorical({ variable: 'progression', clause: 'D1.3 4.7 (vertical progression)', basis: 'verified', field: 'progression', test: t.progression, production: p.progression, qualifies: (a, b) => a === b, show: v => `${v} vertical` }))
+    push(categorical({ variable: 'progression', clause: 'D1.3 4.7 (vertical progression)', basis: 'verified', field: 'progression', test: t.progression, production: p.progression, unstated: 'not-stated', qualifies: (a, b) => a === b, show: v => `${v} vertical` }))
   }
   return reasons
 }
