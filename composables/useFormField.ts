@@ -10,3 +10,15 @@ export function useFormField<T>(name: () => string) {
   const describedBy = computed(() => (errorMessage.value ? `${id.value}-error` : undefined))
   return { value, errorMessage, id, describedBy }
 }
+
+/** A text value of the form as the input shows it: '' for none; typing nothing stores null when `nullable`. */
+export function useFormText(name: () => string, nullable: () => boolean | undefined) {
+  const field = useFormField<string | null | undefined>(name)
+  const text = computed({
+    get: () => field.value.value ?? '',
+    set: (v: string) => {
+      field.value.value = v === '' && nullable() ? null : v
+    },
+  })
+  return { ...field, text }
+}

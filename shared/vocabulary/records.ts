@@ -10,9 +10,16 @@ export const codeIds = ['asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1'] as cons
 /** A code's full name, as sheets print it ("ASME BPVC Section IX"). */
 export { codeName }
 
+const isCodeId = (code: string): code is CodeId => (codeIds as readonly string[]).includes(code)
+
+/** A stored code's full name, or the stored id itself when Rootface does not carry that code. */
+export function codeTitle(code: string): string {
+  return isCodeId(code) ? codeName(code) : code
+}
+
 /** A code's short name for tables and pickers ("ASME IX"). */
 export function codeShortName(code: string): string {
-  return code === 'asme-ix' ? 'ASME IX' : codeIds.includes(code as CodeId) ? codeName(code as CodeId) : code
+  return code === 'asme-ix' ? 'ASME IX' : codeTitle(code)
 }
 
 /** Choices of a code picker: value and short name. */
