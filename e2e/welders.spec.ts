@@ -10,11 +10,11 @@ async function recordPlateTest(page: Page, bends: [string, number][]) {
   await expect(page.getByRole('button', { name: 'Save test' })).toBeEnabled() // interactive: entries will not be lost
   await page.getByRole('combobox', { name: 'Welder', exact: true }).selectOption({ label: 'KB-03 · Ines Carvalho' })
   await page.getByRole('combobox', { name: 'Unit of this record', exact: true }).selectOption('mm')
-  await page.getByRole('combobox', { name: 'Process', exact: true }).selectOption('GTAW')
+  await page.getByRole('combobox', { name: 'Process 1', exact: true }).selectOption('GTAW')
   await page.getByRole('combobox', { name: 'Coupon form', exact: true }).selectOption('plate')
   await page.getByRole('combobox', { name: 'Weld', exact: true }).selectOption('groove')
   await page.getByLabel('Coupon thickness (mm)').fill('10')
-  await page.getByLabel('Weld metal deposited (mm)').fill('10')
+  await page.getByLabel('Deposit (mm)').fill('10')
   await page.getByLabel('Layers').fill('3')
   await page.getByLabel('Base metal P-No.').fill('1')
   await page.getByLabel('Filler F-No.').fill('6')

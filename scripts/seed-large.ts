@@ -1,6 +1,8 @@
 // npm run seed:large: a large invented shop in its own data directory (default .data/large/db), for `npm run bench`.
 // 2,000 welders, 10,000 welder tests, 200,000 continuity entries, 500 WPSs, 300 PQRs, 200 projects,
 // on top of the demo shop (so the demo accounts sign in). Deterministic: the same data every run.
+import { layersOf } from '../server/database/procedure-columns'
+import { pqrLayersOf } from '../server/database/pqr-columns'
 import { rmSync } from 'node:fs'
 import { resolve } from 'node:path'
 import { format, subDays } from 'date-fns'
@@ -57,9 +59,9 @@ export async function seedLargeShop(db: Db, today = new Date()) {
       return {
         number: `PQR-L${String(i + 1).padStart(4, '0')}`, testDate: day(int(60, 2000)), code: 'asme-ix', edition: '2023', unit: 'in', process,
         transfer: process === 'GMAW' && rand() < 0.5 ? 'short-circuit' : null, couponThickness: pick([0.1345, 0.375, 0.5, 0.75, 1, 1.5]),
-        baseMetalId: base!.id, fillerMetalId: filler!.id, status: 'certified',
+        baseMetalId: base!.id, fillerMetalId: filler!.id, status: 'certified', processes: [process],
       }
-    })
+    }).map(row => ({ ...row, layers: pqrLayersOf({ ...row, layers: [], depositThickness: null, actuals: {} }) }))
     const pqrIds = (await tx.insert(t.pqrs).values(pqrRows).returning({ id: t.pqrs.id })).map(r => r.id)
 
     const procedureRows = Array.from({ length: largeShop.procedures }, (_, i) => {
@@ -69,9 +71,9 @@ export async function seedLargeShop(db: Db, today = new Date()) {
         number: `L-W${String(i + 1).padStart(4, '0')}`, revision: 0, title: `${process} carbon steel, production procedure ${i + 1}`,
         code: 'asme-ix', edition: '2023', status: rand() < 0.7 ? 'approved' : 'draft', unit: 'in', process,
         pNumberA: '1', pNumberB: '1', thicknessMin: 0.0625, thicknessMax: max, positions: ['F', 'H', 'V', 'O'], fNumbers: [fOf[process]!],
-        createdBy: supervisor!.id,
+        createdBy: supervisor!.id, processes: [process],
       }
-    })
+    }).map(row => ({ ...row, layers: layersOf({ ...row, transfer: null, variables: {}, layers: [] }) }))
     const procedureIds: number[] = []
     await batches(procedureRows, 250, async chunk => procedureIds.push(...(await tx.insert(t.procedures).values(chunk).returning({ id: t.procedures.id })).map(r => r.id)))
     await batches(procedureIds.map((id, i) => ({ procedureId: id, pqrId: pqrIds[i % pqrIds.length]! })), 500, chunk => tx.insert(t.procedurePqrs).values(chunk))
@@ -90,7 +92,8 @@ export async function seedLargeShop(db: Db, today = new Date()) {
       const status = rand() < 0.9 ? 'certified' : rand() < 0.5 ? 'recorded' : 'failed'
       return {
         ...input, welderId, procedureId: procedureIds[i % procedureIds.length], testDate: day(int(200, 1500)), visualAccepted: true,
-        examination: 'bend', ranges: qualifiedRangesOf(input), status, certifiedAt: status === 'certified' ? subDays(today, 190) : null,
+        examination: 'bend', ranges: qualifiedRangesOf(input), status, processes: [process],
+        deposits: [{ process, transfer: input.transfer, depositThickness: thickness }], certifiedAt: status === 'certified' ? subDays(today, 190) : null,
       }
     })
     await batches(testRows, 500, chunk => tx.insert(t.welderTests).values(chunk))

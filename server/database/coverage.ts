@@ -7,25 +7,30 @@ import { refreshStandings } from './standings'
 type Rows<T> = { rows: T[] }
 
 /**
- * The candidates for "who can weld this joint?": the approved WPSs of the process, and every certified test of it by an
+ * The candidates for "who can weld this joint?": the approved WPSs with a layer of the process, and every certified test of it
+ * (a combination coupon with that process's own deposit, QW-452.1(b)) by an
  * active welder (flat rows, newest first) joined with that welder's kept standing for the process (process_standings,
  * brought up to date first), so continuity is not re-read here. Flat rows, no per-row JSON.
  */
 export async function coverageCandidates(db: Db, process: string): Promise<{ procedures: ProcedureRow[], welders: CandidateRow[] }> {
   await refreshStandings(db)
   const procedures = await db.execute(sql`
-    select id, number, revision, title, code, edition, unit, process, transfer, p_number_a, p_number_b,
-           thickness_min, thickness_max, diameter_min, positions, f_numbers
-    from procedures where status = 'approved' and process = ${process} order by number, revision`) as unknown as Rows<ProcedureRow>
+    select id, number, revision, title, code, edition, unit, ${process}::text as process,
+           coalesce((select l->>'transfer' from jsonb_array_elements(layers) l where l->>'process' = ${process} limit 1), transfer) as transfer,
+           p_number_a, p_number_b, thickness_min, thickness_max, diameter_min, positions, f_numbers
+    from procedures where status = 'approved' and (process = ${process} or ${process} = any(processes)) order by number, revision`) as unknown as Rows<ProcedureRow>
   const tests = await db.execute(sql`
-    select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, t.process, t.transfer, t.form, t.weld,
-           t.coupon_thickness, t.deposit_thickness, t.layers, t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions, t.progression,
+    select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, ${process}::text as process,
+           case when d.e is null then t.transfer else d.e->>'transfer' end as transfer, t.form, t.weld, t.coupon_thickness,
+           case when d.e is null then t.deposit_thickness else (d.e->>'depositThickness')::float8 end as deposit_thickness, t.layers,
+           t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions, t.progression,
            w.name, w.stamp, s.code as chain_code, s.edition as chain_edition, s.test_date::text as chain_test_date,
            s.last_use::text as chain_last_use, s.lapses_on::text as chain_lapses_on, s.rule as chain_rule
     from welder_tests t
       join welders w on w.id = t.welder_id
-      join process_standings s on s.welder_id = t.welder_id and s.process = t.process
-    where t.status = 'certified' and t.process = ${process} and w.status = 'active'
+      join process_standings s on s.welder_id = t.welder_id and s.process = ${process}
+      left join lateral (select e from jsonb_array_elements(t.deposits) e where e->>'process' = ${process} limit 1) d on true
+    where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes)) and w.status = 'active'
     order by w.stamp, t.test_date desc, t.id desc`) as unknown as Rows<TestRow & Record<'name' | 'stamp' | `chain_${'code' | 'edition' | 'test_date' | 'last_use' | 'lapses_on' | 'rule'}`, string> & { welder_id: number }>
 
   const welders = new Map<number, CandidateRow>()

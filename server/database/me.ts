@@ -3,9 +3,10 @@ import { and, asc, desc, eq, inArray } from 'drizzle-orm'
 import type { Db } from './client'
 import { procedures, welders, welderTests } from './schema'
 import { qualifiedRangesOf } from '../../shared/qualification/test-ranges'
+import { depositsOf, variablesOf } from './welder-test-columns'
 import { rangesInWords } from '../../shared/qualification/plain-words'
 import type { WelderRangesResult } from '../../shared/rules/results'
-import type { CodeId, Unit } from '../../shared/rules/types'
+import type { Unit } from '../../shared/rules/types'
 import { renewalOf } from '../../shared/qualification/renewal'
 import { missing } from '../../shared/types/outcome'
 import { welderLogsOwnContinuity } from './continuity'
@@ -25,9 +26,9 @@ export async function ownQualifications(db: Db, welderId: number, standings: { p
         .from(procedures).where(and(eq(procedures.status, 'approved'), inArray(procedures.process, current))).orderBy(asc(procedures.number))
     : []
   const described = tests.map((t) => {
-    const ranges = qualifiedRangesOf({ ...t, code: t.code as CodeId, unit: t.unit as Unit, form: t.form as 'plate' | 'pipe', weld: t.weld as 'groove' | 'fillet' })
+    const ranges = qualifiedRangesOf(variablesOf(t))
     return {
-      id: t.id, testDate: t.testDate, process: t.process, transfer: t.transfer, form: t.form, weld: t.weld, positions: t.positions,
+      id: t.id, testDate: t.testDate, process: t.process, processes: depositsOf(t), transfer: t.transfer, form: t.form, weld: t.weld, positions: t.positions,
       status: t.status, unit: t.unit, couponThickness: t.couponThickness, outsideDiameter: t.outsideDiameter, code: t.code, edition: t.edition,
       covers: t.status === 'certified' && !('error' in ranges) ? rangesInWords(ranges as unknown as WelderRangesResult, t.unit as Unit) : [],
     }

@@ -1,8 +1,8 @@
-import { and, eq } from 'drizzle-orm'
+import { and, eq, inArray } from 'drizzle-orm'
 import type { Db } from './client'
-import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, signatures } from './schema'
-import { contentHash, newVerifyCode } from './signing'
-import { judgedResults, minimumStrengthOf, pqrColumns, specimensRequired, type PqrRow } from './pqrs'
+import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, signatures, welders } from './schema'
+import { contentHash, currentContentFormat, newVerifyCode } from './signing'
+import { judgedResults, minimumStrengthOf, pqrColumns, pqrDraftOf, specimensRequired, type PqrRow } from './pqrs'
 import { recordAudit } from './audit'
 import { isUniqueViolation, settle } from '../utils/outcome'
 import { conflict, fieldFailure, frozen, invalid, missing, refused, stale } from '../../shared/types/outcome'
@@ -11,12 +11,18 @@ import type { PqrDraft, PqrResults } from '#shared/schemas/pqr'
 import type { Unit } from '#shared/rules/types'
 
 async function checkMetals(db: Db, draft: PqrDraft) {
-  const [[base], [filler]] = await Promise.all([
-    db.select({ id: baseMetals.id }).from(baseMetals).where(eq(baseMetals.id, draft.baseMetalId)),
-    db.select({ id: fillerMetals.id }).from(fillerMetals).where(eq(fillerMetals.id, draft.fillerMetalId)),
+  const baseIds = [draft.baseMetalId, draft.baseMetalBId].filter((id): id is number => id !== null)
+  const fillerIds = draft.layers.map(l => l.fillerMetalId).filter((id): id is number => id !== null)
+  const [bases, fillers, welder] = await Promise.all([
+    db.select({ id: baseMetals.id }).from(baseMetals).where(inArray(baseMetals.id, baseIds)),
+    fillerIds.length ? db.select({ id: fillerMetals.id }).from(fillerMetals).where(inArray(fillerMetals.id, fillerIds)) : Promise.resolve([]),
+    draft.welderId !== null ? db.select({ id: welders.id }).from(welders).where(eq(welders.id, draft.welderId)) : Promise.resolve([{ id: 0 }]),
   ])
-  if (!base) throw fieldFailure('baseMetalId', `No base metal with id ${draft.baseMetalId}`)
-  if (!filler) throw fieldFailure('fillerMetalId', `No filler metal with id ${draft.fillerMetalId}`)
+  if (!bases.some(b => b.id === draft.baseMetalId)) throw fieldFailure('baseMetalId', `No base metal with id ${draft.baseMetalId}`)
+  if (draft.baseMetalBId !== null && !bases.some(b => b.id === draft.baseMetalBId)) throw fieldFailure('baseMetalBId', `No base metal with id ${draft.baseMetalBId}`)
+  const i = draft.layers.findIndex(l => l.fillerMetalId !== null && !fillers.some(f => f.id === l.fillerMetalId))
+  if (i >= 0) throw fieldFailure(`layers.${i}.fillerMetalId`, `No filler metal with id ${draft.layers[i]!.fillerMetalId}`)
+  if (!welder.length) throw fieldFailure('welderId', `No welder with id ${draft.welderId}`)
 }
 
 /** A certified (or failed) PQR is signed and frozen; a stale version is refused. */
@@ -52,7 +58,7 @@ export async function updatePqr(db: Db, id: number, version: number, draft: PqrD
         assertOpen(row, version)
         const [saved] = await tx.update(pqrs).set({ ...pqrColumns(draft), version: row.version + 1, updatedAt: new Date() })
           .where(and(eq(pqrs.id, id), eq(pqrs.version, row.version))).returning()
-        await recordAudit(tx, { accountId: user.id, action: 'pqr.update', recordType: 'pqr', recordId: id, before: pqrColumns(row as unknown as PqrDraft), after: draft })
+        await recordAudit(tx, { accountId: user.id, action: 'pqr.update', recordType: 'pqr', recordId: id, before: pqrDraftOf(row), after: draft })
         return saved!
       })
     }
@@ -115,7 +121,7 @@ export async function certifyPqr(db: Db, id: number, version: number, user: Sess
       const [saved] = await tx.update(pqrs).set({ status: passed ? 'certified' : 'failed', version: row.version + 1, updatedAt: now }).where(eq(pqrs.id, id)).returning()
       const sha256 = await contentHash(tx as unknown as Db, 'pqr', id)
       const [signature] = await tx.insert(signatures).values({
-        recordType: 'pqr', recordId: id, recordVersion: saved!.version, signerId: user.id, signerName: user.name, meaning: 'certified', sha256: sha256!, verifyCode: newVerifyCode(),
+        recordType: 'pqr', recordId: id, recordVersion: saved!.version, signerId: user.id, signerName: user.name, meaning: 'certified', sha256: sha256!, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       }).returning()
       await recordAudit(tx, { accountId: user.id, action: 'pqr.certify', recordType: 'pqr', recordId: id, before: { status: 'recorded' }, after: { status: saved!.status, sha256 } })
       return { pqr: saved!, signature: signature! }

@@ -1,47 +1,69 @@
-import { and, asc, count, eq, ilike, inArray, or } from 'drizzle-orm'
+import { and, arrayContains, asc, count, eq, ilike, inArray, or } from 'drizzle-orm'
+import { alias } from 'drizzle-orm/pg-core'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import type { PqrListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures } from './schema'
+import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures, welders } from './schema'
+import { grantedProjectIds } from './projects'
+import type { SessionUser } from '../utils/auth'
 import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
 import { tensileOf } from '#shared/qualification/tensile-acceptance'
-import { psiToMpa, type PqrActuals, type PqrDraft, type PqrResults } from '#shared/schemas/pqr'
+import { psiToMpa, totalDeposit, type PqrLayer, type PqrResults } from '#shared/schemas/pqr'
 import type { CodeId, Unit } from '#shared/rules/types'
-import { grantedProjectIds } from './projects'
-import type { SessionUser } from '../utils/auth'
 
-export type PqrRow = typeof pqrs.$inferSelect
+import { pqrColumns, pqrDraftOf, pqrLayersOf, type PqrRow } from './pqr-columns'
 
-/** Heat input of the coupon: as recorded, or from volts, amps and travel speed (QW-409.1(a) for ASME). */
-export function pqrHeatInput(row: Pick<PqrRow, 'code' | 'unit' | 'edition' | 'actuals'>): number | null {
-  const a = row.actuals as PqrActuals
-  if (typeof a.heatInput === 'number') return a.heatInput
-  if (typeof a.volts !== 'number' || typeof a.amps !== 'number' || typeof a.travelSpeed !== 'number') return null
-  const result = evaluate({ code: row.code, check: 'heat-input', unit: row.unit, edition: row.edition, input: { volts: a.volts, amps: a.amps, travelSpeed: a.travelSpeed } })
+export { pqrColumns, pqrDraftOf, pqrLayersOf, type PqrRow }
+
+/** Heat input of one layer: as recorded, or from volts, amps and travel speed (QW-409.1(a) for ASME). */
+export function layerHeatInput(row: Pick<PqrRow, 'code' | 'unit' | 'edition'>, layer: Pick<PqrLayer, 'heatInput' | 'volts' | 'amps' | 'travelSpeed'>): number | null {
+  if (typeof layer.heatInput === 'number') return layer.heatInput
+  if (typeof layer.volts !== 'number' || typeof layer.amps !== 'number' || typeof layer.travelSpeed !== 'number') return null
+  const result = evaluate({ code: row.code, check: 'heat-input', unit: row.unit, edition: row.edition, input: { volts: layer.volts, amps: layer.amps, travelSpeed: layer.travelSpeed } })
   return 'error' in result ? null : (result as unknown as { heatInput: number }).heatInput
 }
 
-/** The PQRs as the support check reads them, with their base-metal P-No., filler F-No. and whether every result passed. */
-export async function supportPqrs(db: Db, ids: number[]): Promise<SupportPqr[]> {
+/** Heat input of the coupon's first layer (a single-process PQR: of the coupon). */
+export function pqrHeatInput(row: Pick<PqrRow, 'code' | 'unit' | 'edition' | 'actuals' | 'layers' | 'process' | 'transfer' | 'fillerMetalId' | 'depositThickness'>): number | null {
+  const first = pqrLayersOf(row)[0]
+  return first ? layerHeatInput(row, first) : null
+}
+
+/**
+ * The PQRs as the support check reads them: one entry per process welded on the coupon, each with its own deposit,
+ * filler F-No. and heat input (QW-200.4(a): each process's deposit is qualified by that process's deposit on the PQR),
+ * sharing the coupon thickness, base-metal P-No. and whether every result passed.
+ */
+export async function supportPqrs(db: Db, ids: number[]): Promise<(SupportPqr & { pNumberB: string | null })[]> {
   if (!ids.length) return []
-  const rows = await db.select({ pqr: pqrs, pNumber: baseMetals.pNumber, fNumber: fillerMetals.fNumber }).from(pqrs)
-    .leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
+  const baseB = alias(baseMetals, 'base_b')
+  const rows = await db.select({ pqr: pqrs, pNumber: baseMetals.pNumber, pNumberB: baseB.pNumber }).from(pqrs)
+    .leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(baseB, eq(baseB.id, pqrs.baseMetalBId))
     .where(inArray(pqrs.id, ids)).orderBy(asc(pqrs.number))
-  const [tensile, bends] = await Promise.all([
+  const [tensile, bends, fillers] = await Promise.all([
     db.select({ pqrId: pqrTensileSpecimens.pqrId, accepted: pqrTensileSpecimens.accepted }).from(pqrTensileSpecimens).where(inArray(pqrTensileSpecimens.pqrId, ids)),
     db.select({ pqrId: pqrBendSpecimens.pqrId, accepted: pqrBendSpecimens.accepted }).from(pqrBendSpecimens).where(inArray(pqrBendSpecimens.pqrId, ids)),
+    db.select({ id: fillerMetals.id, fNumber: fillerMetals.fNumber }).from(fillerMetals),
   ])
-  return rows.map(({ pqr, pNumber, fNumber }) => {
+  return rows.flatMap(({ pqr, pNumber, pNumberB }) => {
     const t = tensile.filter(s => s.pqrId === pqr.id)
     const b = bends.filter(s => s.pqrId === pqr.id)
-    return {
-      id: pqr.id, number: pqr.number, code: pqr.code, edition: pqr.edition, unit: pqr.unit as Unit, process: pqr.process, transfer: pqr.transfer,
-      couponThickness: pqr.couponThickness, depositThickness: pqr.depositThickness, toughnessTested: pqr.toughnessRequired,
-      heatInput: pqrHeatInput(pqr), fNumber: fNumber ?? null, pNumber: pNumber ?? null, status: pqr.status,
-      resultsPass: t.length > 0 && b.length > 0 && t.every(s => s.accepted) && b.every(s => s.accepted),
-    }
+    const layers = pqrLayersOf(pqr)
+    const byProcess = [...new Set(layers.map(l => l.process))].map(process => layers.filter(l => l.process === process))
+    return byProcess.map((group) => {
+      const first = group[0]!
+      const deposit = totalDeposit(group)
+      return {
+        id: pqr.id, number: byProcess.length > 1 ? `${pqr.number} (${first.process})` : pqr.number, code: pqr.code, edition: pqr.edition,
+        unit: pqr.unit as Unit, process: first.process, transfer: first.transfer,
+        couponThickness: pqr.couponThickness, depositThickness: deposit, toughnessTested: pqr.toughnessRequired,
+        heatInput: layerHeatInput(pqr, first), fNumber: fillers.find(f => f.id === first.fillerMetalId)?.fNumber ?? null,
+        pNumber: pNumber ?? null, pNumberB: pNumberB ?? pNumber ?? null, status: pqr.status,
+        resultsPass: t.length > 0 && b.length > 0 && t.every(s => s.accepted) && b.every(s => s.accepted),
+      }
+    })
   })
 }
 
@@ -54,9 +76,13 @@ export async function findPqr(db: Db, id: number) {
 export async function pqrDetail(db: Db, id: number) {
   const row = await findPqr(db, id)
   if (!row) return null
-  const [[base], [filler], tensile, bends, signed, supports, [support]] = await Promise.all([
+  const layers = pqrLayersOf(row)
+  const fillerIds = [...new Set(layers.map(l => l.fillerMetalId).filter((f): f is number => f !== null))]
+  const [[base], [baseB], [welder], fillers, tensile, bends, signed, supports, support] = await Promise.all([
     row.baseMetalId ? db.select().from(baseMetals).where(eq(baseMetals.id, row.baseMetalId)) : Promise.resolve([]),
-    row.fillerMetalId ? db.select().from(fillerMetals).where(eq(fillerMetals.id, row.fillerMetalId)) : Promise.resolve([]),
+    row.baseMetalBId ? db.select().from(baseMetals).where(eq(baseMetals.id, row.baseMetalBId)) : Promise.resolve([]),
+    row.welderId ? db.select({ id: welders.id, name: welders.name, stamp: welders.stamp }).from(welders).where(eq(welders.id, row.welderId)) : Promise.resolve([]),
+    fillerIds.length ? db.select().from(fillerMetals).where(inArray(fillerMetals.id, fillerIds)) : Promise.resolve([]),
     db.select().from(pqrTensileSpecimens).where(eq(pqrTensileSpecimens.pqrId, id)).orderBy(asc(pqrTensileSpecimens.id)),
     db.select().from(pqrBendSpecimens).where(eq(pqrBendSpecimens.pqrId, id)).orderBy(asc(pqrBendSpecimens.id)),
     db.select({ id: signatures.id, signerName: signatures.signerName, meaning: signatures.meaning, signedAt: signatures.signedAt, sha256: signatures.sha256, verifyCode: signatures.verifyCode, recordVersion: signatures.recordVersion })
@@ -66,12 +92,16 @@ export async function pqrDetail(db: Db, id: number) {
       .orderBy(asc(procedures.number), asc(procedures.revision)),
     supportPqrs(db, [id]),
   ])
-  const qualifies = support ? pqrQualifies(support, { code: row.code, edition: row.edition, unit: row.unit as Unit }) : null
+  // What the coupon qualifies, per process (each with its own deposit)
+  const qualifies = support.map(s => pqrQualifies(s, { code: row.code, edition: row.edition, unit: row.unit as Unit }))
   const specimensNeeded = specimensRequired(row)
   return {
     pqr: { ...row, heatInput: pqrHeatInput(row) },
-    baseMetal: base ?? null, fillerMetal: filler ?? null, tensile, bends, signatures: signed, procedures: supports,
-    qualifies, specimensNeeded, resultsPass: support?.resultsPass ?? false,
+    draft: pqrDraftOf(row),
+    layers: layers.map(l => ({ ...l, heatInput: layerHeatInput(row, l), filler: fillers.find(f => f.id === l.fillerMetalId) ?? null })),
+    baseMetal: base ?? null, baseMetalB: baseB ?? null, welder: welder ?? null, fillerMetal: fillers.find(f => f.id === row.fillerMetalId) ?? fillers[0] ?? null,
+    tensile, bends, signatures: signed, procedures: supports,
+    qualifies: qualifies[0] ?? null, qualifiesByProcess: qualifies, specimensNeeded, resultsPass: support[0]?.resultsPass ?? false,
     minimumStrength: base?.minTensilePsi ? minimumStrengthOf(base.minTensilePsi, row.unit as Unit) : null,
   }
 }
@@ -89,14 +119,6 @@ export function specimensRequired(row: Pick<PqrRow, 'code' | 'edition' | 'unit' 
   })
   if ('error' in result) return null
   return (result as unknown as { specimens: { tension: number, face: number, root: number, side: number } }).specimens
-}
-
-export function pqrColumns(draft: PqrDraft) {
-  return {
-    number: draft.number, testDate: draft.testDate, code: draft.code, edition: draft.edition, unit: draft.unit, process: draft.process,
-    transfer: draft.transfer, couponThickness: draft.couponThickness, depositThickness: draft.depositThickness, baseMetalId: draft.baseMetalId,
-    fillerMetalId: draft.fillerMetalId, toughnessRequired: draft.toughnessRequired, actuals: draft.actuals, labReportNumber: draft.labReportNumber,
-  }
 }
 
 /** The tensile and bend rows as the rules judge them: strength from load and area, bends by the code's bend rule. */
@@ -136,19 +158,20 @@ export async function mayReadPqr(db: Db, user: SessionUser, id: number) {
 export async function listPqrs(db: Db, query: PqrListQuery) {
   const where = allOf([
     query.status && eq(pqrs.status, query.status),
-    query.process && eq(pqrs.process, query.process),
+    query.process && or(eq(pqrs.process, query.process), arrayContains(pqrs.processes, [query.process])),
     query.code && eq(pqrs.code, query.code),
     query.pNumber && eq(baseMetals.pNumber, query.pNumber),
     query.q && or(ilike(pqrs.number, containsPattern(query.q)), ilike(pqrs.labReportNumber, containsPattern(query.q))),
   ])
   const page = await pageOf(query, ({ limit, offset }) => db.select({
     id: pqrs.id, number: pqrs.number, testDate: pqrs.testDate, code: pqrs.code, edition: pqrs.edition, unit: pqrs.unit, process: pqrs.process,
-    transfer: pqrs.transfer, couponThickness: pqrs.couponThickness, status: pqrs.status, labReportNumber: pqrs.labReportNumber,
+    transfer: pqrs.transfer, processes: pqrs.processes, couponThickness: pqrs.couponThickness, status: pqrs.status, labReportNumber: pqrs.labReportNumber,
     baseMetalId: pqrs.baseMetalId, baseMetal: baseMetals.specification, baseGrade: baseMetals.grade, pNumber: baseMetals.pNumber, groupNumber: baseMetals.groupNumber,
     fillerMetalId: pqrs.fillerMetalId, fillerSpecification: fillerMetals.specification, filler: fillerMetals.classification, fNumber: fillerMetals.fNumber, aNumber: fillerMetals.aNumber,
   }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
     .where(where).orderBy(orderOf(pqrs[query.sort], query.dir), asc(pqrs.number)).limit(limit).offset(offset),
   () => db.select({ total: count() }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).where(where))
   const support = await supportPqrs(db, page.items.map(r => r.id))
-  return { ...page, items: page.items.map(r => ({ ...r, support: support.find(s => s.id === r.id)! })) }
+  // One support entry per process of the coupon (a combination PQR has several)
+  return { ...page, items: page.items.map(r => ({ ...r, support: support.find(s => s.id === r.id)!, supports: support.filter(s => s.id === r.id) })) }
 }

@@ -1,8 +1,8 @@
 import { and, eq, inArray, max, ne } from 'drizzle-orm'
 import type { Db } from './client'
 import { pqrs, procedurePqrs, procedures, projectProcedures, readings, signatures, welders } from './schema'
-import { contentHash, newVerifyCode } from './signing'
-import { columnsOf, draftOf, findProcedure, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
+import { contentHash, currentContentFormat, newVerifyCode } from './signing'
+import { columnsOf, draftOf, findProcedure, layersOf, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
 import { recordAudit } from './audit'
 import { isForeignKeyViolation, isUniqueViolation, settle } from '../utils/outcome'
 import { conflict, fieldFailure, frozen, invalid, missing, refused, stale } from '../../shared/types/outcome'
@@ -108,7 +108,7 @@ export async function approveProcedure(db: Db, id: number, version: number, user
       const sha256 = await contentHash(tx as unknown as Db, 'procedure', id)
       const [signature] = await tx.insert(signatures).values({
         recordType: 'procedure', recordId: id, recordVersion: approved!.version, signerId: user.id, signerName: user.name,
-        meaning: 'approved', sha256: sha256!, verifyCode: newVerifyCode(),
+        meaning: 'approved', sha256: sha256!, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       }).returning()
       await recordAudit(tx, { accountId: user.id, action: 'procedure.approve', recordType: 'procedure', recordId: id, before: { status: 'draft' }, after: { status: 'approved', sha256, superseded: older.map(o => o.id), handCheck: byHand ? handCheck : undefined } })
       return { procedure: approved!, signature: signature!, superseded: older }
@@ -137,17 +137,17 @@ export async function reviseProcedure(db: Db, id: number, version: number, user:
   })
 }
 
-/** The WPS window each production reading is held to. */
-export function readingWindow(row: ProcedureRow) {
-  const draft = draftOf(row, [])
+/** The WPS window each production reading on one layer (the first unless named) is held to. */
+export function readingWindow(row: ProcedureRow, layerIndex = 0) {
+  const layer = layersOf(row)[layerIndex] ?? layersOf(row)[0]!
   const pick = (w: { min: unknown, max: unknown } | undefined) => {
     const min = typeof w?.min === 'number' ? w.min : null
     const max = typeof w?.max === 'number' ? w.max : null
     return min === null && max === null ? undefined : { min, max }
   }
   return Object.fromEntries(Object.entries({
-    volts: pick(draft.electrical.volts), amps: pick(draft.electrical.amps), wireFeedSpeed: pick(draft.electrical.wireFeed),
-    travelSpeed: pick(draft.electrical.travelSpeed), ctwd: pick(draft.technique.ctwd), gasFlow: pick(draft.gas.flow),
+    volts: pick(layer.volts), amps: pick(layer.amps), wireFeedSpeed: pick(layer.wireFeed),
+    travelSpeed: pick(layer.travelSpeed), ctwd: pick(layer.ctwd), gasFlow: pick(layer.gas.flow),
   }).filter(([, v]) => v !== undefined))
 }
 
@@ -171,7 +171,10 @@ async function recordReadingOn(db: Db, id: number, input: Reading, user: Session
   const values = Object.fromEntries((['volts', 'amps', 'wireFeedSpeed', 'travelSpeed', 'ctwd', 'gasFlow'] as const)
     .filter(k => typeof input[k] === 'number').map(k => [k, input[k] as number]))
   const unit = row.unit as Unit
-  const checked = evaluate({ code: row.code, check: 'readings', unit, edition: row.edition, input: { window: readingWindow(row), readings: values } })
+  const layers = layersOf(row)
+  const layerIndex = input.layer ?? 0
+  if (layerIndex >= layers.length) throw fieldFailure('layer', `This WPS has ${layers.length} layer${layers.length === 1 ? '' : 's'}`)
+  const checked = evaluate({ code: row.code, check: 'readings', unit, edition: row.edition, input: { window: readingWindow(row, layerIndex), readings: values } })
   if ('error' in checked) throw invalid('body', [String(checked.error)], {})
   const result = checked as unknown as { within: boolean, checks: { parameter: string, value: number, within: boolean, text: string }[] }
   let heat: { value: number, perUnit: string, limit: number | null, within: boolean, clause: string, text: string } | null = null
@@ -179,7 +182,7 @@ async function recordReadingOn(db: Db, id: number, input: Reading, user: Session
     const h = evaluate({ code: row.code, check: 'heat-input', unit, edition: row.edition, input: { volts: values.volts, amps: values.amps, travelSpeed: values.travelSpeed } })
     if (!('error' in h)) {
       const hi = h as unknown as { heatInput: number, perUnit: string, reasons: { clause: string, text: string }[] }
-      const limit = draftOf(row, []).electrical.heatInputMax ?? null
+      const limit = layers[layerIndex]!.heatInputMax ?? null
       const within = typeof limit !== 'number' || hi.heatInput <= limit
       heat = {
         value: hi.heatInput, perUnit: hi.perUnit, limit: typeof limit === 'number' ? limit : null, within, clause: hi.reasons[0]?.clause ?? '',
@@ -191,7 +194,7 @@ async function recordReadingOn(db: Db, id: number, input: Reading, user: Session
   return db.transaction(async (tx) => {
     const [saved] = await tx.insert(readings).values({
       procedureId: row.id, welderId, takenAt: input.takenAt ? new Date(input.takenAt) : new Date(),
-      values: { readings: values, checks: result.checks, heatInput: heat, reference: input.reference ?? null }, outOfWindow, recordedBy: user.id,
+      values: { readings: values, checks: result.checks, heatInput: heat, reference: input.reference ?? null, layer: layerIndex, layerName: layers[layerIndex]!.name, process: layers[layerIndex]!.process }, outOfWindow, recordedBy: user.id,
     }).returning()
     await recordAudit(tx, { accountId: user.id, action: 'reading.record', recordType: 'procedure', recordId: row.id, after: { reading: saved!.id, outOfWindow } })
     return { ...saved!, within: !outOfWindow, checks: result.checks, heatInput: heat }

@@ -85,6 +85,10 @@ export const procedures = pgTable('procedures', {
   positions: text('positions').array().notNull().default(sql`'{}'::text[]`),
   fNumbers: text('f_numbers').array().notNull().default(sql`'{}'::text[]`),
   variables: jsonb('variables').notNull().default({}),
+  // Every process of the WPS in layer order (searchable: lists and "Who can weld it?"); `process` is the first layer's.
+  processes: text('processes').array().notNull().default(sql`'{}'::text[]`),
+  // The process layers in order (root, hot pass, fill, cap...), each validated by procedureLayerSchema on write.
+  layers: jsonb('layers').notNull().default([]),
   version: integer('version').notNull().default(1),
   createdBy: integer('created_by').references(() => accounts.id),
   approvedAt: timestamp('approved_at', { withTimezone: true }),
@@ -93,6 +97,8 @@ export const procedures = pgTable('procedures', {
 }, t => [
   uniqueIndex('procedures_number_revision_key').on(t.number, t.revision),
   index('procedures_status_idx').on(t.status, t.process),
+  index('procedures_processes_idx').using('gin', t.processes),
+  check('procedures_layers_check', sql`jsonb_typeof(${t.layers}) = 'array'`),
   check('procedures_status_check', sql`${t.status} in ('draft', 'approved', 'superseded')`),
   check('procedures_code_check', sql`${t.code} in ('asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1')`),
   check('procedures_revision_check', sql`${t.revision} >= 0`),
@@ -118,12 +124,20 @@ export const pqrs = pgTable('pqrs', {
   actuals: jsonb('actuals').notNull().default({}),
   toughness: jsonb('toughness'),
   labReportNumber: text('lab_report_number'),
+  // Base metal B of a dissimilar joint (null: the same as base metal A)
+  baseMetalBId: integer('base_metal_b_id').references(() => baseMetals.id),
+  // The welder who welded the coupon (ASME IX QW-301.2)
+  welderId: integer('welder_id').references(() => welders.id),
+  processes: text('processes').array().notNull().default(sql`'{}'::text[]`),
+  // The layers as welded: process, filler and the values actually used, with each process's deposit thickness
+  layers: jsonb('layers').notNull().default([]),
   status: text('status').notNull().default('recorded'),
   version: integer('version').notNull().default(1),
   createdAt: created(),
   updatedAt: updated(),
 }, t => [
   uniqueIndex('pqrs_number_key').on(t.number),
+  check('pqrs_layers_check', sql`jsonb_typeof(${t.layers}) = 'array'`),
   check('pqrs_status_check', sql`${t.status} in ('recorded', 'certified', 'failed')`),
   check('pqrs_coupon_check', sql`${t.couponThickness} > 0`),
   unitCheck('pqrs_unit_check', t.unit),
@@ -189,6 +203,12 @@ export const welderTests = pgTable('welder_tests', {
   radiography: jsonb('radiography'),
   // Ranges qualified as computed by shared/rules when the test was last saved
   ranges: jsonb('ranges'),
+  // Every process welded on the coupon, in order (`process` is the first); each counts for its own continuity.
+  processes: text('processes').array().notNull().default(sql`'{}'::text[]`),
+  // Per process: { process, transfer, depositThickness } (ASME IX QW-452.1(b): each process qualifies its own deposit)
+  deposits: jsonb('deposits').notNull().default([]),
+  // The PQR whose coupon this is, when the test was made from it (QW-301.2)
+  pqrId: integer('pqr_id').references(() => pqrs.id),
   status: text('status').notNull().default('recorded'),
   inspectorId: integer('inspector_id').references(() => accounts.id),
   certifiedAt: timestamp('certified_at', { withTimezone: true }),
@@ -199,6 +219,7 @@ export const welderTests = pgTable('welder_tests', {
   index('welder_tests_welder_idx').on(t.welderId, t.process),
   index('welder_tests_status_idx').on(t.status, t.testDate),
   check('welder_tests_status_check', sql`${t.status} in ('recorded', 'certified', 'failed')`),
+  check('welder_tests_deposits_check', sql`jsonb_typeof(${t.deposits}) = 'array'`),
   check('welder_tests_form_check', sql`${t.form} in ('plate', 'pipe')`),
   check('welder_tests_weld_check', sql`${t.weld} in ('groove', 'fillet')`),
   check('welder_tests_exam_check', sql`${t.examination} in ('bend', 'radiography', 'macro-fracture')`),
@@ -297,7 +318,10 @@ export const signatures = pgTable('signatures', {
   sha256: text('sha256').notNull(),
   // Short code printed beside the QR code; the public verification page looks it up.
   verifyCode: text('verify_code').notNull(),
+  // Which fields the hash covers (server/database/signing.ts): 1 before process layers, 2 with them
+  contentFormat: integer('content_format').notNull().default(1),
 }, t => [
+  check('signatures_content_format_check', sql`${t.contentFormat} in (1, 2)`),
   uniqueIndex('signatures_verify_code_key').on(t.verifyCode),
   index('signatures_record_idx').on(t.recordType, t.recordId),
   check('signatures_meaning_check', sql`${t.meaning} in ('prepared', 'witnessed', 'approved', 'certified')`),

@@ -25,33 +25,69 @@ export function newVerifyCode() {
   return [...randomBytes(10)].map(b => alphabet[b % alphabet.length]).join('')
 }
 
-// The content a signature covers: the record's own fields, without bookkeeping (timestamps, version counters).
+/**
+ * The content a signature covers: the record's own fields, without bookkeeping (timestamps, version counters).
+ * Which fields is fixed per content format, so a later column never changes the hash of an earlier signature:
+ * format 1 is the record as it was before process layers; format 2 adds the layers, the process list, base metal B,
+ * the coupon's welder and the PQR a welder test came from. A signature keeps the format it was made with.
+ */
+export type ContentFormat = 1 | 2
+export const currentContentFormat: ContentFormat = 2
+
+const fieldsOf: Record<SignedRecordType, Record<ContentFormat, string[]>> = {
+  'procedure': {
+    1: ['id', 'number', 'revision', 'title', 'code', 'edition', 'unit', 'process', 'transfer', 'pNumberA', 'pNumberB', 'thicknessMin', 'thicknessMax',
+      'diameterMin', 'positions', 'fNumbers', 'variables'],
+    2: [],
+  },
+  'pqr': {
+    1: ['id', 'number', 'testDate', 'code', 'edition', 'unit', 'process', 'transfer', 'couponThickness', 'depositThickness', 'baseMetalId',
+      'fillerMetalId', 'toughnessRequired', 'actuals', 'toughness', 'labReportNumber'],
+    2: [],
+  },
+  'welder-test': {
+    1: ['id', 'welderId', 'procedureId', 'testDate', 'code', 'edition', 'unit', 'process', 'transfer', 'form', 'weld', 'couponThickness',
+      'depositThickness', 'layers', 'outsideDiameter', 'pNumber', 'fNumber', 'backing', 'positions', 'progression', 'visualAccepted', 'visualNotes',
+      'examination', 'radiography', 'ranges'],
+    2: [],
+  },
+}
+fieldsOf.procedure[2] = [...fieldsOf.procedure[1], 'processes', 'layers']
+fieldsOf.pqr[2] = [...fieldsOf.pqr[1], 'processes', 'layers', 'baseMetalBId', 'welderId']
+fieldsOf['welder-test'][2] = [...fieldsOf['welder-test'][1], 'processes', 'deposits', 'pqrId']
+
+const pick = (row: Record<string, unknown>, keys: string[]) => Object.fromEntries(keys.filter(k => k in row).map(k => [k, row[k]]))
 const omit = <T extends Record<string, unknown>>(row: T, keys: string[]) =>
   Object.fromEntries(Object.entries(row).filter(([k]) => !keys.includes(k)))
-const bookkeeping = ['version', 'createdAt', 'updatedAt', 'approvedAt', 'certifiedAt', 'status', 'createdBy']
 
-export async function signedContent(db: Db, type: SignedRecordType, id: number): Promise<Record<string, unknown> | null> {
+export async function signedContent(db: Db, type: SignedRecordType, id: number, format: ContentFormat = currentContentFormat): Promise<Record<string, unknown> | null> {
+  const keys = fieldsOf[type][format]
   if (type === 'procedure') {
     const [row] = await db.select().from(procedures).where(eq(procedures.id, id))
     if (!row) return null
     const support = await db.select({ number: pqrs.number }).from(procedurePqrs)
       .innerJoin(pqrs, eq(pqrs.id, procedurePqrs.pqrId)).where(eq(procedurePqrs.procedureId, id)).orderBy(asc(pqrs.number))
-    return { ...omit(row, bookkeeping), supportingPqrs: support.map(s => s.number) }
+    return { ...pick(row, keys), supportingPqrs: support.map(s => s.number) }
   }
   if (type === 'pqr') {
     const [row] = await db.select().from(pqrs).where(eq(pqrs.id, id))
     if (!row) return null
     const tensile = await db.select().from(pqrTensileSpecimens).where(eq(pqrTensileSpecimens.pqrId, id)).orderBy(asc(pqrTensileSpecimens.id))
     const bends = await db.select().from(pqrBendSpecimens).where(eq(pqrBendSpecimens.pqrId, id)).orderBy(asc(pqrBendSpecimens.id))
-    return { ...omit(row, bookkeeping), tensile: tensile.map(s => omit(s, ['id', 'pqrId'])), bends: bends.map(s => omit(s, ['id', 'pqrId'])) }
+    return { ...pick(row, keys), tensile: tensile.map(s => omit(s, ['id', 'pqrId'])), bends: bends.map(s => omit(s, ['id', 'pqrId'])) }
   }
   const [row] = await db.select().from(welderTests).where(eq(welderTests.id, id))
   if (!row) return null
   const bends = await db.select().from(welderTestBends).where(eq(welderTestBends.testId, id)).orderBy(asc(welderTestBends.id))
-  return { ...omit(row, [...bookkeeping, 'inspectorId']), bends: bends.map(s => omit(s, ['id', 'testId'])) }
+  return { ...pick(row, keys), bends: bends.map(s => omit(s, ['id', 'testId'])) }
 }
 
-export async function contentHash(db: Db, type: SignedRecordType, id: number) {
-  const content = await signedContent(db, type, id)
+/** The hash of a record's content in a given format (the current one for a new signature). */
+export async function contentHash(db: Db, type: SignedRecordType, id: number, format: ContentFormat = currentContentFormat) {
+  const content = await signedContent(db, type, id, format)
   return content ? sha256Hex(canonicalJson(content)) : null
+}
+
+export function contentFormatOf(value: number | null | undefined): ContentFormat {
+  return value === 1 ? 1 : 2
 }

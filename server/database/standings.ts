@@ -34,9 +34,11 @@ export async function refreshStandings(db: Db) {
 async function recompute(tx: Db, part: { welderId: number, process: string }[]) {
   const ids = [...new Set(part.map(d => d.welderId))]
   // One after the other: PGlite cannot run two statements of one transaction at once.
-  const tests = await tx.select({ welderId: welderTests.welderId, process: welderTests.process, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate })
+  const certified = await tx.select({ welderId: welderTests.welderId, process: welderTests.process, processes: welderTests.processes, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate })
     .from(welderTests).where(and(inArray(welderTests.welderId, ids), eq(welderTests.status, 'certified')))
     .orderBy(desc(welderTests.testDate), desc(welderTests.id))
+  // A combination coupon counts for each of its processes (ASME IX QW-452.1(b)); older tests list none and count for their one.
+  const tests = certified.flatMap(({ processes, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process })))
   const uses = await tx.select({ welderId: continuityEntries.welderId, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn })
     .from(continuityEntries).where(inArray(continuityEntries.welderId, ids))
   const key = (welderId: number, process: string) => `${welderId}|${process}`

@@ -1,12 +1,12 @@
-import { and, asc, count, eq, ilike, or } from 'drizzle-orm'
+import { and, arrayContains, asc, count, eq, ilike, or } from 'drizzle-orm'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import type { WelderTestListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { accounts, procedures, signatures, welders, welderTestBends, welderTests } from './schema'
-import { contentHash, newVerifyCode } from './signing'
-import { testOutcome, type TestRecord } from '../../shared/qualification/test-outcome'
+import { accounts, pqrs, procedures, signatures, welders, welderTestBends, welderTests } from './schema'
+import { contentHash, currentContentFormat, newVerifyCode } from './signing'
+import { testOutcome } from '../../shared/qualification/test-outcome'
+import { columnsOf, depositsOf, examRecordOf, recordOf, type ExamRecord, type StoredDeposit } from './welder-test-columns'
 import type { WelderTestInput } from '../../shared/schemas/welder-test'
-import type { CodeId, Unit } from '../../shared/rules/types'
 import { recordAudit } from './audit'
 import { settle } from '../utils/outcome'
 import { conflict, fieldFailure, frozen, missing, stale } from '../../shared/types/outcome'
@@ -14,46 +14,7 @@ import { todayIso } from '../utils/today'
 import type { SessionUser } from '../utils/auth'
 import { auditorMayReadWelder } from './projects'
 
-type Row = typeof welderTests.$inferSelect
-type Bend = typeof welderTestBends.$inferSelect
-
-// The jsonb column `radiography` holds the record of a non-bend examination: a radiograph or a macro/fracture result.
-type ExamRecord = { kind: 'radiography', indications: { kind: string, length: number }[], reportNumber: string | null }
-  | { kind: 'macro-fracture', accepted: boolean, notes: string | null }
-
-export function examRecordOf(input: Pick<WelderTestInput, 'examination' | 'radiography' | 'macro'>): ExamRecord | null {
-  if (input.examination === 'radiography' && input.radiography) return { kind: 'radiography', ...input.radiography }
-  if (input.examination === 'macro-fracture' && input.macro) return { kind: 'macro-fracture', ...input.macro }
-  return null
-}
-
-/** The rules' view of a stored test. */
-export function recordOf(row: Row, bends: Pick<Bend, 'type' | 'largestIndication' | 'atCorner'>[]): TestRecord {
-  const exam = row.radiography as ExamRecord | null
-  return {
-    code: row.code as CodeId, edition: row.edition, unit: row.unit as Unit, process: row.process, transfer: row.transfer,
-    form: row.form as 'plate' | 'pipe', weld: row.weld as 'groove' | 'fillet', couponThickness: row.couponThickness,
-    depositThickness: row.depositThickness, layers: row.layers, outsideDiameter: row.outsideDiameter, pNumber: row.pNumber,
-    fNumber: row.fNumber, backing: row.backing, positions: row.positions, visualAccepted: row.visualAccepted, visualNotes: row.visualNotes,
-    examination: row.examination as TestRecord['examination'],
-    bends: bends.map(b => ({ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner })),
-    radiography: exam?.kind === 'radiography' ? { indications: exam.indications } : null,
-    macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,
-  }
-}
-
-/** The columns of a test from its input, with the ranges and bend verdicts the rules give. */
-function columnsOf(input: WelderTestInput) {
-  const { bends, radiography: _r, macro: _m, ...variables } = input
-  const record: TestRecord = { ...variables, bends, radiography: input.radiography, macro: input.macro }
-  const outcome = testOutcome(record)
-  const verdicts = outcome.bend?.specimens ?? []
-  return {
-    values: { ...variables, radiography: examRecordOf(input), ranges: outcome.ranges ?? (outcome.rangesError ? { error: outcome.rangesError } : null) },
-    bends: bends.map((b, i) => ({ ...b, accepted: verdicts[i]?.accepted ?? false })),
-    outcome,
-  }
-}
+export { depositsOf, examRecordOf, recordOf, type StoredDeposit }
 
 async function checkReferences(db: Db, input: WelderTestInput) {
   if (input.testDate > todayIso()) throw fieldFailure('testDate', 'The test date is after today')
@@ -62,6 +23,11 @@ async function checkReferences(db: Db, input: WelderTestInput) {
   if (input.procedureId) {
     const [wps] = await db.select({ id: procedures.id }).from(procedures).where(eq(procedures.id, input.procedureId))
     if (!wps) throw fieldFailure('procedureId', 'No such procedure')
+  }
+  if (input.pqrId) {
+    const [pqr] = await db.select({ id: pqrs.id, welderId: pqrs.welderId }).from(pqrs).where(eq(pqrs.id, input.pqrId))
+    if (!pqr) throw fieldFailure('pqrId', 'No such PQR')
+    if (pqr.welderId !== input.welderId) throw fieldFailure('pqrId', 'This PQR names another welder (or none) as the welder of its coupon')
   }
 }
 
@@ -122,7 +88,7 @@ export async function certifyWelderTest(db: Db, id: number, version: number, sig
       const sha256 = (await contentHash(t, 'welder-test', id))!
       const [signature] = await tx.insert(signatures).values({
         recordType: 'welder-test', recordId: id, recordVersion: updated!.version, signerId: signer.id, signerName: signer.name,
-        meaning: 'certified', sha256, verifyCode: newVerifyCode(),
+        meaning: 'certified', sha256, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       }).returning()
       await recordAudit(t, { accountId: signer.id, action: 'certify', recordType: 'welder-test', recordId: id, before: { status: row.status }, after: { status, sha256, verifyCode: signature!.verifyCode } })
       return { test: updated!, signature: signature! }
@@ -150,6 +116,7 @@ export async function loadWelderTest(db: Db, id: number) {
   const exam = found.test.radiography as ExamRecord | null
   return {
     ...found.test,
+    processes: depositsOf(found.test),
     radiography: exam?.kind === 'radiography' ? { indications: exam.indications, reportNumber: exam.reportNumber } : null,
     macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,
     bends: bends.map(b => ({ type: b.type, largestIndication: b.largestIndication, atCorner: b.atCorner, accepted: b.accepted })),
@@ -180,11 +147,12 @@ export async function listWelderTests(db: Db, user: SessionUser, query: WelderTe
     user.role === 'welder' && eq(welderTests.welderId, user.welderId ?? -1),
     query.welderId && eq(welderTests.welderId, query.welderId),
     query.status && eq(welderTests.status, query.status),
-    query.process && eq(welderTests.process, query.process),
+    // A combination coupon is listed under each of its processes
+    query.process && or(eq(welderTests.process, query.process), arrayContains(welderTests.processes, [query.process])),
     query.q && or(ilike(welders.name, containsPattern(query.q)), ilike(welders.stamp, containsPattern(query.q))),
   ])
   return pageOf(query, ({ limit, offset }) => db.select({
-    id: welderTests.id, testDate: welderTests.testDate, status: welderTests.status, process: welderTests.process,
+    id: welderTests.id, testDate: welderTests.testDate, status: welderTests.status, process: welderTests.process, processes: welderTests.processes,
     transfer: welderTests.transfer, form: welderTests.form, weld: welderTests.weld, positions: welderTests.positions,
     couponThickness: welderTests.couponThickness, outsideDiameter: welderTests.outsideDiameter, unit: welderTests.unit,
     code: welderTests.code, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp,

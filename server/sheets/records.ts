@@ -4,8 +4,9 @@ import {
   accounts, baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, shopSettings,
   signatures, welders, welderTestBends, welderTests,
 } from '../database/schema'
-import { contentHash, type SignedRecordType } from '../database/signing'
+import { contentFormatOf, contentHash, type SignedRecordType } from '../database/signing'
 import type { SheetSignature } from './model'
+import { pqrLayersOf, supportPqrs } from '../database/pqrs'
 
 /** Everything the sheet of one signed record is built from. */
 
@@ -25,8 +26,9 @@ export async function signaturesOf(db: Db, type: SignedRecordType, id: number): 
   const rows = await db.select().from(signatures)
     .where(and(eq(signatures.recordType, type), eq(signatures.recordId, id)))
     .orderBy(asc(signatures.signedAt), asc(signatures.id))
-  const current = (await contentHash(db, type, id)) ?? ''
   const last = rows.at(-1)
+  // Compared with the latest signature, in the content format that signature was made with
+  const current = (await contentHash(db, type, id, contentFormatOf(last?.contentFormat ?? 2))) ?? ''
   return {
     signatures: rows.map(s => ({ meaning: s.meaning, name: s.signerName, at: s.signedAt.toISOString(), version: s.recordVersion })),
     latest: last ? { sha256: last.sha256, verifyCode: last.verifyCode } : null,
@@ -45,6 +47,7 @@ export async function loadProcedure(db: Db, id: number) {
   const fillerCatalogue = await db.select().from(fillerMetals)
   return {
     procedure: row,
+    support: await supportPqrs(db, support.map(s => s.pqrs.id)),
     pqrs: support.map(s => ({ ...s.pqrs, fNumber: s.filler_metals?.fNumber ?? null })),
     supersededBy: later.find(l => l.revision > row.revision && l.status !== 'draft')?.revision ?? null,
     fillerCatalogue,
@@ -57,7 +60,12 @@ export async function loadPqr(db: Db, id: number) {
   const [row] = await db.select().from(pqrs).where(eq(pqrs.id, id))
   if (!row) return null
   const [base] = row.baseMetalId ? await db.select().from(baseMetals).where(eq(baseMetals.id, row.baseMetalId)) : []
-  const [filler] = row.fillerMetalId ? await db.select().from(fillerMetals).where(eq(fillerMetals.id, row.fillerMetalId)) : []
+  const [baseB] = row.baseMetalBId ? await db.select().from(baseMetals).where(eq(baseMetals.id, row.baseMetalBId)) : []
+  const [coupon] = row.welderId ? await db.select({ name: welders.name, stamp: welders.stamp }).from(welders).where(eq(welders.id, row.welderId)) : []
+  const layers = pqrLayersOf(row)
+  const fillerIds = [...new Set([row.fillerMetalId, ...layers.map(l => l.fillerMetalId)].filter((f): f is number => f !== null))]
+  const fillers = fillerIds.length ? await db.select().from(fillerMetals).where(inArray(fillerMetals.id, fillerIds)) : []
+  const filler = fillers.find(f => f.id === row.fillerMetalId)
   const [tensile, bends, supports] = await Promise.all([
     db.select().from(pqrTensileSpecimens).where(eq(pqrTensileSpecimens.pqrId, id)).orderBy(asc(pqrTensileSpecimens.id)),
     db.select().from(pqrBendSpecimens).where(eq(pqrBendSpecimens.pqrId, id)).orderBy(asc(pqrBendSpecimens.id)),
@@ -65,7 +73,11 @@ export async function loadPqr(db: Db, id: number) {
       .innerJoin(procedures, eq(procedures.id, procedurePqrs.procedureId)).where(eq(procedurePqrs.pqrId, id))
       .orderBy(asc(procedures.number), asc(procedures.revision)),
   ])
-  return { pqr: row, base: base ?? null, filler: filler ?? null, tensile, bends, supports, signed: await signaturesOf(db, 'pqr', id) }
+  return {
+    pqr: row, base: base ?? null, baseB: baseB ?? null, welder: coupon ?? null, filler: filler ?? null,
+    layers: layers.map(l => ({ ...l, filler: fillers.find(f => f.id === l.fillerMetalId) ?? null })),
+    tensile, bends, supports, signed: await signaturesOf(db, 'pqr', id),
+  }
 }
 export type PqrRecord = NonNullable<Awaited<ReturnType<typeof loadPqr>>>
 

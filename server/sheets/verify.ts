@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm'
 import type { Db } from '../database/client'
 import { issuedSheets, pqrs, procedures, signatures, welders, welderTests } from '../database/schema'
-import { contentHash, type SignedRecordType } from '../database/signing'
+import { contentFormatOf, contentHash, type SignedRecordType } from '../database/signing'
 import { loadContinuityLog } from './continuity'
 
 export interface Verification {
@@ -47,7 +47,7 @@ async function verifySigned(db: Db, code: string, signature: typeof signatures.$
   if (!head) return null
   const all = await db.select({ meaning: signatures.meaning, name: signatures.signerName, at: signatures.signedAt, version: signatures.recordVersion })
     .from(signatures).where(and(eq(signatures.recordType, type), eq(signatures.recordId, id))).orderBy(asc(signatures.signedAt), asc(signatures.id))
-  const current = await contentHash(db, type, id)
+  const current = await contentHash(db, type, id, contentFormatOf(signature.contentFormat))
   return {
     code, sheet: sheetNames[type], ...head,
     signers: all.filter(s => s.version === signature.recordVersion).map(s => ({ meaning: s.meaning, name: s.name, at: s.at.toISOString() })),

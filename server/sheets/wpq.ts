@@ -1,4 +1,5 @@
-import { qualifiedRangesOf, type WelderTestVariables } from '#shared/qualification/test-ranges'
+import { depositsOf, variablesOf } from '../database/welder-test-columns'
+import { qualifiedRangesOf } from '#shared/qualification/test-ranges'
 import type { Reason, Unit, WelderRangesResult } from '#shared/rules'
 import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { WelderTestRecord } from './records'
@@ -12,7 +13,7 @@ function rangesOf(record: WelderTestRecord): { ranges: Ranges | null, error: str
   const stored = record.test.ranges as (Ranges | { error: string } | null)
   if (stored && !('error' in stored) && Array.isArray(stored.reasons)) return { ranges: stored, error: null, recomputed: false }
   const t = record.test
-  const live = qualifiedRangesOf({ ...t, positions: [...t.positions] } as unknown as WelderTestVariables)
+  const live = qualifiedRangesOf(variablesOf(t))
   if ('error' in live) return { ranges: null, error: String(live.error), recomputed: true }
   return { ranges: live as unknown as Ranges, error: null, recomputed: true }
 }
@@ -23,6 +24,7 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
   const unit = t.unit as Unit
   const asme = t.code === 'asme-ix'
   const k = (clause: string) => (asme ? clause : undefined)
+  const processes = depositsOf(t)
   const blocks: SheetBlock[] = [
     {
       heading: 'Welder',
@@ -37,12 +39,11 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
     {
       heading: 'Test coupon as welded', clause: asme ? 'QW-350' : undefined,
       fields: [
-        { label: 'Process', value: t.process },
-        { label: 'Transfer mode', value: orDash(t.transfer), clause: k('QW-409.2') },
+        { label: 'Processes', value: processes.map(d => `${d.process}${d.transfer ? ` (${d.transfer})` : ''}`).join(' + '), clause: k('QW-355') },
         { label: 'Weld', value: t.weld },
         { label: 'Coupon form', value: t.form },
         { label: 'Coupon thickness', value: length(t.couponThickness, unit) },
-        { label: 'Deposit thickness', value: length(t.depositThickness, unit), clause: k('QW-404.30') },
+        { label: processes.length > 1 ? 'Deposit thickness, all processes' : 'Deposit thickness', value: length(t.depositThickness, unit), clause: k('QW-404.30') },
         { label: 'Layers', value: orDash(t.layers) },
         { label: 'Outside diameter', value: t.form === 'pipe' ? length(t.outsideDiameter, unit) : 'plate', clause: k('QW-403.16') },
         { label: 'Base metal P-No.', value: orDash(t.pNumber), clause: k('QW-403.18') },
@@ -52,6 +53,18 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
         { label: 'Progression', value: orDash(t.progression), clause: k('QW-405.3') },
       ],
     },
+    ...(processes.length > 1
+      ? [{
+        heading: 'Processes on the coupon', clause: k('QW-452.1(b)'),
+        table: {
+          columns: ['Order', 'Process', 'Transfer', `Deposit (${unit})`, `Deposit qualified, max (${unit})`],
+          rows: processes.map((d, i) => [String(i + 1), d.process, orDash(d.transfer), d.depositThickness === null ? dash : String(d.depositThickness),
+            d.error ? `cannot tell: ${printable(d.error)}` : d.depositMax === null || d.depositMax === undefined ? 'maximum to be welded' : length(d.depositMax, unit)]),
+          numeric: [3],
+        },
+        notes: ['Each process qualifies its own deposit; the combination qualifies the sum (QW-452.1(b) and its notes).'],
+      } satisfies SheetBlock]
+      : []),
     resultsBlock(record),
   ]
   if (record.bends.length) {
@@ -68,7 +81,7 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
   const status = t.status
   return {
     kind: 'wpq', kindTitle: 'Welder performance qualification (WPQ)', shopName: shop, number: `WPQ-${t.id}`, revision: null,
-    subtitle: `${printable(record.welder.name)} (${printable(record.welder.stamp)}), ${t.process}, ${list(t.positions)}, tested ${t.testDate}`,
+    subtitle: `${printable(record.welder.name)} (${printable(record.welder.stamp)}), ${processes.map(d => d.process).join(' + ')}, ${list(t.positions)}, tested ${t.testDate}`,
     codeLine: codeLine(t.code, t.edition), unit, status,
     banner: status === 'failed' ? 'FAILED · qualifies nothing' : status === 'recorded' ? 'NOT CERTIFIED' : null,
     blocks, statement: certification(t.code, t.edition, 'coupon'), ...signedParts(record.signed, origin), caution: caution(t.code, t.edition),

@@ -1,27 +1,97 @@
-import { evaluate } from '#shared/rules'
+import { passTable, tungstenProcesses, wireProcesses, type ProcedureLayer } from '#shared/schemas/procedure'
+import { unitLabels } from '#shared/qualification/procedure-units'
 import type { Unit } from '#shared/rules/types'
 import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { ProcedureRecord } from './records'
+import { draftOf, layeredSupport } from '../database/procedures'
 import { caution, codeLine, groupClause, isCode, signedParts } from './common'
-import { dash, length, list, orDash, printable, rangeText, temperature, windowText } from './format'
+import { dash, length, list, orDash, printable, rangeText, temperature, windowText, yesNo } from './format'
 
-type Vars = Record<string, unknown>
-const obj = (v: unknown): Vars => (v && typeof v === 'object' && !Array.isArray(v) ? v as Vars : {})
-const known = ['joints', 'fillers', 'progression', 'preheatMin', 'interpassMax', 'pwht', 'gas', 'electrical', 'technique']
+type Window = { min: number | null, max: number | null, setPoint?: number | null }
 
-/** The WPS: the variables QW-482 asks a procedure to state, the PQRs behind it and whether they support it. */
+const decimals = (n: number) => (String(n).split('.')[1] ?? '').length
+
+/**
+ * A production window as the welder reads it: "18.4 V ± 1.0 V" for a set point with an even trim, "18.4 V (17.9 to 19.4 V)"
+ * for an uneven one, "17 to 19 V" without a set point.
+ */
+export function setPointText(w: Window | null | undefined, unit: string): string {
+  if (!w) return dash
+  const u = unit ? ` ${unit}` : ''
+  const sp = w.setPoint ?? null
+  if (sp === null) return windowText(w, unit)
+  if (w.min === null || w.max === null) return `${sp}${u}${w.min !== null ? `, ${w.min}${u} minimum` : w.max !== null ? `, ${w.max}${u} maximum` : ''}`
+  const low = sp - w.min
+  const high = w.max - sp
+  const places = Math.max(decimals(sp), decimals(w.min), decimals(w.max))
+  if (Math.abs(low - high) < 1e-9) return `${sp.toFixed(Math.max(decimals(sp), 0))}${u} ± ${low.toFixed(places)}${u}`
+  return `${sp}${u} (${w.min} to ${w.max}${u})`
+}
+
+/** The fields of one process layer, the process's own variables only where the process has them. */
+function layerFields(layer: ProcedureLayer, unit: Unit, asme: boolean): SheetField[] {
+  const u = unitLabels(unit)
+  const tungsten = (tungstenProcesses as readonly string[]).includes(layer.process)
+  const wire = (wireProcesses as readonly string[]).includes(layer.process)
+  const fields: SheetField[] = [
+    { label: 'Process and transfer', value: `${layer.process}${layer.transfer ? ` (${layer.transfer})` : ''}`, clause: asme ? 'QW-409.2' : undefined },
+    { label: 'Passes', value: orDash(layer.passes) },
+    {
+      label: 'Filler metals', clause: asme ? 'QW-404.4, QW-404.5' : undefined,
+      value: layer.fillers.length
+        ? layer.fillers.map(f => `${printable(f.specification)} ${printable(f.classification)}, F-No. ${printable(f.fNumber)}${f.aNumber ? `, A-No. ${printable(f.aNumber)}` : ''}, ${f.size === null ? 'size not stated' : `Ø ${length(f.size, unit)}`}`).join('; ')
+        : 'none',
+    },
+    { label: 'Deposit thickness, maximum', value: layer.depositMax === null ? 'not limited here' : length(layer.depositMax, unit), clause: asme ? 'QW-404.30' : undefined },
+    { label: 'Current and polarity', value: layer.current, clause: asme ? 'QW-409.4' : undefined },
+    { label: 'Amperes', value: setPointText(layer.amps, 'A'), clause: asme ? 'QW-409.8' : undefined },
+    { label: 'Volts', value: setPointText(layer.volts, 'V'), clause: asme ? 'QW-409.8' : undefined },
+  ]
+  if (wire || layer.wireFeed.min !== null || layer.wireFeed.max !== null || layer.wireFeed.setPoint !== null) {
+    fields.push({ label: 'Wire feed speed', value: setPointText(layer.wireFeed, u.speed) })
+  }
+  fields.push(
+    { label: 'Travel speed', value: setPointText(layer.travelSpeed, u.speed) },
+    { label: 'Heat input, maximum', value: layer.heatInputMax === null ? 'not limited' : `${layer.heatInputMax} ${u.heat}`, clause: asme ? 'QW-409.1' : undefined },
+  )
+  if (wire) fields.push({ label: 'Contact tip to work distance', value: setPointText(layer.ctwd, u.length) })
+  fields.push(
+    { label: 'Shielding gas and flow', value: layer.gas.composition ? `${printable(layer.gas.composition)}${layer.gas.flow.min !== null || layer.gas.flow.max !== null || layer.gas.flow.setPoint !== null ? `, ${setPointText(layer.gas.flow, u.flow)}` : ''}` : 'none', clause: asme ? 'QW-408.2' : undefined },
+    { label: 'Bead', value: orDash(layer.bead), clause: asme ? 'QW-410.1' : undefined },
+  )
+  if (layer.pulsing) fields.push({ label: 'Pulsing', value: 'pulsed current', clause: asme ? 'QW-409.29' : undefined })
+  if (layer.oscillation) fields.push({ label: 'Oscillation', value: printable(layer.oscillation), clause: asme ? 'QW-410.7' : undefined })
+  fields.push({ label: 'Electrodes', value: layer.electrodes, clause: asme ? 'QW-410.10' : undefined })
+  if (layer.passesPerSide) fields.push({ label: 'Passes per side', value: layer.passesPerSide, clause: asme ? 'QW-410.9' : undefined })
+  if (layer.backGouging) fields.push({ label: 'Back gouging', value: 'yes', clause: asme ? 'QW-410.6' : undefined })
+  if (tungsten) {
+    fields.push(
+      { label: 'Filler added', value: yesNo(layer.fillerAdded) },
+      { label: 'Tungsten electrode', value: layer.tungsten.type || layer.tungsten.size !== null ? `${orDash(layer.tungsten.type)}${layer.tungsten.size !== null ? `, Ø ${length(layer.tungsten.size, unit)}` : ''}` : dash, clause: asme ? 'QW-409.12' : undefined },
+      { label: 'Backing gas and flow', value: layer.backingGas.composition ? `${printable(layer.backingGas.composition)}${layer.backingGas.flow.min !== null || layer.backingGas.flow.max !== null || layer.backingGas.flow.setPoint !== null ? `, ${setPointText(layer.backingGas.flow, u.flow)}` : ''}` : 'none', clause: asme ? 'QW-408.5' : undefined },
+      { label: 'Consumable insert', value: layer.consumableInsert ? printable(layer.consumableInsert) : 'none', clause: asme ? 'QW-402.10' : undefined },
+    )
+  }
+  if (layer.process === 'SAW') {
+    fields.push({ label: 'Flux and electrode–flux class', value: `${orDash(layer.flux.name)}, ${orDash(layer.flux.classification)}`, clause: asme ? 'QW-404.9' : undefined })
+  }
+  return fields
+}
+
+/** The WPS: the variables QW-482 asks a procedure to state, layer by layer, the pass table, and whether its PQRs support it. */
 export function wpsSheet(record: ProcedureRecord, shop: string, origin: string): SheetModel {
   const p = record.procedure
   const unit = p.unit as Unit
-  const v = obj(p.variables)
+  const u = unitLabels(unit)
+  const draft = draftOf(p, record.pqrs.map(q => q.id))
   const c = (g: Parameters<typeof groupClause>[1]) => groupClause(p.code, g)
-  const joints = obj(v.joints)
-  const gas = obj(v.gas)
-  const el = obj(v.electrical)
-  const tech = obj(v.technique)
-  const fillers = Array.isArray(v.fillers) ? v.fillers.map(obj) : []
-  const speedUnit = unit === 'in' ? 'in/min' : 'mm/min'
   const asme = p.code === 'asme-ix'
+  const side = (s: typeof draft.baseMetals.a) => `P-No. ${printable(s.pNumber)}${s.groupNumber ? ` Group ${s.groupNumber}` : ''}`
+  const t = draft.pwht.temperature
+  const note = draft.pwht.note ? ` (${printable(draft.pwht.note)})` : ''
+  const pwhtText = !draft.pwht.required
+    ? `none${note}`
+    : `${t.min ?? dash} to ${t.max ?? dash} ${u.temperature}, held ${draft.pwht.holdHours ?? dash} h${note}`
 
   const blocks: SheetBlock[] = [
     {
@@ -29,8 +99,7 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
       fields: [
         { label: 'Title', value: printable(p.title) },
         { label: 'Code', value: codeLine(p.code, p.edition) },
-        { label: 'Process', value: p.process },
-        { label: 'Transfer mode', value: orDash(p.transfer), clause: asme ? 'QW-409.2' : undefined },
+        { label: 'Processes', value: draft.layers.map(l => `${l.process}${l.transfer ? ` (${l.transfer})` : ''} ${printable(l.name)}`).join(' + ') },
         { label: 'Units', value: unit === 'in' ? 'inch, °F' : 'millimetre, °C' },
         { label: 'Supporting PQRs', value: list(record.pqrs.map(q => `${q.number} (tested ${q.testDate}, ${q.status})`)) },
       ],
@@ -38,78 +107,58 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
     {
       heading: 'Joints', clause: c('joints'),
       fields: [
-        { label: 'Joint type', value: orDash(joints.type) },
-        { label: 'Groove design', value: orDash(joints.groove) },
-        { label: 'Backing', value: orDash(joints.backing), clause: asme ? 'QW-402.4' : undefined },
+        { label: 'Joint type', value: orDash(draft.joints.type) },
+        { label: 'Groove design', value: orDash(draft.joints.groove) },
+        { label: 'Groove angle', value: draft.joints.grooveAngle === null ? dash : `${draft.joints.grooveAngle}°` },
+        { label: 'Root opening', value: draft.joints.rootOpening.min === null && draft.joints.rootOpening.max === null ? dash : rangeText(draft.joints.rootOpening, unit), clause: asme ? 'QW-402.1' : undefined },
+        { label: 'Root face', value: draft.joints.rootFace.min === null && draft.joints.rootFace.max === null ? dash : rangeText(draft.joints.rootFace, unit) },
+        { label: 'Backing', value: orDash(draft.joints.backing), clause: asme ? 'QW-402.4' : undefined },
       ],
     },
     {
       heading: 'Base metals', clause: c('base'),
       fields: [
-        { label: 'P-No. to P-No.', value: `P-No. ${orDash(p.pNumberA)} to P-No. ${orDash(p.pNumberB)}`, clause: asme ? 'QW-403.11' : undefined },
+        { label: 'Base metal A to base metal B', value: `${side(draft.baseMetals.a)} to ${side(draft.baseMetals.b)}`, clause: asme ? 'QW-403.11' : undefined },
         { label: 'Base metal thickness', value: rangeText({ min: p.thicknessMin, max: p.thicknessMax }, unit), clause: asme ? 'QW-403.8' : undefined },
         { label: 'Pipe outside diameter', value: p.diameterMin === null ? 'all diameters' : `${length(p.diameterMin, unit)} and over` },
       ],
     },
     {
-      heading: 'Filler metals', clause: c('filler'),
-      fields: [{ label: 'F-No.', value: list(p.fNumbers), clause: asme ? 'QW-404.4' : undefined }],
-      table: fillers.length
-        ? {
-            columns: ['Specification (SFA)', 'Classification', 'F-No.', 'A-No.', 'Size'],
-            rows: fillers.map((f) => {
-              const found = record.fillerCatalogue.find(x => x.specification === f.specification && x.classification === f.classification)
-              return [orDash(f.specification), orDash(f.classification), orDash(found?.fNumber), orDash(found?.aNumber), orDash(f.size)]
-            }),
-          }
-        : undefined,
-    },
-    {
       heading: 'Positions', clause: c('positions'),
       fields: [
         { label: 'Positions', value: list(p.positions) },
-        { label: 'Progression (vertical)', value: orDash(v.progression), clause: asme ? 'QW-405.3' : undefined },
+        { label: 'Progression (vertical)', value: orDash(draft.progression), clause: asme ? 'QW-405.3' : undefined },
       ],
     },
     {
-      heading: 'Preheat and interpass', clause: c('preheat'),
+      heading: 'Preheat, interpass, PWHT', clause: asme ? 'QW-406, QW-407' : undefined,
       fields: [
-        { label: 'Preheat, minimum', value: temperature(v.preheatMin as number | null, unit), clause: asme ? 'QW-406.1' : undefined },
-        { label: 'Interpass, maximum', value: temperature(v.interpassMax as number | null, unit), clause: asme ? 'QW-406.3' : undefined },
+        { label: 'Preheat, minimum', value: temperature(draft.preheatMin, unit), clause: asme ? 'QW-406.1' : undefined },
+        { label: 'Interpass, maximum', value: temperature(draft.interpassMax, unit), clause: asme ? 'QW-406.3' : undefined },
+        { label: 'PWHT', value: pwhtText, clause: asme ? 'QW-407.1' : undefined },
       ],
     },
-    { heading: 'Postweld heat treatment', clause: c('pwht'), fields: [{ label: 'PWHT', value: orDash(v.pwht), clause: asme ? 'QW-407.1' : undefined }] },
+    ...draft.layers.map((layer, i): SheetBlock => ({
+      heading: `Layer ${i + 1} of ${draft.layers.length}: ${printable(layer.name)}, ${layer.process}`, clause: asme ? 'QW-404, QW-408 to QW-410' : undefined,
+      fields: layerFields(layer, unit, asme),
+    })),
     {
-      heading: 'Shielding gas', clause: c('gas'),
-      fields: [
-        { label: 'Composition', value: orDash(gas.composition), clause: asme ? 'QW-408.2' : undefined },
-        { label: 'Flow rate', value: gas.flow ? windowText(gas.flow, unit === 'in' ? 'ft³/h' : 'l/min') : dash },
-      ],
+      heading: 'Pass table', clause: c('electrical'),
+      table: {
+        columns: ['Layer (passes)', 'Process', 'Filler', `Ø (${u.length})`, 'Polarity', 'Amps or WFS', 'Volts', `Travel (${u.speed})`, `Heat input max (${u.heat})`],
+        rows: passTable(draft).map(r => [
+          `${printable(r.layer)}${r.passes ? ` (${printable(r.passes)})` : ''}`, `${r.process}${r.transfer ? ` ${r.transfer}` : ''}`, orDash(r.filler),
+          r.diameter === null ? dash : length(r.diameter, unit).replace(/ (in|mm)$/, ''), r.current,
+          r.wireFeed.min !== null || r.wireFeed.setPoint !== null ? setPointText(r.wireFeed, u.speed) : setPointText(r.amps, 'A'),
+          setPointText(r.volts, 'V'), windowText(r.travelSpeed), r.heatInputMax === null ? dash : String(r.heatInputMax),
+        ]),
+        numeric: [3, 8],
+        widths: ['*', 44, 58, 34, 40, 78, 62, 52, 46],
+      },
     },
-    {
-      heading: 'Electrical characteristics', clause: c('electrical'),
-      fields: [
-        { label: 'Current and polarity', value: orDash(el.current), clause: asme ? 'QW-409.4' : undefined },
-        { label: 'Amperes', value: windowText(el.amps, 'A') },
-        { label: 'Volts', value: windowText(el.volts, 'V') },
-        { label: 'Wire feed speed', value: el.wireFeed ? windowText(el.wireFeed, unit === 'in' ? 'in/min' : 'm/min') : dash },
-        { label: 'Travel speed', value: windowText(el.travelSpeed, speedUnit) },
-        { label: 'Heat input, maximum', value: el.heatInputMax ? `${el.heatInputMax} ${unit === 'in' ? 'J/in' : 'J/mm'}` : 'not limited', clause: asme ? 'QW-409.1' : undefined },
-      ],
-    },
-    {
-      heading: 'Technique', clause: c('technique'),
-      fields: [
-        { label: 'Bead', value: orDash(tech.bead), clause: asme ? 'QW-410.1' : undefined },
-        { label: 'Contact tip to work distance', value: tech.ctwd ? windowText(tech.ctwd, unit) : dash },
-        { label: 'Cleaning', value: orDash(tech.cleaning), clause: asme ? 'QW-410.5' : undefined },
-      ],
-    },
+    { heading: 'Technique', clause: c('technique'), fields: [{ label: 'Cleaning', value: orDash(draft.cleaning), clause: asme ? 'QW-410.5' : undefined }] },
+    supportBlock(record, draft),
   ]
-  const others: SheetField[] = Object.entries(v).filter(([k]) => !known.includes(k))
-    .map(([k, value]) => ({ label: printable(k), value: typeof value === 'object' ? windowText(value) : orDash(value) }))
-  if (others.length) blocks.push({ heading: 'Other variables', fields: others })
-  blocks.push(supportBlock(record))
 
   const signed = signedParts(record.signed, origin)
   const status = p.status === 'superseded' && record.supersededBy !== null ? `superseded by rev. ${record.supersededBy}` : p.status
@@ -121,35 +170,24 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
   }
 }
 
-/** Whether the WPS stays inside what its PQRs qualify, variable by variable (the rules' wps-support check). */
-function supportBlock(record: ProcedureRecord): SheetBlock {
+/** Whether each layer of the WPS stays inside what its PQRs qualify, variable by variable, with the clause. */
+function supportBlock(record: ProcedureRecord, draft: ReturnType<typeof draftOf>): SheetBlock {
   const p = record.procedure
   const heading = 'Qualified by the supporting PQRs'
   if (!isCode(p.code) || !record.pqrs.length) return { heading, notes: ['No supporting PQR is recorded for this WPS.'] }
-  const fNumber = Number(p.fNumbers[0])
-  const result = evaluate({
-    code: p.code, check: 'wps-support', unit: p.unit, edition: p.edition,
-    input: {
-      wps: {
-        process: p.process, ...(p.transfer ? { transfer: p.transfer } : {}),
-        thickness: { min: p.thicknessMin, max: p.thicknessMax },
-        ...(Number.isInteger(fNumber) && fNumber > 0 ? { fNumber } : {}),
-      },
-      pqrs: record.pqrs.map((q) => {
-        const f = Number(q.fNumber)
-        return {
-          id: q.number, process: q.process, ...(q.transfer ? { transfer: q.transfer } : {}), couponThickness: q.couponThickness,
-          ...(q.depositThickness ? { depositThickness: q.depositThickness } : {}), toughness: q.toughnessRequired,
-          ...(Number.isInteger(f) && f > 0 ? { fNumber: f } : {}),
-        }
-      }),
-    },
-  })
-  if ('error' in result) return { heading, notes: [`The rules could not check this WPS against its PQRs: ${result.error}`] }
-  const reasons = result.reasons as { clause: string, text: string, met?: boolean }[]
+  const check = layeredSupport(draft, record.support)
+  const notes = [
+    ...check.blockers,
+    check.rulesMissing
+      ? 'The support rules of this code are not carried here: the ranges were checked by hand.'
+      : !check.checked
+          ? 'Not checked: the rules could not compare this WPS with its PQRs.'
+          : check.supported
+            ? 'Every variable checked lies within what the PQRs qualify; variables not listed were not checked.'
+            : 'At least one variable lies outside what the PQRs qualify (marked "not met").',
+  ]
   return {
-    heading,
-    notes: [result.supported ? 'Every variable checked lies within what the PQRs qualify.' : 'At least one variable lies outside what the PQRs qualify (marked "outside").'],
-    table: { columns: ['Clause', 'Finding', 'Result'], rows: reasons.map(r => [r.clause, r.text, r.met === false ? 'outside' : 'within']), widths: [90, '*', 48] },
+    heading, notes,
+    table: { columns: ['Clause', 'Finding', 'Result'], rows: check.findings.map(f => [f.clause, printable(f.text), f.met ? 'met' : 'not met']), widths: [90, '*', 48] },
   }
 }

@@ -9,18 +9,37 @@ export function unitLabels(unit: Unit) {
 
 export type Dimension = 'length' | 'speed' | 'flow' | 'heat' | 'temperature'
 
-/** Every numeric path of a WPS draft that carries a unit, with its dimension. */
+const window3 = (p: string, d: Dimension) => ['min', 'max', 'setPoint'].map(k => [`${p}.${k}`, d] as [string, Dimension])
+
+/** Every numeric path of a WPS draft outside its layers that carries a unit, with its dimension. */
 export const unitPaths: [string, Dimension][] = [
   ...['thickness.groove', 'thickness.fillet', 'diameter', 'joints.rootOpening', 'joints.rootFace']
     .flatMap(p => [[`${p}.min`, 'length'], [`${p}.max`, 'length']] as [string, Dimension][]),
-  ['depositMax', 'length'],
-  ...['min', 'max', 'setPoint'].map(k => [`technique.ctwd.${k}`, 'length'] as [string, Dimension]),
-  ...['electrical.wireFeed', 'electrical.travelSpeed'].flatMap(p => ['min', 'max', 'setPoint'].map(k => [`${p}.${k}`, 'speed'] as [string, Dimension])),
-  ...['min', 'max', 'setPoint'].map(k => [`gas.flow.${k}`, 'flow'] as [string, Dimension]),
-  ['electrical.heatInputMax', 'heat'],
   ['preheatMin', 'temperature'],
   ['interpassMax', 'temperature'],
+  ['pwht.temperature.min', 'temperature'],
+  ['pwht.temperature.max', 'temperature'],
 ]
+
+/** The numeric paths of one process layer that carry a unit, relative to the layer. */
+export const layerUnitPaths: [string, Dimension][] = [
+  ['depositMax', 'length'], ['tungsten.size', 'length'],
+  ...window3('ctwd', 'length'), ...window3('wireFeed', 'speed'), ...window3('travelSpeed', 'speed'),
+  ...window3('gas.flow', 'flow'), ...window3('backingGas.flow', 'flow'),
+  ['heatInputMax', 'heat'],
+]
+
+/** Every unit-carrying path of a draft, its layers and their fillers' sizes included. */
+export function unitPathsOf(draft: { layers?: { fillers?: unknown[] }[] }): [string, Dimension][] {
+  const layers = Array.isArray(draft.layers) ? draft.layers : []
+  return [
+    ...unitPaths,
+    ...layers.flatMap((layer, i) => [
+      ...layerUnitPaths.map(([p, d]) => [`layers.${i}.${p}`, d] as [string, Dimension]),
+      ...(Array.isArray(layer?.fillers) ? layer.fillers : []).map((_, j) => [`layers.${i}.fillers.${j}.size`, 'length'] as [string, Dimension]),
+    ]),
+  ]
+}
 
 // 1 in = 25.4 mm and 1 ft³ = 28.316846592 L, both exact by definition.
 const FT3_PER_H_IN_L_PER_MIN = 28.316846592 / 60
@@ -59,7 +78,7 @@ function setPath(tree: Tree, path: string, value: unknown) {
 /** A copy of the draft in the other unit system; values left empty stay empty. */
 export function convertDraft<T extends Tree>(draft: T, from: Unit, to: Unit): T {
   const copy = structuredClone(draft) as Tree
-  for (const [path, dimension] of unitPaths) {
+  for (const [path, dimension] of unitPathsOf(copy as { layers?: { fillers?: unknown[] }[] })) {
     const value = getPath(copy, path)
     if (typeof value === 'number' && Number.isFinite(value)) setPath(copy, path, convertValue(value, dimension, from, to))
   }

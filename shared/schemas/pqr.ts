@@ -11,7 +11,26 @@ export { pqrStatuses } from '../vocabulary/records'
 export const breakLocations = ['base metal', 'weld metal', 'heat-affected zone', 'fusion line'] as const
 export const pqrBendTypes = ['face', 'root', 'side', 'longitudinal-face', 'longitudinal-root'] as const
 
+/** The conditions of the whole coupon as welded (position, progression, temperatures, PWHT). */
 export const pqrActualsSchema = z.object({
+  position: optionalText('Test position', 10),
+  progression: z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'Progression is uphill or downhill' }) }).nullable().default(null),
+  preheat: optionalNumber('Preheat', { min: -100, max: 2000 }),
+  interpass: optionalNumber('Interpass', { max: 2000 }),
+  pwht: optionalText('PWHT', 120),
+  pwhtTemperature: optionalNumber('PWHT temperature', { max: 2000 }),
+  pwhtHours: optionalNumber('PWHT time', { positive: true, max: 1000 }),
+}).partial()
+export type PqrActuals = z.infer<typeof pqrActualsSchema>
+
+/** One layer of the coupon as welded: its process, filler, the values actually used and the deposit of the process. */
+export const pqrLayerSchema = z.object({
+  name: requiredText('the layer (root, fill, cap...)', 40),
+  process: processSchema,
+  transfer: transferIdSchema.nullable().default(null),
+  fillerMetalId: pickedId('the filler metal').nullable().default(null),
+  fillerSize: optionalNumber('Filler size', { positive: true, max: 100 }),
+  depositThickness: optionalNumber('Deposit thickness', { positive: true }),
   current: z.enum(['DCEP', 'DCEN', 'AC'], { errorMap: () => ({ message: 'Pick DCEP, DCEN or AC' }) }).nullable().default(null),
   amps: optionalNumber('Current', { positive: true }),
   volts: optionalNumber('Voltage', { positive: true }),
@@ -21,14 +40,15 @@ export const pqrActualsSchema = z.object({
   gas: optionalText('Gas', 80),
   gasFlow: optionalNumber('Gas flow', { positive: true }),
   ctwd: optionalNumber('Contact-tip-to-work distance', { positive: true }),
-  position: optionalText('Test position', 10),
-  progression: z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'Progression is uphill or downhill' }) }).nullable().default(null),
-  preheat: optionalNumber('Preheat', { min: -100, max: 2000 }),
-  interpass: optionalNumber('Interpass', { max: 2000 }),
-  pwht: optionalText('PWHT', 120),
-  fillerSize: optionalText('Filler size', 40),
-}).partial()
-export type PqrActuals = z.infer<typeof pqrActualsSchema>
+  tungsten: optionalText('Tungsten type and size', 40),
+  backingGas: optionalText('Backing gas', 80),
+  flux: optionalText('Flux and electrode–flux class', 80),
+}).superRefine((v, ctx) => {
+  if (v.process === 'GMAW' && !v.transfer) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'Pick the GMAW transfer mode' })
+  if (v.transfer && v.process !== 'GMAW' && v.process !== 'FCAW') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'A transfer mode is stated for GMAW and FCAW only' })
+  if (v.fillerMetalId === null && v.process !== 'GTAW' && v.process !== 'PAW') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['fillerMetalId'], message: 'Pick the filler metal' })
+})
+export type PqrLayer = z.infer<typeof pqrLayerSchema>
 
 export const pqrDraftSchema = z.object({
   number: requiredText('the PQR number', 40).regex(/^[A-Za-z0-9][A-Za-z0-9 ._/-]*$/, 'Letters, digits, space, . _ / - only'),
@@ -36,23 +56,44 @@ export const pqrDraftSchema = z.object({
   code: codeIdSchema,
   edition: editionSchema,
   unit: unitIdSchema,
-  process: processSchema,
-  transfer: transferIdSchema.nullable().default(null),
   couponThickness: requiredNumber('the coupon thickness', { positive: true }),
-  depositThickness: optionalNumber('Deposit thickness', { positive: true }),
   baseMetalId: pickedId('the base metal'),
-  fillerMetalId: pickedId('the filler metal'),
+  /** Base metal B of a dissimilar joint; null when both sides are base metal A */
+  baseMetalBId: pickedId('base metal B').nullable().default(null),
+  /** The welder who welded the coupon (QW-301.2) */
+  welderId: pickedId('the welder').nullable().default(null),
   toughnessRequired: z.boolean().default(false),
   actuals: pqrActualsSchema.default({}),
+  layers: z.array(pqrLayerSchema).min(1, 'Add at least one layer').max(6, 'At most 6 layers'),
   labReportNumber: optionalText('Lab report number', 60),
 }).superRefine((v, ctx) => {
-  if (v.depositThickness !== null && v.depositThickness > v.couponThickness) {
-    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['depositThickness'], message: 'The deposit cannot be thicker than the coupon' })
+  const deposits = v.layers.map(l => l.depositThickness)
+  if (deposits.every(d => d !== null) && deposits.reduce((a, b) => a! + b!, 0)! > v.couponThickness * (1 + 1e-9)) {
+    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['layers'], message: 'The deposits together cannot be thicker than the coupon' })
   }
-  if (v.process === 'GMAW' && !v.transfer) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'Pick the GMAW transfer mode' })
+  v.layers.forEach((l, i) => {
+    if (l.depositThickness !== null && l.depositThickness > v.couponThickness) {
+      ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['layers', i, 'depositThickness'], message: 'The deposit cannot be thicker than the coupon' })
+    }
+  })
 })
 export type PqrDraft = z.infer<typeof pqrDraftSchema>
 export type PqrDraftInput = z.input<typeof pqrDraftSchema>
+
+/** A blank layer of the coupon. */
+export function blankPqrLayer(process: PqrLayer['process'] = 'SMAW', name = 'all passes'): PqrLayer {
+  return {
+    name, process, transfer: process === 'GMAW' ? 'short-circuit' : null, fillerMetalId: null, fillerSize: null, depositThickness: null,
+    current: null, amps: null, volts: null, wireFeed: null, travelSpeed: null, heatInput: null, gas: null, gasFlow: null, ctwd: null,
+    tungsten: null, backingGas: null, flux: null,
+  }
+}
+
+/** The total deposit of a coupon: the sum of its processes' deposits, or null when one is not given. */
+export function totalDeposit(layers: Pick<PqrLayer, 'depositThickness'>[]): number | null {
+  if (!layers.length || layers.some(l => l.depositThickness === null)) return null
+  return Math.round(layers.reduce((sum, l) => sum + l.depositThickness!, 0) * 1e9) / 1e9
+}
 
 export const pqrPatchSchema = z.object({ version: versionSchema, pqr: pqrDraftSchema }).strict()
 

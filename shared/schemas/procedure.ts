@@ -30,8 +30,74 @@ export const procedureFillerSchema = z.object({
   classification: requiredText('the classification (e.g. ER70S-6)', 30),
   fNumber: requiredText('the F-No.', 8),
   aNumber: optionalText('A-No.', 8),
-  size: optionalText('Size', 40),
+  /** Diameter in the record's unit (in or mm) */
+  size: optionalNumber('Filler size', { positive: true, max: 100 }),
 })
+export type ProcedureFiller = z.infer<typeof procedureFillerSchema>
+
+/** Processes that weld with a non-consumable tungsten electrode (tungsten, filler added or not, consumable insert). */
+export const tungstenProcesses = ['GTAW', 'PAW'] as const
+/** Processes fed by a wire whose speed sets the current (wire feed speed, contact tip). */
+export const wireProcesses = ['GMAW', 'FCAW', 'SAW', 'EGW', 'ESW'] as const
+export const layerNameSuggestions = ['root', 'hot pass', 'fill', 'cap', 'all passes', 'back weld'] as const
+
+/**
+ * One process layer of a WPS, in welding order (root, hot pass, fill, cap...): its process, fillers, deposit limit,
+ * current and electrical window, and the process's own variables (ASME IX QW-250 lists them per process).
+ */
+export const procedureLayerSchema = z.object({
+  name: requiredText('the layer (root, hot pass, fill, cap)', 40),
+  passes: optionalText('Passes', 20),
+  process: processSchema,
+  transfer: transferIdSchema.nullable().default(null),
+  fillers: z.array(procedureFillerSchema).max(4, 'At most 4 filler metals a layer'),
+  fillerAdded: z.boolean().nullable().default(null),
+  depositMax: optionalNumber('Deposit thickness maximum', { positive: true }),
+  current: z.enum(currentTypes, { errorMap: () => ({ message: 'Pick DCEP, DCEN or AC' }) }),
+  amps: windowOf('Current'),
+  volts: windowOf('Voltage'),
+  wireFeed: windowOf('Wire feed speed'),
+  travelSpeed: windowOf('Travel speed'),
+  heatInputMax: optionalNumber('Heat input limit', { positive: true, max: 1_000_000 }),
+  ctwd: windowOf('Contact-tip-to-work distance'),
+  gas: z.object({ composition: optionalText('Gas composition', 120), flow: windowOf('Gas flow') }),
+  bead: requiredText('stringer or weave', 120),
+  pulsing: z.boolean().default(false),
+  oscillation: optionalText('Oscillation', 120),
+  electrodes: z.enum(['single', 'multiple'], { errorMap: () => ({ message: 'Single or multiple electrodes' }) }).default('single'),
+  passesPerSide: z.enum(['single', 'multiple'], { errorMap: () => ({ message: 'Single or multiple passes per side' }) }).nullable().default(null),
+  backGouging: z.boolean().default(false),
+  tungsten: z.object({ type: optionalText('Tungsten type', 30), size: optionalNumber('Tungsten size', { positive: true, max: 100 }) }),
+  backingGas: z.object({ composition: optionalText('Backing gas', 120), flow: windowOf('Backing gas flow') }),
+  consumableInsert: optionalText('Consumable insert', 60),
+  flux: z.object({ name: optionalText('Flux', 60), classification: optionalText('Electrode–flux classification', 40) }),
+}).superRefine((v, ctx) => {
+  const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: z.ZodIssueCode.custom, path, message })
+  const tungsten = (tungstenProcesses as readonly string[]).includes(v.process)
+  if (v.transfer && v.process !== 'GMAW' && v.process !== 'FCAW') issue(['transfer'], 'A transfer mode is stated for GMAW and FCAW only')
+  if (v.process === 'GMAW' && !v.transfer) issue(['transfer'], 'Pick the GMAW transfer mode')
+  if (!v.fillers.length && !(tungsten && v.fillerAdded === false)) issue(['fillers'], 'Add at least one filler metal (or say no filler is added, GTAW)')
+  if (v.fillerAdded === false && v.fillers.length) issue(['fillerAdded'], 'Fillers are listed: filler is added')
+  if (!tungsten && v.fillerAdded !== null) issue(['fillerAdded'], 'Filler added or not is stated for GTAW and PAW')
+  if (!tungsten && (v.tungsten.type || v.tungsten.size !== null)) issue(['tungsten', 'type'], 'A tungsten electrode belongs to GTAW or PAW')
+  if (!tungsten && v.consumableInsert) issue(['consumableInsert'], 'A consumable insert belongs to GTAW or PAW')
+  if (v.process !== 'SAW' && (v.flux.name || v.flux.classification)) issue(['flux', 'name'], 'A flux belongs to SAW')
+})
+export type ProcedureLayer = z.infer<typeof procedureLayerSchema>
+
+/** PWHT: none, or a temperature range held for a time (hours). */
+export const pwhtSchema = z.object({
+  required: z.boolean().default(false),
+  temperature: rangeOf('PWHT temperature'),
+  holdHours: optionalNumber('PWHT time', { positive: true, max: 1000 }),
+  note: optionalText('PWHT note', 200),
+}).superRefine((v, ctx) => {
+  if (v.required && (v.temperature.min === null || v.temperature.max === null)) {
+    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['temperature', 'max'], message: 'Give the PWHT temperature range' })
+  }
+  if (v.required && v.holdHours === null) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['holdHours'], message: 'Give the PWHT time' })
+})
+export type Pwht = z.infer<typeof pwhtSchema>
 
 export const procedureDraftSchema = z.object({
   number: requiredText('the WPS number', 40).regex(/^[A-Za-z0-9][A-Za-z0-9 ._/-]*$/, 'Letters, digits, space, . _ / - only'),
@@ -39,12 +105,9 @@ export const procedureDraftSchema = z.object({
   code: codeIdSchema,
   edition: editionSchema,
   unit: unitIdSchema,
-  process: processSchema,
-  transfer: transferIdSchema.nullable().default(null),
   supportingPqrIds: z.array(idSchema).max(10, 'At most 10 supporting PQRs').default([]),
   baseMetals: z.object({ a: baseMetalSide('A'), b: baseMetalSide('B') }),
   thickness: z.object({ groove: rangeOf('Groove thickness'), fillet: rangeOf('Fillet thickness') }),
-  depositMax: optionalNumber('Deposit thickness maximum', { positive: true }),
   diameter: rangeOf('Pipe diameter'),
   joints: z.object({
     type: requiredText('the joint type (butt, tee, lap...)', 120),
@@ -54,32 +117,15 @@ export const procedureDraftSchema = z.object({
     rootFace: rangeOf('Root face'),
     backing: optionalText('Backing', 120),
   }),
-  fillers: z.array(procedureFillerSchema).min(1, 'Add at least one filler metal').max(6, 'At most 6 filler metals'),
   positions: z.array(z.enum(positionLetters, { errorMap: () => ({ message: 'Positions are F, H, V or O' }) })).min(1, 'Pick at least one position'),
   progression: z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'Progression is uphill or downhill' }) }).nullable().default(null),
   toughnessRequired: z.boolean().default(false),
   preheatMin: optionalNumber('Preheat minimum', { min: -100, max: 2000 }),
   interpassMax: optionalNumber('Interpass maximum', { max: 2000 }),
-  pwht: requiredText('the PWHT (or "none")', 200),
-  gas: z.object({ composition: optionalText('Gas composition', 120), flow: windowOf('Gas flow') }),
-  electrical: z.object({
-    current: z.enum(currentTypes, { errorMap: () => ({ message: 'Pick DCEP, DCEN or AC' }) }),
-    amps: windowOf('Current'),
-    volts: windowOf('Voltage'),
-    wireFeed: windowOf('Wire feed speed'),
-    travelSpeed: windowOf('Travel speed'),
-    heatInputMax: optionalNumber('Heat input limit', { positive: true, max: 1_000_000 }),
-  }),
-  technique: z.object({
-    bead: requiredText('stringer or weave', 120),
-    ctwd: windowOf('Contact-tip-to-work distance'),
-    cleaning: optionalText('Cleaning', 200),
-  }),
+  pwht: pwhtSchema,
+  cleaning: optionalText('Cleaning', 200),
+  layers: z.array(procedureLayerSchema).min(1, 'Add at least one process layer').max(8, 'At most 8 layers'),
 }).superRefine((v, ctx) => {
-  if (v.process !== 'GMAW' && v.transfer && v.process !== 'FCAW') {
-    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'A transfer mode is stated for GMAW and FCAW only' })
-  }
-  if (v.process === 'GMAW' && !v.transfer) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'Pick the GMAW transfer mode' })
   if (v.thickness.groove.min === null || v.thickness.groove.max === null) {
     ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['thickness', 'groove', 'max'], message: 'Give the groove thickness range, minimum and maximum' })
   }
@@ -96,25 +142,70 @@ export type ProcedurePatch = z.infer<typeof procedurePatchSchema>
 
 export const procedureListQueryKeys = ['number', 'title', 'process', 'status', 'updatedAt'] as const
 
-/** The variables kept in the `variables` column (everything without its own searchable column). */
-export type ProcedureVariables = Omit<ProcedureDraft, 'number' | 'title' | 'code' | 'edition' | 'unit' | 'process' | 'transfer' | 'supportingPqrIds'>
+/** The variables kept in the `variables` column (everything without its own column; the layers have theirs). */
+export type ProcedureVariables = Omit<ProcedureDraft, 'number' | 'title' | 'code' | 'edition' | 'unit' | 'supportingPqrIds' | 'layers'>
 
-const emptyRange = { min: null, max: null }
-const emptyWindow = { min: null, max: null, setPoint: null }
+/** The processes of a draft in layer order, each once. */
+export function processesOf(draft: Pick<ProcedureDraft, 'layers'>): string[] {
+  return [...new Set(draft.layers.map(l => l.process))]
+}
+
+const emptyRange = () => ({ min: null, max: null })
+const emptyWindow = () => ({ min: null, max: null, setPoint: null })
+
+/** A blank filler row. */
+export function blankFiller(): ProcedureFiller {
+  return { fillerMetalId: null, specification: '', classification: '', fNumber: '', aNumber: null, size: null }
+}
+
+/** A blank layer of a process. */
+export function blankLayer(process: ProcedureLayer['process'] = 'GMAW', name = 'all passes'): ProcedureLayer {
+  return {
+    name, passes: null, process, transfer: process === 'GMAW' ? 'short-circuit' : null, fillers: [blankFiller()],
+    fillerAdded: (tungstenProcesses as readonly string[]).includes(process) ? true : null, depositMax: null,
+    current: process === 'GTAW' ? 'DCEN' : 'DCEP', amps: emptyWindow(), volts: emptyWindow(), wireFeed: emptyWindow(), travelSpeed: emptyWindow(),
+    heatInputMax: null, ctwd: emptyWindow(), gas: { composition: null, flow: emptyWindow() }, bead: 'stringer', pulsing: false, oscillation: null,
+    electrodes: 'single', passesPerSide: null, backGouging: false, tungsten: { type: null, size: null },
+    backingGas: { composition: null, flow: emptyWindow() }, consumableInsert: null, flux: { name: null, classification: null },
+  }
+}
 
 /** A blank draft for the form. */
 export function blankProcedureDraft(): ProcedureDraft {
   return {
-    number: '', title: '', code: 'asme-ix', edition: '2023', unit: 'in', process: 'GMAW', transfer: 'short-circuit', supportingPqrIds: [],
+    number: '', title: '', code: 'asme-ix', edition: '2023', unit: 'in', supportingPqrIds: [],
     baseMetals: { a: { baseMetalId: null, pNumber: '1', groupNumber: null }, b: { baseMetalId: null, pNumber: '1', groupNumber: null } },
-    thickness: { groove: { ...emptyRange }, fillet: { ...emptyRange } }, depositMax: null, diameter: { ...emptyRange },
-    joints: { type: '', groove: null, grooveAngle: null, rootOpening: { ...emptyRange }, rootFace: { ...emptyRange }, backing: null },
-    fillers: [{ fillerMetalId: null, specification: '', classification: '', fNumber: '', aNumber: null, size: null }],
-    positions: ['F', 'H'], progression: null, toughnessRequired: false, preheatMin: null, interpassMax: null, pwht: 'none',
-    gas: { composition: null, flow: { ...emptyWindow } },
-    electrical: { current: 'DCEP', amps: { ...emptyWindow }, volts: { ...emptyWindow }, wireFeed: { ...emptyWindow }, travelSpeed: { ...emptyWindow }, heatInputMax: null },
-    technique: { bead: 'stringer', ctwd: { ...emptyWindow }, cleaning: null },
+    thickness: { groove: emptyRange(), fillet: emptyRange() }, diameter: emptyRange(),
+    joints: { type: '', groove: null, grooveAngle: null, rootOpening: emptyRange(), rootFace: emptyRange(), backing: null },
+    positions: ['F', 'H'], progression: null, toughnessRequired: false, preheatMin: null, interpassMax: null,
+    pwht: { required: false, temperature: emptyRange(), holdHours: null, note: null }, cleaning: null,
+    layers: [blankLayer()],
   }
+}
+
+/** One row of the pass table: what the welder sets for each layer, read from the layer. */
+export interface PassRow {
+  layer: string
+  passes: string | null
+  process: string
+  transfer: string | null
+  filler: string
+  diameter: number | null
+  current: string
+  amps: { min: number | null, max: number | null, setPoint: number | null }
+  wireFeed: { min: number | null, max: number | null, setPoint: number | null }
+  volts: { min: number | null, max: number | null, setPoint: number | null }
+  travelSpeed: { min: number | null, max: number | null, setPoint: number | null }
+  heatInputMax: number | null
+}
+
+/** The pass table of a WPS: one row per layer and filler. */
+export function passTable(draft: Pick<ProcedureDraft, 'layers'>): PassRow[] {
+  return draft.layers.flatMap(l => (l.fillers.length ? l.fillers : [null]).map(f => ({
+    layer: l.name, passes: l.passes, process: l.process, transfer: l.transfer,
+    filler: f ? f.classification : (l.fillerAdded === false ? 'none (autogenous)' : ''), diameter: f?.size ?? null, current: l.current,
+    amps: l.amps, wireFeed: l.wireFeed, volts: l.volts, travelSpeed: l.travelSpeed, heatInputMax: l.heatInputMax,
+  })))
 }
 
 /** POST approve: the version being signed; for a code whose support rules this program does not carry, how the ranges were checked. */

@@ -12,6 +12,8 @@ export const readingSchema = z.object({
   ctwd: optionalNumber('Contact-tip-to-work distance', { positive: true }),
   gasFlow: optionalNumber('Gas flow', { positive: true }),
   reference: optionalText('Weld reference', 120),
+  /** Which process layer of the WPS the reading was taken on (0: the first) */
+  layer: z.number({ invalid_type_error: 'layer must be a whole number' }).int('layer must be a whole number').min(0).max(7).optional(),
 }).strict().refine(v => [v.volts, v.amps, v.wireFeedSpeed, v.travelSpeed, v.ctwd, v.gasFlow].some(x => x !== null && x !== undefined),
   { message: 'Enter at least one reading', path: ['volts'] })
 export type ReadingInput = z.input<typeof readingSchema>

@@ -35,6 +35,16 @@ export const macroRecordSchema = z.object({
   notes: z.string().trim().max(500).nullish().transform(v => v || null),
 })
 
+/** One process welded on the coupon with its own deposit (ASME IX QW-452.1(b): each process qualifies its own deposit). */
+export const testProcessSchema = z.object({
+  process: processSchema,
+  transfer: z.preprocess(emptyIsNull, z.enum(['short-circuit', 'globular', 'spray', 'pulse']).nullish()).transform(v => v ?? null),
+  depositThickness: optionalLength('Deposit thickness'),
+  /** The F-No. of this process's filler when it differs from the coupon's (QW-433) */
+  fNumber: z.string().trim().regex(/^\d{1,2}$/, 'A whole number such as 4').nullish().or(z.literal('')).transform(v => v || null),
+})
+export type TestProcess = z.infer<typeof testProcessSchema>
+
 const variables = {
   welderId: z.number({ required_error: 'Pick the welder' }).int().positive('Pick the welder'),
   procedureId: z.preprocess(emptyIsNull, z.number().int().positive().nullish()).transform(v => v ?? null),
@@ -42,12 +52,13 @@ const variables = {
   code: codeSchema,
   edition: z.string({ required_error: 'Edition is required' }).trim().min(1, 'Edition is required').max(10),
   unit: unitSchema,
-  process: processSchema,
-  transfer: z.preprocess(emptyIsNull, z.enum(['short-circuit', 'globular', 'spray', 'pulse']).nullish()).transform(v => v ?? null),
+  // One coupon, one or more processes in welding order (root first)
+  processes: z.array(testProcessSchema, { required_error: 'Add the process welded' }).min(1, 'Add the process welded').max(3, 'At most 3 processes on one coupon'),
+  /** The PQR coupon this test records, when the welder of a PQR is qualified by it (QW-301.2) */
+  pqrId: z.preprocess(emptyIsNull, z.number().int().positive().nullish()).transform(v => v ?? null),
   form: z.enum(['plate', 'pipe'], { errorMap: () => ({ message: 'Plate or pipe' }) }),
   weld: z.enum(['groove', 'fillet'], { errorMap: () => ({ message: 'Groove or fillet' }) }),
   couponThickness: optionalLength('Thickness'),
-  depositThickness: optionalLength('Deposit thickness'),
   layers: z.preprocess(emptyIsNull, z.number({ invalid_type_error: 'Layers must be a number' }).int('A whole number').positive('At least 1').max(200).nullish()).transform(v => v ?? null),
   outsideDiameter: optionalLength('Outside diameter'),
   pNumber: z.string().trim().max(8).nullish().transform(v => v || null),
@@ -64,7 +75,7 @@ const variables = {
   macro: macroRecordSchema.nullish().transform(v => v ?? null),
 }
 
-type Draft = { code: z.infer<typeof codeSchema>, edition?: string, unit?: 'in' | 'mm', process?: string, transfer?: string | null, form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+type Draft = { code: z.infer<typeof codeSchema>, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
 
 /** Cross-field rules a record must keep whatever the code. */
 function consistent(v: Draft, ctx: z.RefinementCtx) {
@@ -83,10 +94,33 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   if ((v.bends?.length ?? 0) > 0 && v.examination !== 'bend') issue('bends', 'Bend specimens belong to a bend-tested coupon')
   if (v.radiography && v.examination !== 'radiography') issue('radiography', 'Radiography belongs to a radiographed coupon')
   if (v.macro && v.examination !== 'macro-fracture') issue('macro', 'A macro or fracture result belongs to a fillet coupon')
-  if (v.examination === 'radiography' && v.process === 'GMAW' && v.transfer === 'short-circuit') {
+  if (v.examination === 'radiography' && v.processes?.some(p => p.process === 'GMAW' && p.transfer === 'short-circuit')) {
     issue('examination', 'Short-circuit GMAW is qualified by bend tests, not radiography (ASME IX QW-304)')
   }
+  const list = v.processes ?? []
+  list.forEach((p, i) => {
+    if (p.transfer && p.process !== 'GMAW' && p.process !== 'FCAW') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'transfer'], message: 'A transfer mode is stated for GMAW and FCAW only' })
+    if (list.findIndex(q => q.process === p.process && q.transfer === p.transfer) !== i) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'process'], message: 'Each process once on a coupon' })
+  })
+  if (list.length > 1 && list.some(p => p.depositThickness === null)) {
+    list.forEach((p, i) => p.depositThickness === null && ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'depositThickness'], message: 'A combination coupon needs each process\'s deposit thickness' }))
+  }
+  const total = list.reduce((sum, p) => sum + (p.depositThickness ?? 0), 0)
+  if (v.couponThickness && total > v.couponThickness * (1 + 1e-9)) issue('processes', 'The deposits together cannot be thicker than the coupon')
   if (v.examination === 'radiography' && v.radiography && !v.couponThickness) issue('couponThickness', 'Radiographic acceptance needs the coupon thickness')
+}
+
+/**
+ * The coupon's processes as the rules' single-process variables: the first process (its transfer) and the whole deposit,
+ * the sum of the processes' deposits (ASME IX QW-452.1(b): the combination qualifies the sum); null when one is not given.
+ */
+export function combinedProcess(processes: readonly TestProcess[]): { process: string, transfer: string | null, depositThickness: number | null } {
+  const first = processes[0]
+  if (!first) return { process: '', transfer: null, depositThickness: null }
+  const total = processes.every(p => p.depositThickness !== null)
+    ? Math.round(processes.reduce((sum, p) => sum + p.depositThickness!, 0) * 1e9) / 1e9
+    : null
+  return { process: first.process, transfer: first.transfer, depositThickness: processes.length === 1 ? first.depositThickness : total }
 }
 
 export const welderTestSchema = z.object(variables).superRefine(consistent)

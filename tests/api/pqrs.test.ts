@@ -34,10 +34,11 @@ let filler: Metal
 const send = (client: Client, method: string, path: string, body?: unknown) =>
   client.json<Answer & Errors>(path, { method, headers: { 'content-type': 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) })
 
-const coupon = () => ({
-  number: 'PQR-T201', testDate: '2026-03-02', code: 'asme-ix', edition: '2023', unit: 'in', process: 'SMAW', transfer: null,
-  couponThickness: 0.25, depositThickness: 0.25, baseMetalId: base.id, fillerMetalId: filler.id, toughnessRequired: false,
-  actuals: { current: 'DCEP', amps: 120, volts: 22, travelSpeed: 6, position: '1G', preheat: 60 }, labReportNumber: 'LAB-T-1',
+const smaw = (depositThickness: number) => ({ name: 'all passes', process: 'SMAW', transfer: null, fillerMetalId: filler.id, depositThickness, current: 'DCEP', amps: 120, volts: 22, travelSpeed: 6 })
+const coupon = (deposit = 0.25) => ({
+  number: 'PQR-T201', testDate: '2026-03-02', code: 'asme-ix', edition: '2023', unit: 'in',
+  couponThickness: 0.25, baseMetalId: base.id, toughnessRequired: false, layers: [smaw(deposit)],
+  actuals: { position: '1G', preheat: 60 }, labReportNumber: 'LAB-T-1',
 })
 
 beforeAll(async () => {
@@ -61,7 +62,7 @@ describe('reading PQRs', () => {
   it('lists PQRs for staff only, filtered on the server', async () => {
     const all = await inspector.json<{ total: number, items: { number: string, status: string }[] }>('/api/pqrs?sort=number')
     expect(all.status).toBe(200)
-    expect(all.body.items.map(p => p.number)).toEqual(['PQR-K101', 'PQR-K102', 'PQR-K103', 'PQR-K104'])
+    expect(all.body.items.map(p => p.number)).toEqual(['PQR-K101', 'PQR-K102', 'PQR-K103', 'PQR-K104', 'PQR-K105'])
     const recorded = await inspector.json<{ items: { number: string }[] }>('/api/pqrs?status=recorded')
     expect(recorded.body.items.map(p => p.number)).toEqual(['PQR-K104'])
     expect((await welder.fetch('/api/pqrs')).status).toBe(403)
@@ -95,9 +96,9 @@ describe('recording, testing and certifying a PQR', () => {
   it('refuses a bad coupon with field messages', async () => {
     const empty = await send(supervisor, 'POST', '/api/pqrs', {})
     expect(empty.status).toBe(400)
-    for (const key of ['number', 'testDate', 'couponThickness', 'baseMetalId', 'fillerMetalId']) expect((empty.body as Errors).data!.fieldErrors[key], key).toBeDefined()
-    const thick = await send(supervisor, 'POST', '/api/pqrs', { ...coupon(), depositThickness: 0.5 })
-    expect((thick.body as Errors).data!.fieldErrors.depositThickness?.[0]).toMatch(/thicker than the coupon/)
+    for (const key of ['number', 'testDate', 'couponThickness', 'baseMetalId', 'layers']) expect((empty.body as Errors).data!.fieldErrors[key], key).toBeDefined()
+    const thick = await send(supervisor, 'POST', '/api/pqrs', coupon(0.5))
+    expect((thick.body as Errors).data!.fieldErrors.layers?.[0]).toMatch(/thicker than the coupon/)
     const badDay = await send(supervisor, 'POST', '/api/pqrs', { ...coupon(), testDate: '2026-02-30' })
     expect((badDay.body as Errors).data!.fieldErrors.testDate).toBeDefined()
     const noMetal = await send(supervisor, 'POST', '/api/pqrs', { ...coupon(), baseMetalId: 999_999 })
@@ -117,7 +118,7 @@ describe('recording, testing and certifying a PQR', () => {
   it('corrects the coupon with the version it read; a stale version is a 409', async () => {
     expect((await send(supervisor, 'PATCH', `/api/pqrs/${id}`, { version: 7, pqr: coupon() })).status).toBe(409)
     expect((await send(supervisor, 'PATCH', '/api/pqrs/999999', { version: 1, pqr: coupon() })).status).toBe(404)
-    const saved = await send(supervisor, 'PATCH', `/api/pqrs/${id}`, { version: 1, pqr: { ...coupon(), couponThickness: 0.375, depositThickness: 0.375 } })
+    const saved = await send(supervisor, 'PATCH', `/api/pqrs/${id}`, { version: 1, pqr: { ...coupon(0.375), couponThickness: 0.375 } })
     expect(saved.status).toBe(200)
     expect(saved.body.version).toBe(2)
   })

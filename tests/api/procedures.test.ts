@@ -74,7 +74,8 @@ describe('reading procedures', () => {
     expect(body.signatures).toHaveLength(1)
     expect(body.signatures[0]).toMatchObject({ meaning: 'approved' })
     expect(body.signatures[0]!.sha256).toMatch(/^[0-9a-f]{64}$/)
-    expect(body.draft.electrical.volts).toMatchObject({ min: 17, max: 19.5 })
+    expect(body.draft.layers).toHaveLength(1)
+    expect(body.draft.layers[0]!.volts).toMatchObject({ min: 17, max: 19.5 })
     expect(body.support.checked).toBe(true)
     expect(body.support.supported).toBe(true)
     // ASME BPVC IX-2019, Table QW-451.1 (T from 1/16 to 3/8 in: 1/16 in to 2T) with QW-403.10 (GMAW-S, T under 1/2 in: 1.1T):
@@ -121,7 +122,7 @@ describe('drafting, approving and revising', () => {
     const empty = await send(supervisor, 'POST', '/api/procedures', {})
     expect(empty.status).toBe(400)
     const fields = (empty.body as Errors).data!.fieldErrors
-    for (const key of ['number', 'title', 'unit', 'process', 'baseMetals', 'fillers', 'positions']) expect(fields[key], key).toBeDefined()
+    for (const key of ['number', 'title', 'unit', 'layers', 'baseMetals', 'positions']) expect(fields[key], key).toBeDefined()
     const inverted = await send(supervisor, 'POST', '/api/procedures', { ...(await sheetDraft('KB-T90')), thickness: { groove: { min: 0.2, max: 0.1 }, fillet: { min: null, max: null } } })
     expect(inverted.status).toBe(400)
     expect((inverted.body as Errors).data!.fieldErrors.thickness?.[0]).toMatch(/minimum is above the maximum/)
@@ -163,7 +164,7 @@ describe('drafting, approving and revising', () => {
     expect((await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version + 5, draft: fixed })).status).toBe(409)
     expect((await send(inspector, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: fixed })).status).toBe(403)
     expect((await send(supervisor, 'PATCH', '/api/procedures/999999', { version: 1, draft: fixed })).status).toBe(404)
-    const bad = await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: { ...fixed, fillers: [] } })
+    const bad = await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: { ...fixed, layers: [] } })
     expect(bad.status).toBe(400)
     expect((bad.body as Errors).data!.fieldErrors.draft).toBeDefined()
     const saved = await send(supervisor, 'PATCH', `/api/procedures/${id}`, { version: body.procedure.version, draft: fixed })
@@ -239,8 +240,8 @@ describe('discarding a draft', () => {
   it('a draft another record refers to stays (409), never a 500', async () => {
     const created = await send(supervisor, 'POST', '/api/procedures', await sheetDraft('KB-T41'))
     const test = await send(inspector, 'POST', '/api/tests', {
-      welderId: 1, procedureId: created.body.id, testDate: '2026-06-01', code: 'asme-ix', edition: '2023', unit: 'in', process: 'GMAW',
-      transfer: 'short-circuit', form: 'plate', weld: 'groove', couponThickness: 0.1345, positions: ['1G'], examination: 'bend',
+      welderId: 1, procedureId: created.body.id, testDate: '2026-06-01', code: 'asme-ix', edition: '2023', unit: 'in',
+      processes: [{ process: 'GMAW', transfer: 'short-circuit' }], form: 'plate', weld: 'groove', couponThickness: 0.1345, positions: ['1G'], examination: 'bend',
     })
     expect(test.status, JSON.stringify(test.body)).toBe(201)
     const res = await send(supervisor, 'DELETE', `/api/procedures/${created.body.id}`, { version: 1 })
@@ -254,9 +255,9 @@ describe('a code whose support rules are not carried', () => {
     const bases = await supervisor.json<{ id: number, specification: string, grade: string }[]>('/api/catalogue/base-metals')
     const fillers = await supervisor.json<{ id: number, classification: string }[]>('/api/catalogue/filler-metals')
     const pqr = await send(supervisor, 'POST', '/api/pqrs', {
-      number: 'PQR-D11', testDate: '2026-05-04', code: 'aws-d1.1', edition: '2020', unit: 'in', process: 'SMAW', transfer: null,
-      couponThickness: 0.375, depositThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id,
-      fillerMetalId: fillers.body.find(f => f.classification === 'E7018')!.id, actuals: {},
+      number: 'PQR-D11', testDate: '2026-05-04', code: 'aws-d1.1', edition: '2020', unit: 'in',
+      couponThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id, actuals: {},
+      layers: [{ name: 'all passes', process: 'SMAW', fillerMetalId: fillers.body.find(f => f.classification === 'E7018')!.id, depositThickness: 0.375 }],
     })
     expect(pqr.status).toBe(201)
     const results = await send(inspector, 'PUT', `/api/pqrs/${pqr.body.id}/results`, {

@@ -24,8 +24,8 @@ const send = (client: Client, path: string, body: unknown, method = 'POST') =>
 
 /** A 10 mm SMAW plate groove coupon welded in 3G, recorded in mm. */
 const coupon = (welderId: number, extra: Record<string, unknown> = {}) => ({
-  welderId, testDate: '2026-11-20', code: 'asme-ix', edition: '2023', unit: 'mm', process: 'SMAW', form: 'plate', weld: 'groove',
-  couponThickness: 10, depositThickness: 10, layers: 3, pNumber: '1', fNumber: '4', backing: true, positions: ['3G'], progression: 'uphill',
+  welderId, testDate: '2026-11-20', code: 'asme-ix', edition: '2023', unit: 'mm', processes: [{ process: 'SMAW', depositThickness: 10 }], form: 'plate', weld: 'groove',
+  couponThickness: 10, layers: 3, pNumber: '1', fNumber: '4', backing: true, positions: ['3G'], progression: 'uphill',
   visualAccepted: null, examination: 'bend', bends: [], ...extra,
 })
 

@@ -44,6 +44,8 @@ export const demoFillerMetals = [
   { specification: 'SFA-5.18', classification: 'ER70S-2', fNumber: '6', aNumber: '1' },
   { specification: 'SFA-5.20', classification: 'E71T-1C', fNumber: '6', aNumber: '1' },
   { specification: 'SFA-5.9', classification: 'ER308L', fNumber: '6', aNumber: '8' },
+  { specification: 'SFA-5.9', classification: 'ER309L', fNumber: '6', aNumber: '8' },
+  { specification: 'SFA-5.4', classification: 'E309L-16', fNumber: '5', aNumber: '8' },
 ] as const
 
 /** PQRs: the coupon as welded and its results (demo values). */
@@ -104,9 +106,35 @@ export const demoPqrs = [
       { type: 'side', largestIndication: 0.02 }, { type: 'side', largestIndication: 0 },
     ],
   },
+  {
+    // A combination coupon: GTAW root and hot pass, SMAW fill and cap, carbon steel pipe to austenitic stainless plate.
+    number: 'PQR-K105', daysAgo: 150, code: 'asme-ix', edition: '2023', unit: 'in', process: 'GTAW', transfer: null,
+    couponThickness: 0.5, depositThickness: 0.5, base: ['SA-106', 'B'], baseB: ['SA-240', '304L'], filler: ['SFA-5.9', 'ER309L'],
+    welder: 'KB-03',
+    actuals: { position: '6G', progression: 'uphill', preheat: 60, interpass: 340 },
+    layers: [
+      { name: 'root and hot pass', process: 'GTAW', filler: ['SFA-5.9', 'ER309L'], fillerSize: 0.09375, depositThickness: 0.125, current: 'DCEN', amps: 105, volts: 11.5, travelSpeed: 3.2, gas: 'Argon', gasFlow: 20, tungsten: 'EWCe-2, 3/32 in', backingGas: 'Argon, 15 ft³/h' },
+      { name: 'fill and cap', process: 'SMAW', filler: ['SFA-5.4', 'E309L-16'], fillerSize: 0.125, depositThickness: 0.375, current: 'DCEP', amps: 112, volts: 24, travelSpeed: 5 },
+    ],
+    labReportNumber: 'LAB-26-0488', status: 'certified',
+    tensile: [
+      { label: 'T1', width: 0.75, thickness: 0.495, load: 26300, breakLocation: 'base metal' },
+      { label: 'T2', width: 0.751, thickness: 0.497, load: 26150, breakLocation: 'base metal' },
+    ],
+    bends: [
+      { type: 'side', largestIndication: 0 }, { type: 'side', largestIndication: 0.02 },
+      { type: 'side', largestIndication: 0 }, { type: 'side', largestIndication: 0 },
+    ],
+  },
 ] as const
 
 const window = (min: number, max: number) => ({ min, max })
+const set = (setPoint: number, trim: number) => ({ min: Math.round((setPoint - trim) * 1000) / 1000, max: Math.round((setPoint + trim) * 1000) / 1000, setPoint })
+const noWindow = { min: null, max: null, setPoint: null }
+const pipeLayer = {
+  transfer: null, fillerAdded: null, wireFeed: noWindow, ctwd: noWindow, pulsing: false, oscillation: null, electrodes: 'single', passesPerSide: null,
+  backGouging: false, tungsten: { type: null, size: null }, backingGas: { composition: null, flow: noWindow }, consumableInsert: null, flux: { name: null, classification: null },
+}
 
 /** WPSs: number, revision, status and the variables a WPS states (demo values). */
 export const demoProcedures = [
@@ -186,6 +214,44 @@ export const demoProcedures = [
       technique: { bead: 'stringer', ctwd: window(0.25, 0.375), cleaning: 'none required' },
     },
   },
+  {
+    number: 'KB-W06', revision: 0, status: 'approved', title: 'GTAW root and hot pass, SMAW fill and cap, carbon steel pipe to stainless, open root',
+    code: 'asme-ix', edition: '2023', unit: 'in', process: 'GTAW', transfer: null, pqrs: ['PQR-K105'],
+    pNumbers: ['1', '8'], groups: [1, 1], thickness: window(0.1875, 1), diameterMin: 2.375, positions: ['F', 'H', 'V', 'O'], fNumbers: ['6', '5'],
+    variables: {
+      joints: { type: 'pipe butt', groove: 'single-V, 75° included', grooveAngle: 75, rootOpening: window(0.09375, 0.125), rootFace: window(0.0625, 0.09375), backing: 'none (open root, argon purge)' },
+      progression: 'uphill', preheatMin: 50, interpassMax: 350, pwht: { required: false, temperature: { min: null, max: null }, holdHours: null, note: null },
+      cleaning: 'stainless wire brush, grind starts and stops',
+    },
+    layers: [
+      {
+        ...pipeLayer, name: 'root', passes: '1', process: 'GTAW', fillerAdded: true, depositMax: 0.125, current: 'DCEN',
+        fillers: [{ specification: 'SFA-5.9', classification: 'ER309L', fNumber: '6', aNumber: '8', size: 0.09375 }],
+        amps: set(105, 15), volts: set(11.5, 1.5), travelSpeed: window(2.5, 4.5), heatInputMax: 35000,
+        gas: { composition: 'Argon', flow: set(20, 5) }, bead: 'stringer',
+        tungsten: { type: 'EWCe-2', size: 0.09375 }, backingGas: { composition: 'Argon', flow: set(15, 5) },
+      },
+      {
+        ...pipeLayer, name: 'hot pass', passes: '2', process: 'GTAW', fillerAdded: true, depositMax: 0.125, current: 'DCEN',
+        fillers: [{ specification: 'SFA-5.9', classification: 'ER309L', fNumber: '6', aNumber: '8', size: 0.09375 }],
+        amps: set(115, 15), volts: set(12, 1.5), travelSpeed: window(3, 5), heatInputMax: 35000,
+        gas: { composition: 'Argon', flow: set(20, 5) }, bead: 'stringer',
+        tungsten: { type: 'EWCe-2', size: 0.09375 }, backingGas: { composition: 'Argon', flow: set(15, 5) },
+      },
+      {
+        ...pipeLayer, name: 'fill', passes: '3 to 5', process: 'SMAW', depositMax: 0.5, current: 'DCEP',
+        fillers: [{ specification: 'SFA-5.4', classification: 'E309L-16', fNumber: '5', aNumber: '8', size: 0.125 }],
+        amps: set(110, 15), volts: set(24, 2), travelSpeed: window(3.5, 7), heatInputMax: 45000,
+        gas: { composition: null, flow: noWindow }, bead: 'stringer or weave, no wider than 3 electrode diameters',
+      },
+      {
+        ...pipeLayer, name: 'cap', passes: '6 to 8', process: 'SMAW', depositMax: 0.25, current: 'DCEP',
+        fillers: [{ specification: 'SFA-5.4', classification: 'E309L-16', fNumber: '5', aNumber: '8', size: 0.125 }],
+        amps: set(115, 15), volts: set(24.5, 2), travelSpeed: window(3.5, 7), heatInputMax: 45000,
+        gas: { composition: null, flow: noWindow }, bead: 'stringer',
+      },
+    ],
+  },
 ] as const
 
 /**
@@ -213,6 +279,12 @@ export const demoWelderTests = [
   { stamp: 'KB-10', wps: 'KB-W02', daysAgo: 410, process: 'SMAW', form: 'pipe', weld: 'groove', t: 0.432, od: 6.625, positions: ['5G'], f: '4', backing: true, bends: [['side', 0], ['side', 0], ['side', 0], ['side', 0]] },
   { stamp: 'KB-11', wps: 'KB-W01', daysAgo: 20, process: 'GMAW', transfer: 'short-circuit', form: 'plate', weld: 'groove', t: 0.1345, positions: ['2G'], f: '6', backing: false, bends: [['face', 0], ['root', 0.0625]], status: 'recorded' },
   { stamp: 'KB-12', wps: 'KB-W02', daysAgo: 800, process: 'SMAW', form: 'plate', weld: 'groove', t: 0.375, positions: ['1G'], f: '4', backing: true, bends: [['face', 0], ['root', 0]] },
+  // A 6G combination coupon, GTAW root and hot pass then SMAW: the welder of PQR-K105 qualified by its coupon (QW-301.2)
+  {
+    stamp: 'KB-03', wps: 'KB-W06', pqr: 'PQR-K105', daysAgo: 150, process: 'GTAW', form: 'pipe', weld: 'groove', t: 0.5, od: 6.625, positions: ['6G'], f: '6', backing: false,
+    processes: [{ process: 'GTAW', transfer: null, depositThickness: 0.125, fNumber: '6' }, { process: 'SMAW', transfer: null, depositThickness: 0.375, fNumber: '5' }],
+    bends: [['side', 0], ['side', 0], ['side', 0.03], ['side', 0]],
+  },
 ] as const
 
 /**
@@ -227,6 +299,7 @@ export const demoContinuity: { stamp: string, process: string, daysAgo: number[]
   { stamp: 'KB-02', process: 'SMAW', daysAgo: [235, 207], reference: 'KB-2598 skid frame' },
   { stamp: 'KB-03', process: 'GMAW', daysAgo: [200, 120, 45, 9], reference: 'KB-2615 hood panels' },
   { stamp: 'KB-03', process: 'SMAW', daysAgo: [210, 172], reference: 'KB-2611 nozzle pads' },
+  { stamp: 'KB-03', process: 'GTAW', daysAgo: [120, 61], reference: 'KB-2611 stainless drain nozzle' },
   { stamp: 'KB-04', process: 'SMAW', daysAgo: [240, 180, 100, 30], reference: 'KB-2611 shell seams' },
   { stamp: 'KB-05', process: 'GTAW', daysAgo: [225, 190, 168], reference: 'KB-2598 instrument lines' },
   { stamp: 'KB-05', process: 'GMAW', daysAgo: [215, 140, 66], reference: 'KB-2615 brackets' },

@@ -3,8 +3,11 @@ import { count } from 'drizzle-orm'
 import { format, subDays } from 'date-fns'
 import type { Db } from '../client'
 import * as t from '../schema'
-import { contentHash, newVerifyCode, type SignedRecordType } from '../signing'
-import { qualifiedRangesOf } from '../../../shared/qualification/test-ranges'
+import { contentHash, currentContentFormat, newVerifyCode, type SignedRecordType } from '../signing'
+import type { WelderTestInput } from '../../../shared/schemas/welder-test'
+import { columnsOf, draftOf, type ProcedureRow } from '../procedure-columns'
+import { pqrLayersOf } from '../pqr-columns'
+import { columnsOf as welderTestColumns } from '../welder-test-columns'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
 import {
@@ -39,11 +42,16 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
     const pqrId = new Map<string, number>()
     for (const p of demoPqrs) {
       const base = baseOf(p.base)
-      const [row] = await tx.insert(t.pqrs).values({
+      const values = {
         number: p.number, testDate: day(today, p.daysAgo), code: p.code, edition: p.edition, unit: p.unit, process: p.process,
         transfer: p.transfer, couponThickness: p.couponThickness, depositThickness: p.depositThickness, baseMetalId: base.id,
         fillerMetalId: fillerOf(p.filler).id, actuals: p.actuals, labReportNumber: p.labReportNumber, status: p.status,
-      }).returning()
+        baseMetalBId: 'baseB' in p ? baseOf(p.baseB).id : null, welderId: 'welder' in p ? welderId.get(p.welder)! : null,
+        layers: 'layers' in p ? p.layers.map(({ filler, ...l }) => ({ ...l, fillerMetalId: fillerOf(filler).id })) : [],
+      }
+      // Every record as the app writes it: its layers and process list (a single-process PQR is one layer)
+      const layers = pqrLayersOf(values)
+      const [row] = await tx.insert(t.pqrs).values({ ...values, layers, processes: [...new Set(layers.map(l => l.process))] }).returning()
       pqrId.set(p.number, row!.id)
       await tx.insert(t.pqrTensileSpecimens).values(p.tensile.map((s) => {
         const result = tensileOf({ ...s, unit: p.unit, minimumStrength: base.minTensilePsi ?? 0 })
@@ -56,12 +64,21 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
 
     const procedureId = new Map<string, number>()
     for (const p of demoProcedures) {
-      const [row] = await tx.insert(t.procedures).values({
+      const stored = {
         number: p.number, revision: p.revision, title: p.title, code: p.code, edition: p.edition, status: p.status, unit: p.unit,
         process: p.process, transfer: p.transfer, pNumberA: p.pNumbers[0], pNumberB: p.pNumbers[1],
         thicknessMin: p.thickness.min, thicknessMax: p.thickness.max, diameterMin: p.diameterMin, positions: [...p.positions],
-        fNumbers: [...p.fNumbers], variables: p.variables, createdBy: supervisor.id,
-        approvedAt: p.status === 'draft' ? null : subDays(today, 400),
+        fNumbers: [...p.fNumbers], variables: p.variables, layers: 'layers' in p ? p.layers : [], processes: [],
+      }
+      // Written the way the app writes a draft: the variables read back as a draft (one layer for a single process), then as columns
+      const draft = draftOf(stored as unknown as ProcedureRow, [])
+      if ('groups' in p) {
+        draft.baseMetals.a.groupNumber = p.groups[0]
+        draft.baseMetals.b.groupNumber = p.groups[1]
+      }
+      const [row] = await tx.insert(t.procedures).values({
+        ...columnsOf(draft), revision: p.revision, status: p.status, createdBy: supervisor.id,
+        approvedAt: p.status === 'draft' ? null : subDays(today, 'layers' in p ? 120 : 400),
       }).returning()
       procedureId.set(`${p.number}@${p.revision}`, row!.id)
       await tx.insert(t.procedurePqrs).values(p.pqrs.map(n => ({ procedureId: row!.id, pqrId: pqrId.get(n)! })))
@@ -74,24 +91,24 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
     const testIds: { id: number, status: string }[] = []
     for (const w of demoWelderTests) {
       const status = 'status' in w ? w.status : 'certified'
-      const input = {
-        code: 'asme-ix' as const, edition: '2023', unit: 'in' as const, process: w.process,
-        transfer: 'transfer' in w ? w.transfer : null, form: w.form, weld: w.weld, couponThickness: w.t, depositThickness: w.t,
-        layers: w.t >= 0.5 ? 4 : 2, outsideDiameter: 'od' in w ? w.od : null, pNumber: '1', fNumber: w.f, backing: w.backing,
-        positions: [...w.positions],
+      // Written the way the app writes a test: the input as columns, with the ranges and bend verdicts of the rules
+      const input: WelderTestInput = {
+        welderId: welderId.get(w.stamp)!, procedureId: latestProcedure(w.wps) ?? null, pqrId: 'pqr' in w ? pqrId.get(w.pqr)! : null,
+        testDate: day(today, w.daysAgo), code: 'asme-ix', edition: '2023', unit: 'in',
+        processes: 'processes' in w ? w.processes.map(p => ({ ...p })) : [{ process: w.process, transfer: 'transfer' in w ? w.transfer : null, depositThickness: w.t, fNumber: null }],
+        form: w.form, weld: w.weld, couponThickness: w.t, layers: w.t >= 0.5 ? 4 : 2, outsideDiameter: 'od' in w ? w.od : null, pNumber: '1', fNumber: w.f,
+        backing: w.backing, positions: [...w.positions], progression: w.positions.some(p => ['3G', '5G', '6G', '3F'].includes(p)) ? 'uphill' : null,
+        visualAccepted: true, visualNotes: null, examination: w.bends.length ? 'bend' : 'macro-fracture',
+        bends: w.bends.map(([type, size]) => ({ type, largestIndication: size, atCorner: false })), radiography: null,
+        macro: null,
       }
+      const { values, bends } = welderTestColumns(input)
       const [row] = await tx.insert(t.welderTests).values({
-        ...input, welderId: welderId.get(w.stamp)!, procedureId: latestProcedure(w.wps), testDate: day(today, w.daysAgo),
-        progression: w.positions.some(p => ['3G', '5G', '6G', '3F'].includes(p)) ? 'uphill' : null,
-        visualAccepted: true, examination: w.bends.length ? 'bend' : 'macro-fracture', ranges: qualifiedRangesOf(input),
+        ...values,
         status, inspectorId: inspector.id, certifiedAt: status === 'certified' ? subDays(today, w.daysAgo - 2) : null,
       }).returning()
       testIds.push({ id: row!.id, status })
-      if (w.bends.length) {
-        await tx.insert(t.welderTestBends).values(w.bends.map(([type, size]) => ({
-          testId: row!.id, type, largestIndication: size, accepted: bendAcceptance('asme-ix', 'in', [{ type, largestIndication: size }]).accepted,
-        })))
-      }
+      if (bends.length) await tx.insert(t.welderTestBends).values(bends.map(b => ({ ...b, testId: row!.id })))
     }
 
     const rows = demoContinuity.flatMap(c => c.daysAgo.map(d => ({
@@ -124,7 +141,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
       const sha256 = (await contentHash(tx as unknown as Db, s.type, s.id))!
       await tx.insert(t.signatures).values({
         recordType: s.type, recordId: s.id, recordVersion: 1, signerId: s.signer.id, signerName: s.signer.name,
-        meaning: s.meaning, sha256, verifyCode: newVerifyCode(),
+        meaning: s.meaning, sha256, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       })
     }
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })

@@ -1,5 +1,5 @@
 import { idParamSchema } from '#shared/schemas/list'
-import { findProcedure, readingsOf } from '../../../database/procedures'
+import { findProcedure, layersOf, readingsOf } from '../../../database/procedures'
 import { readingWindow } from '../../../database/procedure-writes'
 
 /** GET /api/procedures/:id/readings: the readings kept against a WPS (a welder sees their own) */
@@ -10,5 +10,6 @@ export default defineEventHandler(async (event) => {
   const row = await findProcedure(db, id)
   if (!row || (user.role === 'welder' && row.status !== 'approved')) throw httpError(missing('Procedure'))
   const items = await readingsOf(db, id, user.role === 'welder' ? (user.welderId ?? -1) : null)
-  return { window: readingWindow(row), unit: row.unit, items }
+  const layers = layersOf(row).map((l, i) => ({ index: i, name: l.name, process: l.process, window: readingWindow(row, i) }))
+  return { window: readingWindow(row), layers, unit: row.unit, items }
 })

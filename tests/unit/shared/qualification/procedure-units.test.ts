@@ -32,13 +32,16 @@ describe('inch ↔ millimetre records, converted exactly', () => {
   it('a whole draft: every value with a unit converts, empty ones stay empty, and the unit changes', () => {
     const draft = blankProcedureDraft()
     draft.thickness.groove = { min: 0.0625, max: 0.1345 }
-    draft.technique.ctwd = { min: 0.375, max: 0.5, setPoint: null }
-    draft.electrical.amps = { min: 95, max: 135, setPoint: null }
+    draft.layers[0]!.ctwd = { min: 0.375, max: 0.5, setPoint: null }
+    draft.layers[0]!.amps = { min: 95, max: 135, setPoint: null }
+    draft.layers[0]!.fillers[0]!.size = 0.035
     const mm = convertDraft(draft, 'in', 'mm')
     expect(mm.unit).toBe('mm')
     expect(mm.thickness.groove).toEqual({ min: 1.5875, max: 3.4163 })
-    expect(mm.technique.ctwd).toEqual({ min: 9.525, max: 12.7, setPoint: null })
-    expect(mm.electrical.amps).toEqual({ min: 95, max: 135, setPoint: null })
+    expect(mm.layers[0]!.ctwd).toEqual({ min: 9.525, max: 12.7, setPoint: null })
+    expect(mm.layers[0]!.amps).toEqual({ min: 95, max: 135, setPoint: null })
+    // 0.035 in × 25.4 = 0.889 mm (NIST SP 811, B.8)
+    expect(mm.layers[0]!.fillers[0]!.size).toBe(0.889)
     expect(mm.thickness.fillet).toEqual({ min: null, max: null })
     expect(convertDraft(mm, 'mm', 'in').thickness.groove).toEqual({ min: 0.0625, max: 0.1345 })
     expect(draft.unit).toBe('in')
