@@ -95,8 +95,8 @@ beforeAll(async () => {
     // record one (a valid 10 mm SMAW 3G coupon, not yet examined) for a welder on the granted project
     const welderId = [...grantedWelders].find(id => id !== ids.ownWelderId) ?? [...grantedWelders][0]!
     const created = await as.inspector.json<{ id: number }>('/api/tests', json({
-      welderId, testDate: '2026-11-20', code: 'asme-ix', edition: '2023', unit: 'mm', process: 'SMAW', form: 'plate', weld: 'groove',
-      couponThickness: 10, depositThickness: 10, layers: 3, pNumber: '1', fNumber: '4', backing: true, positions: ['3G'], progression: 'uphill',
+      welderId, testDate: '2026-11-20', code: 'asme-ix', edition: '2023', unit: 'mm', processes: [{ process: 'SMAW', transfer: null, depositThickness: 10 }],
+      form: 'plate', weld: 'groove', couponThickness: 10, layers: 3, pNumber: '1', fNumber: '4', backing: true, positions: ['3G'], progression: 'uphill',
       visualAccepted: null, examination: 'bend', bends: [],
     }))
     expect(created.status).toBe(201)
@@ -132,12 +132,19 @@ describe('each role on real records', () => {
     }
   })
 
+  // One access rule per record: a welder reads approved WPSs (sheet, files and thumbnails alike) and no other.
+  async function welderSeesProcedure(id: number) {
+    const { body } = await as.supervisor.json<{ procedure: { status: string } }>(`/api/procedures/${id}`)
+    expect(body.procedure.status).toMatch(/^(draft|approved|superseded)$/)
+    return body.procedure.status === 'approved' ? 200 : 404
+  }
+
   it('files and thumbnails follow their record: own / another\'s / granted / not granted', async () => {
     const rows: [number, Record<Role, number>][] = [
       [ids.ownTestFile, { supervisor: 200, inspector: 200, welder: 200, auditor: 200 }],
       [ids.otherTestFile, { supervisor: 200, inspector: 200, welder: 404, auditor: 200 }],
-      [ids.grantedProcedureFile, { supervisor: 200, inspector: 200, welder: 404, auditor: 200 }],
-      [ids.otherProcedureFile, { supervisor: 200, inspector: 200, welder: 404, auditor: 404 }],
+      [ids.grantedProcedureFile, { supervisor: 200, inspector: 200, welder: await welderSeesProcedure(ids.grantedProcedure), auditor: 200 }],
+      [ids.otherProcedureFile, { supervisor: 200, inspector: 200, welder: await welderSeesProcedure(ids.otherProcedure), auditor: 404 }],
     ]
     for (const [id, expected] of rows) {
       for (const role of ['supervisor', 'inspector', 'welder', 'auditor'] as const) {
@@ -152,8 +159,8 @@ describe('each role on real records', () => {
     const rows: [string, Record<Role, number>][] = [
       [list('welder-test', ids.ownTest), { supervisor: 200, inspector: 200, welder: 200, auditor: 200 }],
       [list('welder-test', ids.otherTest), { supervisor: 200, inspector: 200, welder: 404, auditor: 200 }],
-      [list('procedure', ids.grantedProcedure), { supervisor: 200, inspector: 200, welder: 404, auditor: 200 }],
-      [list('procedure', ids.otherProcedure), { supervisor: 200, inspector: 200, welder: 404, auditor: 404 }],
+      [list('procedure', ids.grantedProcedure), { supervisor: 200, inspector: 200, welder: await welderSeesProcedure(ids.grantedProcedure), auditor: 200 }],
+      [list('procedure', ids.otherProcedure), { supervisor: 200, inspector: 200, welder: await welderSeesProcedure(ids.otherProcedure), auditor: 404 }],
     ]
     for (const [path, expected] of rows) {
       for (const role of ['supervisor', 'inspector', 'welder', 'auditor'] as const) {

@@ -88,8 +88,9 @@ describe('sign-in', () => {
   })
 
   it('repeated failures for one account are slowed down', async () => {
+    // After 3 failures each attempt waits 0.25 s, then 0.5 s, then 1 s (README, Sign-in throttling): the sixth waits 1 s.
     const client = new Client(server.url)
-    for (let i = 0; i < 3; i++) await client.signIn('auditor@demo.rootface.test', `wrong-${i}`)
+    for (let i = 0; i < 5; i++) await client.signIn('auditor@demo.rootface.test', `wrong-${i}`)
     const started = Date.now()
     await client.signIn('auditor@demo.rootface.test', 'wrong-again')
     expect(Date.now() - started).toBeGreaterThanOrEqual(900)
