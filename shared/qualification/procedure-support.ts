@@ -1,4 +1,5 @@
 import { codes, evaluate, getRuleSet } from '../rules'
+import { codeName } from '../rules/caution'
 import { convertLength } from '../rules/units'
 import type { ToughnessResults } from '../rules/inputs'
 import type { Basis, CodeId, Range, Unit } from '../rules/types'
@@ -152,7 +153,7 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
   }
   const sameCode = pqrs.filter(p => p.code === wps.code)
   for (const p of pqrs.filter(q => q.code !== wps.code)) {
-    findings.push({ met: false, clause: 'code', text: `${p.number} was qualified to ${p.code}; this WPS is written to ${wps.code}.`, basis: 'convention', field: 'supportingPqrIds' })
+    findings.push({ met: false, clause: 'code', text: `${p.number} was qualified to ${codeName(p.code as CodeId)}; this WPS is written to ${codeName(wps.code as CodeId)}.`, basis: 'convention', field: 'supportingPqrIds' })
   }
   if (sameCode.length === 0) return result(false, null)
   if (rulesMissing) {

@@ -1,5 +1,6 @@
 import type { CoverReason } from '../rules/results'
 import type { CodeId, Unit } from '../rules/types'
+import { codeName } from '../rules/caution'
 import { convertLength, formatRange, toMicro } from '../rules/units'
 
 export interface ProcedureRanges {
@@ -52,7 +53,7 @@ export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { cov
   const add = (met: boolean, clause: string, text: string) => reasons.push({ met, clause, text, basis: 'convention' })
   const inUnit = (v: number) => convertLength(v, joint.unit, u)
 
-  if (joint.code !== undefined) add(wps.code === joint.code, 'code', wps.code === joint.code ? `The WPS is written to ${wps.code}, the joint's code.` : `The WPS is written to ${wps.code}; the joint is welded to ${joint.code}.`)
+  if (joint.code !== undefined) add(wps.code === joint.code, 'code', wps.code === joint.code ? `The WPS is written to ${codeName(wps.code)}, the joint's code.` : `The WPS is written to ${codeName(wps.code)}; the joint is welded to ${codeName(joint.code)}.`)
   add(wps.process === joint.process, c.process, `Process ${wps.process}${wps.process === joint.process ? '' : `, not ${joint.process}`}.`)
   if (joint.transfer && wps.transfer) {
     const sameFamily = (wps.transfer === 'short-circuit') === (joint.transfer === 'short-circuit')
