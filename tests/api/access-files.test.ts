@@ -21,8 +21,8 @@ async function made(client: Client, path: string, body: unknown) {
 
 /** A 10 mm SMAW plate groove coupon in 3G, recorded in mm; bend indications decide pass or fail (ASME BPVC IX-2023, QW-163: 3 mm). */
 const coupon = (welderId: number, indications: number[]) => ({
-  welderId, testDate: '2026-11-20', code: 'asme-ix', edition: '2023', unit: 'mm', process: 'SMAW', form: 'plate', weld: 'groove',
-  couponThickness: 10, depositThickness: 10, layers: 3, pNumber: '1', fNumber: '4', backing: true, positions: ['3G'], progression: 'uphill',
+  welderId, testDate: '2026-11-20', code: 'asme-ix', edition: '2023', unit: 'mm', processes: [{ process: 'SMAW', transfer: null, depositThickness: 10 }],
+  form: 'plate', weld: 'groove', couponThickness: 10, layers: 3, pNumber: '1', fNumber: '4', backing: true, positions: ['3G'], progression: 'uphill',
   visualAccepted: true, examination: 'bend', bends: indications.map((largestIndication, i) => ({ type: i % 2 ? 'root' : 'face', largestIndication })),
 })
 

@@ -87,12 +87,20 @@ describe('behind a trusted proxy', () => {
     const unknown: number[] = []
     let n = 0
     const address = () => ({ 'x-forwarded-for': `192.0.2.${++n}` })
-    // One warm-up pair, then at most three failures per real account and one per address: no throttling delay on
-    // either side. The order alternates so neither side always goes first.
+    // One warm-up pair, then at most three failures in a row per real account and one per address: no throttling delay
+    // on either side. The order alternates so neither side always goes first.
     await attempt(server.url, 'warm-up@nowhere.test', 'x', address())
-    for (let round = 0; round < 3; round++) {
-      for (const [i, email] of [demo.welder, demo.auditor, demo.supervisor, demo.inspector].entries()) {
-        const real = () => attempt(server.url, email, `wrong-${round}`, address())
+    // The inspector's account is locked by the first test: its quick 429s would not be a password check.
+    const open = [demo.welder, demo.auditor, demo.supervisor]
+    for (let round = 0; round < 6; round++) {
+      // A right password clears an account's count, so no round meets the throttling delay of the fourth failure.
+      if (round % 3 === 0) for (const email of open) expect((await attempt(server.url, email, 'rootface-demo', address())).signedIn).toBe(true)
+      for (const [i, email] of open.entries()) {
+        const real = async () => {
+          const tried = await attempt(server.url, email, `wrong-${round}`, address())
+          expect(tried.status, email).not.toBe(429)
+          return tried
+        }
         const none = () => attempt(server.url, `no-such-${round}-${email}`, `wrong-${round}`, address())
         if ((round + i) % 2) {
           known.push((await real()).ms)

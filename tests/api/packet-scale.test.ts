@@ -7,8 +7,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { removeDir, signedIn, startServer, type TestServer } from './harness'
 import { pdfPages } from './pdf-text'
 
-// A project of 100 sheets: the four non-draft demo WPSs with their three PQRs (7 sheets), and 31 added welders
-// with two certified tests and a continuity log each (93). The added rows are test data, not expected values.
+// A project of about 100 sheets: the five non-draft demo WPSs with their four PQRs (9 sheets), and 31 added welders
+// with two certified tests and a continuity log each (93): 102 sheets. The added rows are test data, not expected values.
 const welders = 31
 let dataDir = ''
 let server: TestServer
@@ -62,7 +62,7 @@ describe('a packet of 100 sheets', () => {
     const projects = await supervisor.json<{ id: number, number: string }[]>('/api/projects')
     const project = projects.body.find(p => p.number === 'SC-100')!
     const detail = await supervisor.json<{ sheetCount: number }>(`/api/projects/${project.id}`)
-    expect(detail.body.sheetCount).toBe(100)
+    expect(detail.body.sheetCount).toBe(102)
 
     const started = performance.now()
     const job = await supervisor.json<{ id: number }>('/api/packets', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ projectId: project.id }) })
