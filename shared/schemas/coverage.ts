@@ -34,7 +34,7 @@ export const jointSchema = z.object({
   positions: letters,
   progression: z.preprocess(blank, z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'Uphill or downhill' }) }).optional()),
   fNumber: z.preprocess(blank, z.coerce.number({ invalid_type_error: 'F-No. must be a number' }).int('A whole number such as 4').positive().max(99).optional()),
-  backing: z.preprocess(v => (v === 'true' ? true : v === 'false' ? false : blank(v)), z.boolean().default(true)),
+  backing: z.preprocess(v => (v === 'true' ? true : v === 'false' ? false : blank(v)), z.boolean().optional()),
   // GTAW and PAW welder variables (QW-404.14, QW-404.22, QW-404.23, QW-408.8, QW-409.4).
   fillerAdded: flag('Filler metal added'),
   consumableInsert: flag('Consumable insert'),

@@ -19,7 +19,7 @@ const ask = (query: string) => inspector.json<Answer>(`/api/coverage?${query}`)
 
 describe('who can weld this joint?', () => {
   it('answers approved WPSs and current, covered welders, each with the findings', async () => {
-    const res = await ask('process=SMAW&unit=in&pNumber=1&thickness=0.5&form=plate&weld=groove&position=V&fNumber=4&backing=true')
+    const res = await ask('process=SMAW&unit=in&pNumber=1&thickness=0.5&form=plate&weld=groove&position=V&fNumber=4&backing=true&progression=uphill')
     expect(res.status).toBe(200)
     expect(res.body.welders.able.length).toBeGreaterThan(0)
     const covering = res.body.procedures.filter(p => p.covered)
@@ -42,7 +42,7 @@ describe('who can weld this joint?', () => {
   })
 
   it('vertical groove on plate needs a 3G, 5G or 6G test (ASME BPVC IX-2023, Table QW-461.9)', async () => {
-    const res = await ask('process=SMAW&thickness=0.25&position=V')
+    const res = await ask('process=SMAW&thickness=0.25&position=V&pNumber=1&fNumber=4&backing=true&progression=uphill')
     const able = res.body.welders.able as unknown as { stamp: string, testIds: number[] }[]
     expect(able.length).toBeGreaterThan(0) // the demo seeds current SMAW welders with 3G tests
     for (const w of able) {
@@ -53,6 +53,19 @@ describe('who can weld this joint?', () => {
     }
     const flatOnly = res.body.welders.notCovered.find(w => w.reasons.some(r => !r.met && /Groove V/.test((r as { text?: string }).text ?? '')))
     expect(flatOnly).toBeDefined()
+  })
+
+  it('a joint that leaves out what the tests restrict is "cannot tell", never covered (never a false yes)', async () => {
+    const res = await ask('process=SMAW&thickness=0.25&position=V')
+    expect(res.status).toBe(200)
+    expect(res.body.welders.able).toEqual([])
+    const undecided = (res.body as unknown as { welders: { undecided: { stamp: string, record: string[] }[] } }).welders.undecided
+    expect(undecided.length).toBeGreaterThan(0)
+    // ASME IX QW-405.3 (progression), QW-402.4 (backing), QW-433 (F-No.), QW-423.1 (P-No.): the demo's SMAW tests record them
+    for (const w of undecided) expect(w.record.length, w.stamp).toBeGreaterThan(0)
+    expect(undecided.flatMap(w => w.record)).toEqual(expect.arrayContaining(['production.progression', 'production.fNumber', 'production.pNumber']))
+    // the joint's backing is not assumed: left out, a test with backing cannot tell (QW-402.4)
+    expect(undecided.some(w => w.record.includes('production.backing'))).toBe(true)
   })
 
   it('a gauge is turned into a thickness by the rules; bad joints are 400 per field', async () => {
