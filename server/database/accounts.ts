@@ -1,8 +1,9 @@
 import bcrypt from 'bcryptjs'
 import { and, count, eq, gt, ilike, isNull, ne, or, sql, type SQL } from 'drizzle-orm'
-import { accountLinkState, linkProblem, issueAccountLink, setPasswordUrl, shopNameOf } from '../utils/mail-links'
+import { linkProblem, setPasswordUrl } from '../utils/mail-links'
 import { passwordResetMail, invitationMail } from '../utils/mail-messages'
-import { sendQueuedMail, queueMail } from '../utils/mail'
+import { sendQueuedMail } from '../utils/mail'
+import { accountLinkState, issueAccountLink, queueMail, shopNameOf } from './mail'
 import type { Db } from './client'
 import { accountTokens, accounts, mailMessages, welders } from './schema'
 import { recordAudit } from './audit'
@@ -197,4 +198,26 @@ export async function signOutEverywhere(db: Db, user: SessionUser, accountId: nu
     return true
   })
   return done ? { signedOut: true } : missing('Account')
+}
+
+/** The account an e-mail address signs in to (any case), with its password hash: the sign-in route compares it. */
+export async function accountForSignIn(db: Db, email: string) {
+  const [account] = await db.select().from(accounts).where(eq(sql`lower(${accounts.email})`, email.toLowerCase())).limit(1)
+  return account
+}
+
+/** The account behind a session token, as every request reads it (server/utils/auth.ts decides if it still holds). */
+export async function sessionAccount(db: Db, id: number) {
+  const [row] = await db.select({
+    id: accounts.id, name: accounts.name, email: accounts.email, role: accounts.role, welderId: accounts.welderId, active: accounts.active,
+    generation: accounts.sessionGeneration,
+  }).from(accounts).where(eq(accounts.id, id)).limit(1)
+  return row
+}
+
+/** Name, address and whether the account is active: enough to tell its owner something by e-mail. */
+export async function accountToTell(db: Db, id: number) {
+  const [account] = await db.select({ id: accounts.id, name: accounts.name, email: accounts.email, active: accounts.active })
+    .from(accounts).where(eq(accounts.id, id)).limit(1)
+  return account
 }

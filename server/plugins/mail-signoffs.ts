@@ -1,3 +1,4 @@
+import { queueMail, shopNameOf } from '../database/mail'
 import { signoffRequestMail } from '../utils/mail-messages'
 
 /** A sign-off request goes by e-mail to each account asked (once per request and account), through the outbox. */

@@ -1,28 +1,13 @@
-import { and, asc, eq, inArray, or } from 'drizzle-orm'
 import { PDFDocument, StandardFonts, rgb } from 'pdf-lib'
 import sharp from 'sharp'
-import type { Db } from '../database/client'
-import { attachments } from '../database/schema'
+import type { Appendix } from '../database/sheet-records'
 import { readStoredFile } from '../utils/storage'
-import type { PacketPlan } from './packet'
 
-interface Appendix { fileName: string, contentType: string, sha256: string, storageKey: string, owner: string }
+// The files themselves are listed by appendicesOf (server/database/sheet-records.ts).
 
 const A4: [number, number] = [595.28, 841.89]
 // The standard PDF fonts cover Latin-1 only; a separator page prints names in that range (the sheet lists them exactly).
 const latin1 = (text: string) => text.normalize('NFKD').replace(/[^\x20-\x7E\xA0-\xFF]/g, '?')
-
-/** The files attached to the packet's WPSs, PQRs and welder tests, in the packet's order. */
-export async function appendicesOf(db: Db, plan: PacketPlan): Promise<Appendix[]> {
-  const owners: [string, number[]][] = [['procedure', plan.procedureIds], ['pqr', plan.pqrIds], ['welder-test', plan.welders.flatMap(w => w.testIds)]]
-  const wanted = owners.filter(([, ids]) => ids.length).map(([type, ids]) => and(eq(attachments.recordType, type), inArray(attachments.recordId, ids))!)
-  if (!wanted.length) return []
-  const rows = await db.select().from(attachments).where(or(...wanted)).orderBy(asc(attachments.recordType), asc(attachments.recordId), asc(attachments.id))
-  const order = new Map(owners.flatMap(([type, ids]) => ids.map((id, i) => [`${type}:${id}`, i] as const)))
-  const rank = (t: string) => owners.findIndex(([type]) => type === t)
-  return rows.sort((a, b) => rank(a.recordType) - rank(b.recordType) || (order.get(`${a.recordType}:${a.recordId}`)! - order.get(`${b.recordType}:${b.recordId}`)!))
-    .map(r => ({ fileName: r.fileName, contentType: r.contentType, sha256: r.sha256, storageKey: r.storageKey, owner: `${r.recordType} ${r.recordId}` }))
-}
 
 /**
  * Appends each attached file after the sheets: a separator page naming it (name, record, SHA-256), then its pages

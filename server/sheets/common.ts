@@ -1,7 +1,7 @@
 import { cautionText, codeName } from '#shared/rules/caution'
 import type { CodeId, Reason } from '#shared/rules/types'
 import type { SheetBlock, SheetModel } from './model'
-import type { SignatureSet } from './records'
+import type { SignatureSet } from '../database/sheet-records'
 
 /** The code paragraph of each group of variables, for the codes whose paragraphs this program carries. */
 const asmeGroups = {

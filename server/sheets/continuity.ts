@@ -1,14 +1,15 @@
 import { addDays, format, parseISO } from 'date-fns'
-import { and, asc, eq, lte } from 'drizzle-orm'
 import type { Db } from '../database/client'
-import { accounts, continuityEntries, procedures, welders, welderTests } from '../database/schema'
 import { canonicalJson, sha256Hex } from '../database/signing'
+import { loadCertifiedTests, loadUses, welderOf, type CertifiedTest } from '../database/sheet-records'
 import { processStanding, type ProcessStanding } from '#shared/qualification/process-standing'
 import type { CodeId } from '#shared/rules/types'
 
 export interface Period { from: string, to: string }
 
-interface CertifiedTest { id: number, process: string, code: string, edition: string, testDate: string, procedure: string | null }
+// What a log is built from is read in server/database/sheet-records.ts; packet.ts still imports these two from here.
+export { loadCertifiedTests, loadUses }
+
 interface Use { process: string, weldedOn: string }
 
 /** Where the welder stands for a process on a day, from the latest certified test on or before it (null: none yet). */
@@ -47,28 +48,8 @@ export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: strin
   return gaps.filter(g => g.from <= g.to)
 }
 
-export async function loadCertifiedTests(db: Db, welderId: number, upTo: string): Promise<CertifiedTest[]> {
-  const rows = await db.select({
-    id: welderTests.id, process: welderTests.process, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate,
-    number: procedures.number, revision: procedures.revision,
-  }).from(welderTests).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
-    .where(and(eq(welderTests.welderId, welderId), eq(welderTests.status, 'certified'), lte(welderTests.testDate, upTo)))
-    .orderBy(asc(welderTests.testDate), asc(welderTests.id))
-  return rows.map(r => ({ ...r, procedure: r.number === null ? null : `${r.number} rev. ${r.revision}` }))
-}
-
-/** Every logged use up to the end of the period: the chain of continuity needs the uses before it starts too. */
-export async function loadUses(db: Db, welderId: number, upTo: string) {
-  return db.select({
-    id: continuityEntries.id, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn,
-    reference: continuityEntries.reference, recordedBy: accounts.name,
-  }).from(continuityEntries).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))
-    .where(and(eq(continuityEntries.welderId, welderId), lte(continuityEntries.weldedOn, upTo)))
-    .orderBy(asc(continuityEntries.weldedOn), asc(continuityEntries.id))
-}
-
 export async function loadContinuityLog(db: Db, welderId: number, period: Period) {
-  const [welder] = await db.select().from(welders).where(eq(welders.id, welderId))
+  const welder = await welderOf(db, welderId)
   if (!welder) return null
   const [tests, uses] = await Promise.all([loadCertifiedTests(db, welderId, period.to), loadUses(db, welderId, period.to)])
   const processes = [...new Set([...tests.map(t => t.process), ...uses.map(u => u.process)])].sort()
@@ -84,11 +65,3 @@ export async function loadContinuityLog(db: Db, welderId: number, period: Period
   return { welder, period, tests, uses: inPeriod, standings, sha256: sha256Hex(canonicalJson(content)) }
 }
 export type ContinuityLog = NonNullable<Awaited<ReturnType<typeof loadContinuityLog>>>
-
-/** The first day the welder has anything on record (a test or a logged use), for a log "from the start". */
-export async function firstRecordDay(db: Db, welderId: number): Promise<string | null> {
-  const [test] = await db.select({ day: welderTests.testDate }).from(welderTests).where(eq(welderTests.welderId, welderId)).orderBy(asc(welderTests.testDate)).limit(1)
-  const [use] = await db.select({ day: continuityEntries.weldedOn }).from(continuityEntries).where(eq(continuityEntries.welderId, welderId)).orderBy(asc(continuityEntries.weldedOn)).limit(1)
-  const days = [test?.day, use?.day].filter((d): d is string => !!d).sort()
-  return days[0] ?? null
-}

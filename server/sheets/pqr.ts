@@ -1,7 +1,7 @@
 import { evaluate } from '#shared/rules'
 import type { Reason, Unit } from '#shared/rules/types'
 import type { SheetBlock, SheetField, SheetModel } from './model'
-import type { PqrRecord } from './records'
+import type { PqrRecord } from '../database/sheet-records'
 import { caution, certification, codeLine, groupClause, isCode, reasonsBlock, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, temperature, yesNo } from './format'
 import { unitLabels } from '#shared/qualification/procedure-units'

@@ -1,8 +1,6 @@
 import type { H3Event } from 'h3'
-import { and, eq } from 'drizzle-orm'
 import type { Db } from '../database/client'
-import { issuedSheets, projects, signatures } from '../database/schema'
-import { newVerifyCode } from '../database/signing'
+import { issueContinuityLog, loadPqr, loadProcedure, loadWelderTest, projectDates, shopName } from '../database/sheet-records'
 import type { SessionUser } from '../utils/auth'
 import { loadContinuityLog, type Period } from './continuity'
 import { continuitySheet } from './continuity-sheet'
@@ -11,7 +9,6 @@ import { documentBase, labelled, PageTracker, sheetSection } from './layout'
 import { sheetReference, type SheetModel } from './model'
 import { renderPdf } from './pdf'
 import { pqrSheet } from './pqr'
-import { loadPqr, loadProcedure, loadWelderTest, shopName } from './records'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
 import { todayIso } from '../utils/today'
@@ -71,34 +68,15 @@ export async function welderTestSheet(db: Db, id: number, origin: string) {
 export async function continuityLogSheet(db: Db, welderId: number, period: Period, user: Pick<SessionUser, 'id' | 'name'>, origin: string) {
   const log = await loadContinuityLog(db, welderId, period)
   if (!log) return null
-  const match = and(eq(issuedSheets.kind, 'continuity-log'), eq(issuedSheets.welderId, welderId), eq(issuedSheets.periodFrom, period.from),
-    eq(issuedSheets.periodTo, period.to), eq(issuedSheets.sha256, log.sha256))
-  let [issue] = await db.select().from(issuedSheets).where(match).limit(1)
-  if (!issue) {
-    const code = await unusedCode(db)
-    ;[issue] = await db.insert(issuedSheets).values({
-      kind: 'continuity-log', welderId, periodFrom: period.from, periodTo: period.to, sha256: log.sha256, verifyCode: code,
-      issuedBy: user.id, issuerName: user.name,
-    }).onConflictDoNothing().returning()
-    if (!issue) [issue] = await db.select().from(issuedSheets).where(match).limit(1)
-  }
+  const issue = await issueContinuityLog(db, welderId, period, log.sha256, user)
   return continuitySheet(log, await shopName(db), {
-    code: issue!.verifyCode, url: verifyUrl(origin, issue!.verifyCode), issuerName: issue!.issuerName, issuedAt: issue!.issuedAt.toISOString(),
+    code: issue.verifyCode, url: verifyUrl(origin, issue.verifyCode), issuerName: issue.issuerName, issuedAt: issue.issuedAt.toISOString(),
   })
-}
-
-async function unusedCode(db: Db) {
-  for (;;) {
-    const code = newVerifyCode()
-    const [a] = await db.select({ id: signatures.id }).from(signatures).where(eq(signatures.verifyCode, code)).limit(1)
-    const [b] = await db.select({ id: issuedSheets.id }).from(issuedSheets).where(eq(issuedSheets.verifyCode, code)).limit(1)
-    if (!a && !b) return code
-  }
 }
 
 /** The period of a project, closed at today when it is still open. */
 export async function projectPeriod(db: Db, projectId: number): Promise<Period | null> {
-  const [p] = await db.select({ startsOn: projects.startsOn, endsOn: projects.endsOn }).from(projects).where(eq(projects.id, projectId))
+  const p = await projectDates(db, projectId)
   if (!p) return null
   const today = todayIso()
   return { from: p.startsOn, to: p.endsOn && p.endsOn < today ? p.endsOn : today }

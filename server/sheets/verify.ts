@@ -1,7 +1,8 @@
-import { and, asc, eq } from 'drizzle-orm'
 import type { Db } from '../database/client'
-import { issuedSheets, pqrs, procedures, signatures, welders, welderTests } from '../database/schema'
+import type { signatures } from '../database/schema'
 import { contentFormatOf, contentHash, type SignedRecordType } from '../database/signing'
+import { issuedSheetByCode, recordHead, signatureByCode, signersOf, welderOf } from '../database/sheet-records'
+import { missing, type Outcome } from '../../shared/types/outcome'
 import { loadContinuityLog } from './continuity'
 
 export interface Verification {
@@ -24,13 +25,13 @@ const sheetNames: Record<SignedRecordType, string> = {
   'welder-test': 'Welder performance qualification (WPQ)',
 }
 
-/** What the public verification page shows for a code: no more than the sheet itself prints. */
-export async function verifyCode(db: Db, code: string): Promise<Verification | null> {
-  const [signature] = await db.select().from(signatures).where(eq(signatures.verifyCode, code)).limit(1)
-  if (signature) return verifySigned(db, code, signature)
-  const [issue] = await db.select().from(issuedSheets).where(eq(issuedSheets.verifyCode, code)).limit(1)
-  if (!issue) return null
-  const [welder] = await db.select({ name: welders.name, stamp: welders.stamp }).from(welders).where(eq(welders.id, issue.welderId))
+/** What the public verification page shows for a code: no more than the sheet itself prints. Missing for an unknown code. */
+export async function verifyCode(db: Db, code: string): Promise<Outcome<Verification>> {
+  const signature = await signatureByCode(db, code)
+  if (signature) return await verifySigned(db, code, signature) ?? missing('Sheet with this code')
+  const issue = await issuedSheetByCode(db, code)
+  if (!issue) return missing('Sheet with this code')
+  const welder = await welderOf(db, issue.welderId)
   const log = await loadContinuityLog(db, issue.welderId, { from: issue.periodFrom, to: issue.periodTo })
   return {
     code, sheet: 'Continuity log', number: `CL-${welder?.stamp ?? ''}`, revision: null,
@@ -45,26 +46,11 @@ async function verifySigned(db: Db, code: string, signature: typeof signatures.$
   const id = signature.recordId
   const head = await recordHead(db, type, id)
   if (!head) return null
-  const all = await db.select({ meaning: signatures.meaning, name: signatures.signerName, at: signatures.signedAt, version: signatures.recordVersion })
-    .from(signatures).where(and(eq(signatures.recordType, type), eq(signatures.recordId, id))).orderBy(asc(signatures.signedAt), asc(signatures.id))
+  const all = await signersOf(db, type, id)
   const current = await contentHash(db, type, id, contentFormatOf(signature.contentFormat))
   return {
     code, sheet: sheetNames[type], ...head,
     signers: all.filter(s => s.version === signature.recordVersion).map(s => ({ meaning: s.meaning, name: s.name, at: s.at.toISOString() })),
     state: current === signature.sha256 ? 'unchanged' : 'changed', signedSha256: signature.sha256,
   }
-}
-
-async function recordHead(db: Db, type: SignedRecordType, id: number) {
-  if (type === 'procedure') {
-    const [p] = await db.select({ number: procedures.number, revision: procedures.revision, status: procedures.status, title: procedures.title }).from(procedures).where(eq(procedures.id, id))
-    return p ? { number: p.number, revision: p.revision, subject: p.title, status: p.status } : null
-  }
-  if (type === 'pqr') {
-    const [q] = await db.select({ number: pqrs.number, status: pqrs.status, process: pqrs.process, testDate: pqrs.testDate }).from(pqrs).where(eq(pqrs.id, id))
-    return q ? { number: q.number, revision: null, subject: `${q.process}, tested ${q.testDate}`, status: q.status } : null
-  }
-  const [t] = await db.select({ id: welderTests.id, status: welderTests.status, process: welderTests.process, testDate: welderTests.testDate, name: welders.name, stamp: welders.stamp })
-    .from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).where(eq(welderTests.id, id))
-  return t ? { number: `WPQ-${t.id}`, revision: null, subject: `${t.name} (${t.stamp}), ${t.process}, tested ${t.testDate}`, status: t.status } : null
 }

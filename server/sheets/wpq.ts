@@ -2,7 +2,7 @@ import { depositsOf, variablesOf } from '../database/welder-test-columns'
 import { qualifiedRangesOf } from '#shared/qualification/test-ranges'
 import type { Reason, Unit, WelderRangesResult } from '#shared/rules'
 import type { SheetBlock, SheetField, SheetModel } from './model'
-import type { WelderTestRecord } from './records'
+import type { WelderTestRecord } from '../database/sheet-records'
 import { caution, certification, codeLine, reasonsBlock, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, yesNo } from './format'
 

@@ -2,7 +2,7 @@ import { passTable, tungstenProcesses, wireProcesses, type ProcedureLayer } from
 import { unitLabels } from '#shared/qualification/procedure-units'
 import type { Unit } from '#shared/rules/types'
 import type { SheetBlock, SheetField, SheetModel } from './model'
-import type { ProcedureRecord } from './records'
+import type { ProcedureRecord } from '../database/sheet-records'
 import { draftOf, layeredSupport } from '../database/procedures'
 import { caution, codeLine, groupClause, isCode, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, temperature, windowText, yesNo } from './format'

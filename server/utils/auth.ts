@@ -1,8 +1,7 @@
 import type { H3Event } from 'h3'
-import { eq } from 'drizzle-orm'
 import { getToken } from '#auth'
 import type { JWT } from 'next-auth/jwt'
-import { accounts } from '../database/schema'
+import { sessionAccount } from '../database/accounts'
 
 export interface SessionUser {
   id: number
@@ -53,10 +52,7 @@ export function sessionTokenCurrent(token: JWT, now = Date.now()) {
 /** The account of a session whose generation is still the account's: active, a known role. */
 export async function loadUser(id: number, generation: number): Promise<SessionUser | null> {
   const db = await useDb()
-  const [row] = await db.select({
-    id: accounts.id, name: accounts.name, email: accounts.email, role: accounts.role, welderId: accounts.welderId, active: accounts.active,
-    generation: accounts.sessionGeneration,
-  }).from(accounts).where(eq(accounts.id, id)).limit(1)
+  const row = await sessionAccount(db, id)
   if (!row?.active || !isRole(row.role) || row.generation !== generation) return null
   return { id: row.id, name: row.name, email: row.email, role: row.role, welderId: row.welderId }
 }

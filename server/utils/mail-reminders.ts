@@ -1,9 +1,7 @@
-import { and, eq } from 'drizzle-orm'
 import type { Db } from '../database/client'
-import { accounts, welders } from '../database/schema'
+import { activeQualityManagers, queueMail, reminderRoster } from '../database/mail'
 import { digestWindowDays, isoWeekOf, reminderStepFor } from '#shared/mail/reminder-steps'
 import { standingsOf } from '../database/standings'
-import { queueMail } from './mail'
 import { lapseReminderMail, weeklyDigestMail, type DigestRow } from './mail-messages'
 
 export interface ReminderRun {
@@ -21,9 +19,7 @@ export interface ReminderRun {
  * Dedupe keys make a re-run (same day, or a missed day caught up) queue nothing twice.
  */
 export async function queueReminders(db: Db, today: string, base: string, shopName: string): Promise<ReminderRun> {
-  const roster = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp, email: welders.email, accountEmail: accounts.email })
-    .from(welders).leftJoin(accounts, and(eq(accounts.welderId, welders.id), eq(accounts.active, true)))
-    .where(eq(welders.status, 'active')).orderBy(welders.stamp)
+  const roster = await reminderRoster(db)
   const byId = new Map<number, (typeof roster)[number]>()
   for (const w of roster) if (!byId.has(w.id)) byId.set(w.id, w)
   const standings = await standingsOf(db, [...byId.keys()], today)
@@ -46,8 +42,7 @@ export async function queueReminders(db: Db, today: string, base: string, shopNa
   }
 
   digest.sort((a, b) => a.standing.lapsesOn.localeCompare(b.standing.lapsesOn) || a.stamp.localeCompare(b.stamp) || a.standing.process.localeCompare(b.standing.process))
-  const managers = await db.select({ id: accounts.id, name: accounts.name, email: accounts.email }).from(accounts)
-    .where(and(eq(accounts.role, 'supervisor'), eq(accounts.active, true))).orderBy(accounts.id)
+  const managers = await activeQualityManagers(db)
   for (const account of managers) {
     const mail = weeklyDigestMail({ week: run.week, account, today, windowDays: digestWindowDays, rows: digest, link: `${base}/welders`, shopName })
     if (await queueMail(db, mail)) run.digestsQueued++

@@ -1,13 +1,13 @@
 import type { H3Event } from 'h3'
 import { isIP } from 'node:net'
-import { eq, sql } from 'drizzle-orm'
 import type { Db } from '../database/client'
-import { accounts, signInFailures } from '../database/schema'
+import { accountToTell } from '../database/accounts'
 import { renderLetter } from './mail-letter'
-import { queueMail, sendSoon } from './mail'
-import { appUrl, shopNameOf } from './mail-links'
+import { queueMail, shopNameOf } from '../database/mail'
+import { sendSoon } from './mail'
+import { appUrl } from './mail-links'
 
-// Failed sign-ins are counted in the database (sign_in_failures), per account ('account:<e-mail>') and per client
+// Failed sign-ins are counted in the database (sign_in_failures, queries in server/database/sign-in.ts), per account ('account:<e-mail>') and per client
 // address ('address:<ip>'), so every app server sees the same counts and a restart does not forget them.
 // - After FREE_FAILURES failures each further attempt waits 250 ms, 500 ms, 1 s ... up to MAX_DELAY_MS.
 // - At ACCOUNT_LIMIT failures for an account (ADDRESS_LIMIT for an address) sign-in is refused (429) for LOCK_MINUTES;
@@ -71,77 +71,9 @@ export function clientAddress(event: H3Event, trusted = trustedProxies()): strin
   return peer
 }
 
-/** Counts this attempt against every key, or refuses it when a key is locked or already at its limit. */
-export async function reserveSignIn(db: Db, keys: ThrottleKey[]): Promise<Reserve> {
-  return db.transaction(async (tx) => {
-    let attempt = 0
-    let refusedUntil = null as Date | null
-    const taken: string[] = []
-    for (const { key, limit } of keys) {
-      await tx.insert(signInFailures).values({ key, failures: 0 }).onConflictDoNothing()
-      const [row] = await tx.select().from(signInFailures).where(eq(signInFailures.key, key)).for('update')
-      const now = new Date()
-      if (row!.lockedUntil && row!.lockedUntil > now) {
-        refusedUntil = refusedUntil && refusedUntil > row!.lockedUntil ? refusedUntil : row!.lockedUntil
-        continue
-      }
-      const stale = now.getTime() - row!.lastFailureAt.getTime() > WINDOW_MINUTES * 60_000 || (row!.lockedUntil && row!.lockedUntil <= now)
-      const before = stale ? 0 : row!.failures
-      if (before >= limit) {
-        // Attempts in flight already reached the limit: refuse without waiting for them to fail.
-        refusedUntil = new Date(now.getTime() + 60_000)
-        continue
-      }
-      attempt = Math.max(attempt, before + 1)
-      taken.push(key)
-      await tx.update(signInFailures).set({ failures: before + 1, lastFailureAt: sql`now()`, lockedUntil: null }).where(eq(signInFailures.key, key))
-    }
-    if (refusedUntil) {
-      // Give back what this attempt took from the other keys.
-      for (const key of taken) {
-        await tx.update(signInFailures).set({ failures: sql`greatest(${signInFailures.failures} - 1, 0)` }).where(eq(signInFailures.key, key))
-      }
-      return { ok: false, retryAfterSeconds: Math.max(1, Math.ceil((refusedUntil.getTime() - Date.now()) / 1000)) }
-    }
-    return { ok: true, reservation: { keys, attempt }, delayMs: delayForAttempt(attempt) }
-  })
-}
-
-/** The attempt failed: keys that reached their limit are locked. Returns whether the account key was locked now. */
-export async function signInFailed(db: Db, reservation: Reservation): Promise<{ accountLocked: boolean }> {
-  let accountLocked = false
-  for (const { key, limit } of reservation.keys) {
-    const [locked] = await db.update(signInFailures)
-      .set({ lockedUntil: sql`now() + make_interval(mins => ${LOCK_MINUTES})` })
-      .where(sql`${signInFailures.key} = ${key} and ${signInFailures.failures} >= ${limit} and ${signInFailures.lockedUntil} is null`)
-      .returning({ key: signInFailures.key })
-    if (locked && key.startsWith('account:')) accountLocked = true
-  }
-  return { accountLocked }
-}
-
-/** The attempt succeeded: the account starts afresh; the address gives back this attempt only. */
-export async function signInSucceeded(db: Db, reservation: Reservation) {
-  for (const { key } of reservation.keys) {
-    if (key.startsWith('account:')) await db.delete(signInFailures).where(eq(signInFailures.key, key))
-    else await releaseAttempt(db, key)
-  }
-}
-
-/** The attempt never reached the password check (e.g. a missing CSRF token): it does not count. */
-export async function signInAbandoned(db: Db, reservation: Reservation) {
-  for (const { key } of reservation.keys) await releaseAttempt(db, key)
-}
-
-async function releaseAttempt(db: Db, key: string) {
-  await db.update(signInFailures).set({ failures: sql`greatest(${signInFailures.failures} - 1, 0)` })
-    .where(sql`${signInFailures.key} = ${key} and ${signInFailures.lockedUntil} is null`)
-}
-
 /** Tells the account's owner that sign-in was locked after repeated failures (once per lock). */
 export async function mailAccountLocked(db: Db, accountId: number, now = new Date()) {
-  const [account] = await db.select({ id: accounts.id, name: accounts.name, email: accounts.email, active: accounts.active })
-    .from(accounts).where(eq(accounts.id, accountId)).limit(1)
+  const account = await accountToTell(db, accountId)
   if (!account?.active) return
   const shopName = await shopNameOf(db)
   const body = renderLetter({

@@ -1,12 +1,11 @@
 import { AsyncLocalStorage } from 'node:async_hooks'
 import bcrypt from 'bcryptjs'
-import { eq, sql } from 'drizzle-orm'
 import type { H3Event } from 'h3'
 import CredentialsProvider from 'next-auth/providers/credentials'
 import { NuxtAuthHandler } from '#auth'
 import type { Db } from '../../database/client'
-import { endSessions } from '../../database/accounts'
-import { accounts } from '../../database/schema'
+import { accountForSignIn, endSessions } from '../../database/accounts'
+import { reserveSignIn, signInAbandoned, signInFailed, signInSucceeded } from '../../database/sign-in'
 import type { Reservation } from '../../utils/sign-in-throttle'
 import { signInSchema } from '#shared/schemas/auth'
 
@@ -35,7 +34,7 @@ const handler = NuxtAuthHandler({
           return null
         }
         const db = await useDb()
-        const [account] = await db.select().from(accounts).where(eq(sql`lower(${accounts.email})`, parsed.data.email.toLowerCase())).limit(1)
+        const account = await accountForSignIn(db, parsed.data.email)
         const usable = !!(account?.active && account.passwordHash)
         const matches = await bcrypt.compare(parsed.data.password, usable ? account!.passwordHash! : DUMMY_HASH)
         if (attempt) attempt.accountId = account?.id

@@ -1,4 +1,5 @@
 import { linkQuerySchema } from '#shared/schemas/password'
+import { accountLinkState } from '../../database/mail'
 
 /** GET /api/password/link?token=: whether a set-password link still works, and for whom (public; the token is the proof) */
 export default defineEventHandler(async (event) => {

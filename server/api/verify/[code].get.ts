@@ -7,7 +7,7 @@ import { verifyCode } from '../../sheets/verify'
  */
 export default defineEventHandler(async (event) => {
   const { code } = await validParams(event, verifyCodeSchema)
-  const result = orThrow(await verifyCode(await useDb(), code) ?? missing('Sheet with this code'))
+  const result = orThrow(await verifyCode(await useDb(), code))
   setResponseHeader(event, 'cache-control', 'no-store')
   return result
 })

@@ -1,3 +1,5 @@
+import { shopNameOf } from '../../database/mail'
+
 /** mail:reminders (daily at 06:00): queue lapse reminders and the weekly digest, then send the outbox. Payload `today` sets the day. */
 export default defineTask({
   meta: { name: 'mail:reminders', description: 'Lapse reminders (30, 14, 7 days) and the weekly lapse digest' },

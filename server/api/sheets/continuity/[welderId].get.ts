@@ -1,6 +1,6 @@
 import { continuityQuerySchema, welderParamSchema } from '#shared/schemas/sheet'
 import { mayReadWelder } from '../../../database/welders'
-import { firstRecordDay } from '../../../sheets/continuity'
+import { firstRecordDay } from '../../../database/sheet-records'
 import { respondWithSheet } from '../../../sheets/download'
 import { continuityLogSheet, projectPeriod, publicOrigin } from '../../../sheets/sheets'
 
