@@ -1,0 +1,44 @@
+import { createRequire } from 'node:module'
+import { expect, test } from '@playwright/test'
+import { signIn } from './support/sign-in'
+
+type Convert = (value: number) => { from: (unit: string) => { to: (unit: string) => number } }
+const convert = createRequire(import.meta.url)('convert-units') as Convert
+
+// Lengths are typed as the trade writes them: 3/8 is three eighths of an inch (0.375), never 38; a length typed in the
+// other unit is not taken as typed: the field asks first.
+
+test('3/8 typed in the contact-tip-to-work window of a WPS is saved as 0.375 in', async ({ page }) => {
+  await signIn(page, 'supervisor@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/procedures?q=KB-W05')
+  await page.getByRole('link', { name: 'KB-W05 rev. 0' }).click()
+  await page.getByRole('link', { name: 'Edit draft' }).click()
+  await expect(page.getByRole('button', { name: 'Save draft' })).toBeEnabled()
+  const ctwd = page.getByTestId('window-layers.0.ctwd')
+  await ctwd.getByRole('button', { name: 'min–max' }).click()
+  await page.getByLabel('Contact tip to work minimum').fill('3/8')
+  await page.getByLabel('Contact tip to work maximum').fill('1/2')
+  await page.getByLabel('Contact tip to work maximum').blur()
+  await page.getByRole('button', { name: 'Save draft' }).click()
+  await expect(page).toHaveURL(/\/procedures\/\d+$/)
+  // 3/8 in = 0.375 in, 1/2 in = 0.5 in (common practice: fractions of an inch)
+  await expect(page.getByText('0.375 to 0.5 in')).toBeVisible()
+})
+
+test('"2 mm" typed in an inch welder test\'s bend discontinuity asks before converting', async ({ page }) => {
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/tests/new')
+  await expect(page.getByRole('button', { name: 'Save test' })).toBeEnabled()
+  await expect(page.getByRole('combobox', { name: 'Unit of this record', exact: true })).toHaveValue('in')
+  await page.getByRole('button', { name: 'Add bend specimen' }).click()
+  const field = page.getByLabel('Specimen 1 largest open discontinuity')
+  await field.fill('2 mm')
+  await field.blur()
+  // 2 mm in inches, rounded to 4 decimals, cross-checked with convert-units
+  const inches = Math.round(convert(2).from('mm').to('in') * 10_000) / 10_000
+  const question = page.getByTestId('bend-0').getByRole('alert')
+  await expect(question).toContainText(`2 mm is ${inches} in; this record is in in.`)
+  await expect(question.getByRole('button', { name: `Use ${inches} in` })).toBeVisible()
+})
