@@ -42,3 +42,34 @@ test('"2 mm" typed in an inch welder test\'s bend discontinuity asks before conv
   await expect(question).toContainText(`2 mm is ${inches} in; this record is in in.`)
   await expect(question.getByRole('button', { name: `Use ${inches} in` })).toBeVisible()
 })
+
+test('a welder downloads the sheet of their own test from its page, and not another welder\'s', async ({ page }) => {
+  await signIn(page, 'welder@demo.rootface.test')
+  await expect(page).toHaveURL(/\/me$/)
+  await page.getByRole('region', { name: 'My tests' }).getByRole('link').first().click()
+  await expect(page).toHaveURL(/\/tests\/\d+$/)
+  const own = Number(/\/tests\/(\d+)$/.exec(page.url())![1])
+  const pdf = page.getByTestId('sheet-actions').getByRole('link', { name: /PDF sheet of/ })
+  await expect(pdf).toHaveAttribute('href', `/api/sheets/tests/${own}`)
+  await expect(page.getByTestId('sheet-actions').getByRole('button', { name: /Print the sheet of/ })).toBeVisible()
+  const mine = await page.request.get(`/api/sheets/tests/${own}`)
+  expect(mine.status()).toBe(200)
+  expect(mine.headers()['content-type']).toContain('application/pdf')
+  // Another welder's test is not there for this welder: 404, as for a record that does not exist.
+  const list = await page.request.get('/api/tests?pageSize=200')
+  const ownIds = ((await list.json()) as { items: { id: number }[] }).items.map(t => t.id)
+  const other = [1, 2, 3, 4, 5, 6].find(n => !ownIds.includes(n))!
+  expect((await page.request.get(`/api/sheets/tests/${other}`)).status()).toBe(404)
+})
+
+test('the WPS page offers its PDF sheet and Print to an inspector', async ({ page }) => {
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/procedures?q=KB-W01')
+  await page.getByRole('link', { name: 'KB-W01 rev. 0' }).click()
+  const pdf = page.getByTestId('sheet-actions').getByRole('link', { name: 'PDF sheet of WPS KB-W01 rev. 0' })
+  const href = await pdf.getAttribute('href')
+  const answer = await page.request.get(href!)
+  expect(answer.status()).toBe(200)
+  expect(answer.headers()['content-type']).toContain('application/pdf')
+})
