@@ -73,3 +73,37 @@ test('the WPS page offers its PDF sheet and Print to an inspector', async ({ pag
   expect(answer.status()).toBe(200)
   expect(answer.headers()['content-type']).toContain('application/pdf')
 })
+
+test('"Certify result" asks first, naming the welder, stamp and what the signature means; Cancel signs nothing', async ({ page }) => {
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  const list = await page.request.get('/api/tests?status=recorded&pageSize=50')
+  const recorded = ((await list.json()) as { items: { id: number, welderName: string, welderStamp: string }[] }).items[0]!
+  await page.goto(`/tests/${recorded.id}`)
+  await page.getByRole('button', { name: /Certify result/ }).click()
+  const dialog = page.getByRole('dialog', { name: 'Certify this welder test' })
+  await expect(dialog).toContainText(`${recorded.welderName}, stamp ${recorded.welderStamp}`)
+  await expect(dialog.getByTestId('sign-meaning')).toContainText('Your signature certifies')
+  await dialog.getByRole('button', { name: 'Cancel' }).click()
+  await expect(dialog).toBeHidden()
+  await page.reload()
+  await expect(page.getByTestId('test-status')).toHaveText('○ Recorded, awaiting certification')
+})
+
+test('a half-filled WPS is not lost to a menu click: the page asks first', async ({ page }) => {
+  await signIn(page, 'supervisor@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/procedures/new')
+  await expect(page.getByRole('button', { name: 'Save draft' })).toBeEnabled()
+  await page.getByLabel('WPS number').fill('KB-W99')
+  const asked: string[] = []
+  page.once('dialog', (d) => {
+    asked.push(d.message())
+    void d.dismiss()
+  })
+  await page.getByRole('link', { name: 'Roster', exact: true }).click()
+  await expect.poll(() => asked.length).toBe(1)
+  expect(asked[0]).toContain('not saved')
+  await expect(page).toHaveURL(/\/procedures\/new$/)
+  await expect(page.getByLabel('WPS number')).toHaveValue('KB-W99')
+})
