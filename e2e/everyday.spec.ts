@@ -32,6 +32,7 @@ test('"2 mm" typed in an inch welder test\'s bend discontinuity asks before conv
   await page.goto('/tests/new')
   await expect(page.getByRole('button', { name: 'Save test' })).toBeEnabled()
   await expect(page.getByRole('combobox', { name: 'Unit of this record', exact: true })).toHaveValue('in')
+  await page.getByRole('radiogroup', { name: 'Visual examination' }).getByLabel('Accepted').check()
   await page.getByRole('button', { name: 'Add bend specimen' }).click()
   const field = page.getByLabel('Specimen 1 largest open discontinuity')
   await field.fill('2 mm')

@@ -19,7 +19,9 @@ test('the supervisor drafts a short-circuit GMAW sheet WPS from PQR-K101, fixes 
   await expect(page.getByTestId('support-verdict')).toHaveText(/Within support/)
 
   await page.getByLabel('Joint type').fill('butt')
-  await page.getByLabel('Diameter').fill('0.035')
+  await page.getByLabel('Specification', { exact: true }).fill('SFA-5.18')
+  await page.getByLabel('Classification', { exact: true }).fill('ER70S-6')
+  await page.getByLabel('Diameter', { exact: true }).fill('0.035')
   await page.getByRole('group', { name: 'Voltage: how the window is written' }).getByRole('button', { name: '± trim' }).click()
   await page.getByLabel('Voltage set point').fill('18.2')
   await page.getByLabel('Voltage trim').fill('1')
