@@ -108,3 +108,32 @@ test('a half-filled WPS is not lost to a menu click: the page asks first', async
   await expect(page).toHaveURL(/\/procedures\/new$/)
   await expect(page.getByLabel('WPS number')).toHaveValue('KB-W99')
 })
+
+test('the welder\'s phone page: fewest days left first, only WPSs of processes they are current in, a copy button for the calendar address', async ({ browser }) => {
+  const phone = await browser.newContext({ viewport: { width: 375, height: 800 } })
+  await phone.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: test.info().project.use.baseURL! })
+  const page = await phone.newPage()
+  await signIn(page, 'welder@demo.rootface.test')
+  await expect(page).toHaveURL(/\/me$/)
+  const answer = await page.request.get('/api/me/qualifications')
+  const mine = (await answer.json()) as { standings: { process: string, daysLeft: number, standing: string }[], procedures: { number: string, processes: string[] }[] }
+  const days = mine.standings.map(s => s.daysLeft)
+  expect(days).toEqual([...days].sort((a, b) => a - b))
+  const shown = await page.locator('[data-testid^="process-"]').evaluateAll(els => els.map(e => e.getAttribute('data-testid')))
+  expect(shown).toEqual(mine.standings.map(s => `process-${s.process}`))
+  const current = new Set(mine.standings.filter(s => s.standing !== 'lapsed').map(s => s.process))
+  for (const p of mine.procedures) {
+    expect(p.processes.length).toBeGreaterThan(0)
+    expect(p.processes.every(process => current.has(process)), `${p.number}: ${p.processes.join(' + ')}`).toBe(true)
+  }
+  await expect(page.getByTestId('my-procedure')).toHaveCount(mine.procedures.length)
+  expect(await page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth)).toBe(false)
+
+  await page.getByRole('button', { name: /subscription address/ }).first().click()
+  const address = page.getByLabel('Subscription address')
+  await expect(address).toHaveValue(/\/api\/me\/feed\/.+\.ics$/)
+  await page.getByRole('button', { name: 'Copy address' }).click()
+  await expect(page.getByRole('status').filter({ hasText: 'Copied.' })).toBeVisible()
+  expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(await address.inputValue())
+  await phone.close()
+})
