@@ -137,3 +137,56 @@ test('the welder\'s phone page: fewest days left first, only WPSs of processes t
   expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(await address.inputValue())
   await phone.close()
 })
+
+test('picking the WPS on a new welder test fills the code, edition, unit, processes and base metal from it', async ({ page }) => {
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  const list = await page.request.get('/api/procedures?q=KB-W05&pageSize=5')
+  const { id } = ((await list.json()) as { items: { id: number }[] }).items[0]!
+  const wps = (await (await page.request.get(`/api/procedures/${id}`)).json()) as { procedure: { code: string, edition: string, unit: string }, draft: { baseMetals: { a: { pNumber: string } }, layers: { process: string }[] } }
+  await page.goto('/tests/new')
+  await expect(page.getByRole('button', { name: 'Save test' })).toBeEnabled()
+  await page.getByRole('combobox', { name: 'WPS followed', exact: true }).selectOption({ value: String(id) })
+  await expect(page.getByRole('combobox', { name: 'Code', exact: true })).toHaveValue(wps.procedure.code)
+  await expect(page.getByRole('combobox', { name: 'Edition', exact: true })).toHaveValue(wps.procedure.edition)
+  await expect(page.getByRole('combobox', { name: 'Unit of this record', exact: true })).toHaveValue(wps.procedure.unit)
+  await expect(page.getByRole('combobox', { name: 'Process 1', exact: true })).toHaveValue(wps.draft.layers[0]!.process)
+  await expect(page.getByLabel('Base metal P-No.')).toHaveValue(wps.draft.baseMetals.a.pNumber)
+})
+
+test('a CSV chosen again under the same name after a fix is read again; a row error names the line, column and value', async ({ page }) => {
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/continuity/import')
+  const input = page.locator('input[type=file]')
+  await expect(input).toBeEnabled()
+  const day = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10)
+  const choose = async (body: string) => {
+    const chooser = page.waitForEvent('filechooser')
+    await input.click()
+    await (await chooser).setFiles({ name: 'shift.csv', mimeType: 'text/csv', buffer: Buffer.from(body) })
+  }
+  await choose(`stamp,process,date,reference\nKB-01,SMAW,31/12/2025,e2e import\n`)
+  const errors = page.getByRole('table', { name: 'Row errors' })
+  const row = errors.getByRole('row').nth(1)
+  await expect(row).toContainText('2')
+  await expect(row).toContainText('date')
+  await expect(row).toContainText('31/12/2025')
+  await expect(row).not.toContainText('weldedOn')
+  await choose(`stamp,process,date,reference\nKB-01,SMAW,${day},e2e import\n`)
+  await expect(errors).toHaveCount(0)
+  await expect(page.getByRole('button', { name: 'Import 1 entries' })).toBeEnabled()
+})
+
+test('the sheet gauge picker clears when the thickness is typed by hand', async ({ page }) => {
+  await signIn(page, 'supervisor@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/procedures/new')
+  await expect(page.getByRole('button', { name: 'Save draft' })).toBeEnabled()
+  const gauge = page.getByLabel('Sheet gauge, thickest')
+  await gauge.selectOption('10')
+  // 10 ga sheet steel is 0.1345 in (Manufacturers' Standard Gauge, common practice)
+  await expect(page.getByLabel('Groove welds, base metal, to')).toHaveValue('0.1345')
+  await page.getByLabel('Groove welds, base metal, to').fill('1/4')
+  await expect(gauge).toHaveValue('')
+})
