@@ -183,6 +183,7 @@ test('the sheet gauge picker clears when the thickness is typed by hand', async 
   await expect(page).toHaveURL(/\/dashboard$/)
   await page.goto('/procedures/new')
   await expect(page.getByRole('button', { name: 'Save draft' })).toBeEnabled()
+  await page.getByRole('button', { name: /^Fill from PQR-/ }).first().click()
   const gauge = page.getByLabel('Sheet gauge, thickest')
   await gauge.selectOption('10')
   // 10 ga sheet steel is 0.1345 in (Manufacturers' Standard Gauge, common practice)
