@@ -191,3 +191,21 @@ test('the sheet gauge picker clears when the thickness is typed by hand', async 
   await page.getByLabel('Groove welds, base metal, to').fill('1/4')
   await expect(gauge).toHaveValue('')
 })
+
+test('words on screen: readings out of window say what to do next; the test page names the code in words', async ({ page }) => {
+  await signIn(page, 'inspector@demo.rootface.test')
+  await expect(page).toHaveURL(/\/dashboard$/)
+  await page.goto('/procedures?q=KB-W01')
+  await page.getByRole('link', { name: 'KB-W01 rev. 0' }).click()
+  await page.getByLabel('Voltage').fill('40')
+  await page.getByLabel('Current').fill('120')
+  await page.getByLabel('Travel speed').fill('14')
+  await page.getByRole('button', { name: 'Check readings' }).click()
+  await expect(page.getByTestId('reading-result')).toContainText('Outside the WPS window')
+  await expect(page.getByTestId('reading-next')).toContainText('What next')
+  const list = await page.request.get('/api/tests?pageSize=1')
+  const { id } = ((await list.json()) as { items: { id: number }[] }).items[0]!
+  await page.goto(`/tests/${id}`)
+  await expect(page.getByTestId('test-status')).toBeVisible()
+  await expect(page.locator('main')).not.toContainText(/asme-ix|aws-d1|iso-9606/)
+})
