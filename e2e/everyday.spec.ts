@@ -135,6 +135,13 @@ test('the welder\'s phone page: fewest days left first, only WPSs of processes t
   await page.getByRole('button', { name: 'Copy address' }).click()
   await expect(page.getByRole('status').filter({ hasText: 'Copied.' })).toBeVisible()
   expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(await address.inputValue())
+
+  // "Procedures I may use" in the menu: the same filtered list, as cards that fit the phone
+  await page.getByRole('button', { name: 'Turn the subscription off' }).click()
+  await page.goto('/procedures')
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText('Procedures I may use')
+  await expect(page.getByTestId('my-procedure-card')).toHaveCount(mine.procedures.length)
+  expect(await page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth)).toBe(false)
   await phone.close()
 })
 
