@@ -48,6 +48,7 @@ test('the inspector records and certifies 3G plate tests; the welder sees the ne
   await ranges.getByText('Clause by clause').click()
   await expect(ranges.getByText('QW-452.1(b)', { exact: true })).toBeVisible()
   await page.getByRole('button', { name: /Certify result \(failed\)/ }).click()
+  await page.getByRole('dialog').getByRole('button', { name: 'Sign' }).click()
   await expect(page.getByTestId('test-status')).toHaveText('✕ Failed (certified)')
   await expect(page.getByText(/Certified by Tobias Lindqvist-Hale/i)).toBeVisible()
   await expect(page.getByRole('button', { name: 'Edit' })).toHaveCount(0)
@@ -56,6 +57,7 @@ test('the inspector records and certifies 3G plate tests; the welder sees the ne
   await recordPlateTest(page, [['face', 2], ['root', 3]])
   await expect(page.getByTestId('test-outcome')).toContainText('Passed')
   await page.getByRole('button', { name: /Certify result \(passed\)/ }).click()
+  await page.getByRole('dialog').getByRole('button', { name: 'Sign' }).click()
   await expect(page.getByTestId('test-status')).toHaveText('✓ Certified')
 
   // The welder, on a phone-size screen

@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto'
-import { and, asc, desc, eq, inArray } from 'drizzle-orm'
+import { and, arrayContained, asc, desc, eq, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import { procedures, welders, welderTests } from './schema'
 import { qualifiedRangesOf } from '../../shared/qualification/test-ranges'
@@ -14,7 +14,10 @@ import { standingsOf } from './standings'
 import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
 
-/** A welder's own page: every test, what each certified one covers in plain words, and the WPSs of their current processes. */
+/**
+ * A welder's own page: every test, what each certified one covers in plain words, and the approved WPSs whose every
+ * layer's process the welder is current in (a GTAW root and SMAW fill WPS needs both).
+ */
 export async function ownQualifications(db: Db, welderId: number, standings: { process: string, standing: string }[]) {
   const [welder] = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp, calendarToken: welders.calendarToken })
     .from(welders).where(eq(welders.id, welderId)).limit(1)
@@ -22,8 +25,8 @@ export async function ownQualifications(db: Db, welderId: number, standings: { p
   const tests = await db.select().from(welderTests).where(eq(welderTests.welderId, welderId)).orderBy(desc(welderTests.testDate), desc(welderTests.id))
   const current = standings.filter(s => s.standing !== 'lapsed').map(s => s.process)
   const wps = current.length
-    ? await db.select({ id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, process: procedures.process })
-        .from(procedures).where(and(eq(procedures.status, 'approved'), inArray(procedures.process, current))).orderBy(asc(procedures.number))
+    ? await db.select({ id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, process: procedures.process, processes: procedures.processes })
+        .from(procedures).where(and(eq(procedures.status, 'approved'), sql`cardinality(${procedures.processes}) > 0`, arrayContained(procedures.processes, current))).orderBy(asc(procedures.number))
     : []
   const described = tests.map((t) => {
     const ranges = qualifiedRangesOf(variablesOf(t))
@@ -68,7 +71,9 @@ export async function myQualifications(db: Db, welderId: number, today: string) 
   if (!own) return missing('Roster entry')
   return {
     ...own, today, logsOwnContinuity: await welderLogsOwnContinuity(db),
-    standings: standings.map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),
+    // Fewest days left first: a lapsed process at the top, then the one that lapses next.
+    standings: [...standings].sort((a, b) => a.daysLeft - b.daysLeft || a.process.localeCompare(b.process))
+      .map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),
   }
 }
 

@@ -22,13 +22,16 @@ export function standingOn(tests: CertifiedTest[], uses: Use[], process: string,
   })
 }
 
-export interface Gap { process: string, from: string, to: string, why: 'lapsed' | 'no-test' }
+// 'no-test': not yet qualified on those days (the first certified test came later); 'never-held': no certified test of
+// the process at all up to the end of the period, which the summary lists once, not as a lapse.
+export interface Gap { process: string, from: string, to: string, why: 'lapsed' | 'no-test' | 'never-held' }
 
 /**
  * The spans of a period on which a welder was not current for a process. processStanding is the rule; this only
  * asks it at the days where the answer can change: a lapse date, or the next certified test after a lapse.
  */
 export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: string, period: Period): Gap[] {
+  if (!tests.some(t => t.process === process)) return [{ process, from: period.from, to: period.to, why: 'never-held' }]
   const gaps: Gap[] = []
   let day = period.from
   let guard = 0

@@ -111,7 +111,19 @@ function indexContent(entries: PacketEntry[]) {
   ]
 }
 
-function gapContent(plan: PacketPlan, gaps: WelderGap[]) {
+/**
+ * The summary's two lists: the days a welder was not current for a process they hold or came to hold, and, once per
+ * welder and process, a process they never held (no certified test of it up to the end of the period): that is not a
+ * lapse, and may only mean they did not weld it on this project.
+ */
+export function summaryOf(gaps: WelderGap[]) {
+  const neverHeld = gaps.filter(g => g.why === 'never-held')
+    .map(g => `${g.welder} (${g.stamp}) holds no qualification for ${g.process}: may not have welded it on this project`)
+  return { lapses: gaps.filter(g => g.why !== 'never-held'), neverHeld: [...new Set(neverHeld)] }
+}
+
+function gapContent(plan: PacketPlan, all: WelderGap[]) {
+  const { lapses: gaps, neverHeld } = summaryOf(all)
   const rows = gaps.map(g => [
     { text: `${g.welder} (${g.stamp})`, style: 'cell' }, { text: g.process, style: 'cell' },
     { text: g.from, style: 'cell' }, { text: g.to, style: 'cell' },
@@ -134,7 +146,13 @@ function gapContent(plan: PacketPlan, gaps: WelderGap[]) {
           },
           layout: { hLineWidth: (i: number) => (i === 0 ? 0 : 0.4), vLineWidth: () => 0, hLineColor: () => '#d4d1c7' },
         }
-      : { text: 'Every welder was current for every process of the project on every day of the period.', bold: true },
+      : { text: neverHeld.length ? 'No lapse in the period for a process a welder holds.' : 'Every welder was current for every process of the project on every day of the period.', bold: true },
+    ...(neverHeld.length
+      ? [
+          { text: 'Processes of the project a welder holds no qualification for', style: 'label', bold: true, margin: [0, 10, 0, 2] },
+          { ul: neverHeld, style: 'value' },
+        ]
+      : []),
     { table: { widths: ['*'], body: [[{ text: genericCaution, style: 'caution', fillColor: '#f7ecd2', margin: [6, 5, 6, 5] }]] }, layout: 'noBorders', margin: [0, 14, 0, 0] },
   ]
 }

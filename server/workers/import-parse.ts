@@ -4,7 +4,8 @@ import { continuityImportRowSchema, importHeaders } from '../../shared/schemas/c
 // Checking a continuity CSV: parsing it, checking every row's fields and matching stamps to the roster. Pure (no
 // database: the roster is handed in), so it runs in a worker thread (import-worker.ts, import-check.ts).
 
-export interface RowError { line: number, field: string, message: string }
+/** A wrong line of the file: `field` for programs, `column` (as headed in the file) and `value` (as typed) for people. */
+export interface RowError { line: number, field: string, message: string, column?: string, value?: string }
 export interface RosterEntry { id: number, stamp: string, name: string }
 export interface CheckedImportRow { line: number, stamp: string, welderName: string, welderId: number, process: string, weldedOn: string, reference: string }
 
@@ -43,13 +44,16 @@ export function checkImportCsv(csv: string, roster: RosterEntry[], today: string
       stamp: raw[column.stamp!], process: raw[column.process!], weldedOn: raw[column.weldedOn!]?.trim(), reference: raw[column.reference!],
     })
     if (!result.success) {
-      for (const [field, messages] of Object.entries(result.error.flatten().fieldErrors)) errors.push({ line, field, message: messages?.[0] ?? 'Invalid' })
+      for (const [field, messages] of Object.entries(result.error.flatten().fieldErrors)) {
+        const header = column[field]
+        errors.push({ line, field, message: messages?.[0] ?? 'Invalid', column: header, value: header === undefined ? undefined : raw[header] ?? '' })
+      }
       return
     }
     const r = result.data
     const welder = byStamp.get(r.stamp.toLowerCase())
-    if (!welder) return errors.push({ line, field: 'stamp', message: `No welder with stamp ${r.stamp} on the roster` })
-    if (r.weldedOn > today) return errors.push({ line, field: 'weldedOn', message: `${r.weldedOn} is after today` })
+    if (!welder) return errors.push({ line, field: 'stamp', message: `No welder with stamp ${r.stamp} on the roster`, column: column.stamp, value: r.stamp })
+    if (r.weldedOn > today) return errors.push({ line, field: 'weldedOn', message: `${r.weldedOn} is after today`, column: column.weldedOn, value: r.weldedOn })
     const key = `${welder.id}|${r.process}|${r.weldedOn}|${r.reference}`
     if (seen.has(key)) return errors.push({ line, field: 'row', message: 'The same entry appears twice in the file' })
     seen.add(key)

@@ -1,6 +1,7 @@
 import dayjs from 'dayjs'
 import { describe, expect, it } from 'vitest'
 import { gapsInPeriod } from '../../../../server/sheets/continuity'
+import { summaryOf } from '../../../../server/sheets/packet-document'
 
 // Six months after the last use, cross-checked with dayjs (not date-fns, which the rules use).
 const sixMonthsAfter = (day: string) => dayjs(day).add(6, 'month').format('YYYY-MM-DD')
@@ -39,5 +40,25 @@ describe('gapsInPeriod: the days a welder was not current for a process', () => 
     // ASME BPVC IX-2023 QW-322.1(a): continuity is kept per process
     const gaps = gapsInPeriod([test('2025-12-15')], [{ process: 'GTAW', weldedOn: '2026-03-01' }], 'SMAW', period)
     expect(gaps).toEqual([{ process: 'SMAW', from: sixMonthsAfter('2025-12-15'), to: '2026-12-31', why: 'lapsed' }])
+  })
+})
+
+describe('a process the welder never held', () => {
+  it('is one "never held" line for the whole period, not a lapse', () => {
+    // ASME BPVC IX-2023 QW-322.1: only a qualification once held can lapse; a welder with no certified test of a
+    // process never held it (from memory: a welder who did not weld the process on the project need not hold it)
+    const gaps = gapsInPeriod([test('2025-12-15', 'GTAW')], [], 'SMAW', period)
+    expect(gaps).toEqual([{ process: 'SMAW', from: period.from, to: period.to, why: 'never-held' }])
+  })
+
+  it('the packet summary lists it once, in words, apart from the lapses', () => {
+    const gaps = [
+      { process: 'SMAW', from: period.from, to: period.to, why: 'never-held' as const, welder: 'A. Welder', stamp: 'W-1' },
+      { process: 'SMAW', from: period.from, to: period.to, why: 'never-held' as const, welder: 'A. Welder', stamp: 'W-1' },
+      { process: 'GTAW', from: '2026-07-01', to: period.to, why: 'lapsed' as const, welder: 'A. Welder', stamp: 'W-1' },
+    ]
+    const summary = summaryOf(gaps)
+    expect(summary.neverHeld).toEqual(['A. Welder (W-1) holds no qualification for SMAW: may not have welded it on this project'])
+    expect(summary.lapses.map(g => g.why)).toEqual(['lapsed'])
   })
 })
