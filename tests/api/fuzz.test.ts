@@ -145,7 +145,9 @@ describe('fuzzed input never reaches a 500 and never writes', () => {
         const res = await client.fetch(`${route.path}?${new URLSearchParams(q)}`)
         const text = await res.text()
         expectClean(res.status, text, `${route.path}?${new URLSearchParams(q)}`)
-        expect([200, 400], `${route.path} ${JSON.stringify(q)} → ${res.status} ${text.slice(0, 200)}`).toContain(res.status)
+        // Documented: the embedded database's backup answers 409 on a PostgreSQL server (pg_dump backs that one up).
+        const allowed = route.path === '/api/admin/backup' && process.env.TEST_DATABASE_URL ? [409] : [200, 400]
+        expect(allowed, `${route.path} ${JSON.stringify(q)} → ${res.status} ${text.slice(0, 200)}`).toContain(res.status)
       }), { numRuns: 10 })
     }
     expect(fuzzed).toBe(listing.length)
