@@ -108,11 +108,12 @@ export async function pqrIdsOf(db: Db, procedureIds: number[]) {
   return rows
 }
 
-export interface CertifiedTest { id: number, process: string, code: string, edition: string, testDate: string, procedure: string | null }
+/** A certified test as continuity reads it; `processes` lists every process of a combination coupon (each counts). */
+export interface CertifiedTest { id: number, process: string, processes?: string[] | null, code: string, edition: string, testDate: string, procedure: string | null }
 
 export async function loadCertifiedTests(db: Db, welderId: number, upTo: string): Promise<CertifiedTest[]> {
   const rows = await db.select({
-    id: welderTests.id, process: welderTests.process, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate,
+    id: welderTests.id, process: welderTests.process, processes: welderTests.processes, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate,
     number: procedures.number, revision: procedures.revision,
   }).from(welderTests).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
     .where(and(eq(welderTests.welderId, welderId), eq(welderTests.status, 'certified'), lte(welderTests.testDate, upTo)))

@@ -12,9 +12,12 @@ export { loadCertifiedTests, loadUses }
 
 interface Use { process: string, weldedOn: string }
 
+/** A test counts for each process it qualifies: every process of a combination coupon (GTAW root, SMAW fill). */
+const holds = (t: CertifiedTest, process: string) => (t.processes?.length ? t.processes.includes(process) : t.process === process)
+
 /** Where the welder stands for a process on a day, from the latest certified test on or before it (null: none yet). */
 export function standingOn(tests: CertifiedTest[], uses: Use[], process: string, day: string): ProcessStanding | null {
-  const test = tests.filter(t => t.process === process && t.testDate <= day).sort((a, b) => b.testDate.localeCompare(a.testDate))[0]
+  const test = tests.filter(t => holds(t, process) && t.testDate <= day).sort((a, b) => b.testDate.localeCompare(a.testDate))[0]
   if (!test) return null
   return processStanding({
     process, code: test.code as CodeId, edition: test.edition, testDate: test.testDate,
@@ -31,7 +34,7 @@ export interface Gap { process: string, from: string, to: string, why: 'lapsed' 
  * asks it at the days where the answer can change: a lapse date, or the next certified test after a lapse.
  */
 export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: string, period: Period): Gap[] {
-  if (!tests.some(t => t.process === process)) return [{ process, from: period.from, to: period.to, why: 'never-held' }]
+  if (!tests.some(t => holds(t, process))) return [{ process, from: period.from, to: period.to, why: 'never-held' }]
   const gaps: Gap[] = []
   let day = period.from
   let guard = 0
@@ -42,7 +45,7 @@ export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: strin
       continue
     }
     // Not current from `day` until the next certified test of the process.
-    const next = tests.filter(t => t.process === process && t.testDate > day).map(t => t.testDate).sort()[0]
+    const next = tests.filter(t => holds(t, process) && t.testDate > day).map(t => t.testDate).sort()[0]
     const until = next && next <= period.to ? format(addDays(parseISO(next), -1), 'yyyy-MM-dd') : period.to
     gaps.push({ process, from: day, to: until, why: standing ? 'lapsed' : 'no-test' })
     if (!next) break
@@ -55,7 +58,7 @@ export async function loadContinuityLog(db: Db, welderId: number, period: Period
   const welder = await welderOf(db, welderId)
   if (!welder) return null
   const [tests, uses] = await Promise.all([loadCertifiedTests(db, welderId, period.to), loadUses(db, welderId, period.to)])
-  const processes = [...new Set([...tests.map(t => t.process), ...uses.map(u => u.process)])].sort()
+  const processes = [...new Set([...tests.flatMap(t => (t.processes?.length ? t.processes : [t.process])), ...uses.map(u => u.process)])].sort()
   const inPeriod = uses.filter(u => u.weldedOn >= period.from)
   const standings = processes.map(p => ({ process: p, standing: standingOn(tests, uses, p, period.to), gaps: gapsInPeriod(tests, uses, p, period) }))
   // What the issued sheet vouches for: the welder, the period, the tests and the uses it prints.

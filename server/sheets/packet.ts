@@ -26,7 +26,7 @@ export async function packetPlan(db: Db, projectId: number): Promise<PacketPlan 
     .from(projects).innerJoin(customers, eq(customers.id, projects.customerId)).where(eq(projects.id, projectId))
   const period = await projectPeriod(db, projectId)
   if (!project || !period) return null
-  const procs = await db.select({ id: procedures.id, process: procedures.process }).from(projectProcedures)
+  const procs = await db.select({ id: procedures.id, process: procedures.process, processes: procedures.processes }).from(projectProcedures)
     .innerJoin(procedures, eq(procedures.id, projectProcedures.procedureId)).where(eq(projectProcedures.projectId, projectId))
     .orderBy(asc(procedures.number), asc(procedures.revision))
   const support = await pqrIdsOf(db, procs.map(p => p.id))
@@ -46,7 +46,8 @@ export async function packetPlan(db: Db, projectId: number): Promise<PacketPlan 
       return { ...w, testIds: own.map(t => t.id), tests: own }
     }),
     pqrs: [...new Map(support.map(s => [s.pqrId, { id: s.pqrId, number: s.number }])).values()],
-    processes: [...new Set(procs.map(p => p.process))].sort(),
+    // Every process of every layer of the project's WPSs (a GTAW root, SMAW fill WPS needs both held).
+    processes: [...new Set(procs.flatMap(p => (p.processes?.length ? p.processes : [p.process])))].sort(),
   }
 }
 

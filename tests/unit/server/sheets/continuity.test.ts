@@ -10,6 +10,14 @@ const test = (testDate: string, process = 'SMAW') => ({ id: 1, process, code: 'a
 const period = { from: '2026-01-01', to: '2026-12-31' }
 
 describe('gapsInPeriod: the days a welder was not current for a process', () => {
+  it('a combination coupon counts for each of its processes (ASME BPVC IX-2023 QW-306: each process qualified by it)', () => {
+    const combination = { ...test('2025-12-15', 'GTAW'), processes: ['GTAW', 'SMAW'] }
+    const uses = ['2026-03-01', '2026-08-01', '2026-12-01'].map(weldedOn => ({ process: 'SMAW', weldedOn }))
+    expect(gapsInPeriod([combination], uses, 'SMAW', period)).toEqual([])
+    // without the list of processes only its first one would count, and SMAW would read as never held
+    expect(gapsInPeriod([test('2025-12-15', 'GTAW')], uses, 'SMAW', period)).toEqual([{ process: 'SMAW', from: period.from, to: period.to, why: 'never-held' }])
+  })
+
   it('no gap while each use falls within six months of the previous one', () => {
     // ASME BPVC IX-2023 QW-322.1(a): a process lapses when not used for six months
     const uses = ['2026-03-01', '2026-08-01', '2026-12-01'].map(weldedOn => ({ process: 'SMAW', weldedOn }))
