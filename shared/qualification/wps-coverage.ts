@@ -51,6 +51,10 @@ export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { cov
   const u = wps.unit
   const reasons: CoverReason[] = []
   const add = (met: boolean, clause: string, text: string) => reasons.push({ met, clause, text, basis: 'convention' })
+  // A variable the WPS limits and the joint leaves out is "cannot tell: state it", never taken as inside the WPS.
+  const unstated = (clause: string, what: string, field: string) => reasons.push({
+    met: false, state: 'not-recorded', clause, text: `The joint does not state its ${what}: cannot tell, state it.`, basis: 'convention', record: `production.${field}`,
+  })
   const inUnit = (v: number) => convertLength(v, joint.unit, u)
 
   if (joint.code !== undefined) add(wps.code === joint.code, 'code', wps.code === joint.code ? `The WPS is written to ${codeName(wps.code)}, the joint's code.` : `The WPS is written to ${codeName(wps.code)}; the joint is welded to ${codeName(joint.code)}.`)
@@ -64,6 +68,7 @@ export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { cov
     const ok = listed.includes(joint.pNumber.toUpperCase())
     add(ok, c.pNumber, `Base metals P-No. ${wps.pNumberA ?? '—'} to P-No. ${wps.pNumberB ?? '—'}; the joint is P-No. ${joint.pNumber}.`)
   }
+  else if (wps.pNumberA || wps.pNumberB) unstated(c.pNumber, 'base metal P-No.', 'pNumber')
   if (joint.thickness !== undefined) {
     if (joint.weld === 'fillet' && wps.code === 'asme-ix') {
       add(true, c.fillet, 'Fillet welds: a groove-qualified WPS takes in all fillet sizes on all base metal thicknesses.')
@@ -75,15 +80,18 @@ export function procedureCovers(wps: ProcedureRanges, joint: JointToWeld): { cov
       add(ok, c.thickness, `Thickness ${t} ${u}: the WPS covers ${range}.`)
     }
   }
+  else if (!(joint.weld === 'fillet' && wps.code === 'asme-ix') && (wps.thicknessMin !== null || wps.thicknessMax !== null)) unstated(c.thickness, 'thickness', 'thickness')
   if (joint.form === 'pipe' && joint.outsideDiameter !== undefined && wps.diameterMin !== null) {
     const od = inUnit(joint.outsideDiameter)
     add(toMicro(od) >= toMicro(wps.diameterMin), c.diameter, `Pipe OD ${od} ${u}: the WPS states ${wps.diameterMin} ${u} and over.`)
   }
+  else if (joint.form === 'pipe' && wps.diameterMin !== null) unstated(c.diameter, 'pipe outside diameter', 'outsideDiameter')
   const positions = [...new Set([...(joint.positions ?? []), ...(joint.position ? [joint.position] : [])].map(p => p.toUpperCase()))]
   const missing = positions.filter(p => !wps.positions.includes(p))
   add(positions.length > 0 && missing.length === 0, c.position, `Position ${positions.join(', ') || 'not given'}: the WPS lists ${wps.positions.join(', ') || 'none'}.`)
   if (joint.fNumber !== undefined) {
     add(wps.fNumbers.includes(String(joint.fNumber)), c.fNumber, `F-No. ${joint.fNumber}: the WPS lists F-No. ${wps.fNumbers.join(', ') || 'none'}.`)
   }
+  else if (wps.fNumbers.length) unstated(c.fNumber, 'filler F-No.', 'fNumber')
   return { covered: reasons.every(r => r.met), reasons }
 }
