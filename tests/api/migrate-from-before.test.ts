@@ -7,13 +7,14 @@ import { afterAll, describe, expect, it } from 'vitest'
 import { Client, demo, removeDir, startServer, type TestServer } from './harness'
 
 /**
- * Migrations never lose data: a database made before this session's migrations (tests/fixtures/demo-at-0007.sql,
- * the invented demo shop at migrations 0000-0007 with signed and issued sheets) is loaded into PGlite and, when
+ * Migrations never lose data: each database made before a round of migrations (tests/fixtures/demo-at-0007.sql and
+ * demo-at-0009.sql, the invented demo shop at migrations 0000-0007 and 0000-0009 with signed and issued sheets) is loaded into PGlite and, when
  * TEST_DATABASE_URL is set, into a PostgreSQL server; the current server migrates it at start-up. Every row of the
  * old tables is still there, every sheet signed or issued before still verifies "unchanged", and the old accounts
  * still sign in with their passwords.
  */
-const fixture = readFileSync(join(import.meta.dirname, '../fixtures/demo-at-0007.sql'), 'utf8')
+const fixtures = ['demo-at-0007.sql', 'demo-at-0009.sql']
+  .map(name => ({ name, sql: readFileSync(join(import.meta.dirname, '../fixtures', name), 'utf8') }))
 
 /** Tables of the fixture whose rows must all survive (a migration may add columns or tables, never drop rows). */
 const keptTables = [
@@ -66,7 +67,7 @@ async function checkMigrated(server: TestServer, before: Snapshot, after: Snapsh
   expect(tests.status).toBe(200)
 }
 
-describe('a database made before the current migrations (PGlite)', () => {
+describe.each(fixtures)('$name: a database made before the current migrations (PGlite)', ({ sql: fixture }) => {
   const root = mkdtempSync(join(tmpdir(), 'rootface-migrate-'))
   let server: TestServer | undefined
   afterAll(async () => {
@@ -94,7 +95,7 @@ describe('a database made before the current migrations (PGlite)', () => {
   }, 240_000)
 })
 
-describe.runIf(process.env.TEST_DATABASE_URL)('a database made before the current migrations (PostgreSQL)', () => {
+describe.runIf(process.env.TEST_DATABASE_URL).each(fixtures)('$name: a database made before the current migrations (PostgreSQL)', ({ sql: fixture }) => {
   let server: TestServer | undefined
   let client: pg.Client | undefined
   afterAll(async () => {
