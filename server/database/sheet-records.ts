@@ -1,14 +1,14 @@
 import { and, asc, desc, eq, inArray, lte, or } from 'drizzle-orm'
 import type { Db } from './client'
 import {
-  accounts, attachments, baseMetals, continuityEntries, fillerMetals, issuedSheets, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs,
-  procedures, projects, shopSettings, signatures, welders, welderTestBends, welderTests,
+  accounts, attachments, baseMetals, continuityEntries, customers, fillerMetals, issuedSheets, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs,
+  procedures, projectProcedures, projects, projectWelders, shopSettings, signatures, welders, welderTestBends, welderTests,
 } from './schema'
 import { contentFormatOf, contentHash, newVerifyCode, type SignedRecordType } from './signing'
 import { pqrLayersOf, supportPqrs } from './pqrs'
 import type { SessionUser } from '../utils/auth'
 import type { SheetSignature } from '../sheets/model'
-import type { PacketPlan } from '../sheets/packet'
+import { todayIso } from '../utils/today'
 
 // Everything the sheets, logs, packets and the verification page read: the builders in server/sheets/ are given
 // these rows and only lay them out.
@@ -176,6 +176,55 @@ async function unusedCode(db: Db) {
 export async function projectDates(db: Db, projectId: number) {
   const [p] = await db.select({ startsOn: projects.startsOn, endsOn: projects.endsOn }).from(projects).where(eq(projects.id, projectId))
   return p
+}
+
+/** The period a project's sheets cover: its start to its end, or to today while it is open. */
+export async function projectPeriod(db: Db, projectId: number): Promise<{ from: string, to: string } | null> {
+  const p = await projectDates(db, projectId)
+  if (!p) return null
+  const today = todayIso()
+  return { from: p.startsOn, to: p.endsOn && p.endsOn < today ? p.endsOn : today }
+}
+
+export interface PacketPlan {
+  project: { id: number, number: string, name: string, customer: string }
+  period: { from: string, to: string }
+  procedureIds: number[]
+  pqrIds: number[]
+  pqrs: { id: number, number: string }[]
+  welders: { id: number, name: string, stamp: string, testIds: number[], tests: { id: number, process: string, testDate: string }[] }[]
+  processes: string[]
+}
+
+/** What goes into a project's packet: its WPSs and their PQRs, its welders' certified tests up to the period's end. */
+export async function packetPlan(db: Db, projectId: number): Promise<PacketPlan | null> {
+  const [project] = await db.select({ id: projects.id, number: projects.number, name: projects.name, customer: customers.name })
+    .from(projects).innerJoin(customers, eq(customers.id, projects.customerId)).where(eq(projects.id, projectId))
+  const period = await projectPeriod(db, projectId)
+  if (!project || !period) return null
+  const procs = await db.select({ id: procedures.id, process: procedures.process, processes: procedures.processes }).from(projectProcedures)
+    .innerJoin(procedures, eq(procedures.id, projectProcedures.procedureId)).where(eq(projectProcedures.projectId, projectId))
+    .orderBy(asc(procedures.number), asc(procedures.revision))
+  const support = await pqrIdsOf(db, procs.map(p => p.id))
+  const crew = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp }).from(projectWelders)
+    .innerJoin(welders, eq(welders.id, projectWelders.welderId)).where(eq(projectWelders.projectId, projectId)).orderBy(asc(welders.stamp))
+  const tests = crew.length
+    ? await db.select({ id: welderTests.id, welderId: welderTests.welderId, process: welderTests.process, testDate: welderTests.testDate }).from(welderTests)
+        .where(and(inArray(welderTests.welderId, crew.map(w => w.id)), eq(welderTests.status, 'certified'), lte(welderTests.testDate, period.to)))
+        .orderBy(asc(welderTests.testDate), asc(welderTests.id))
+    : []
+  return {
+    project, period,
+    procedureIds: procs.map(p => p.id),
+    pqrIds: [...new Set(support.map(s => s.pqrId))],
+    welders: crew.map((w) => {
+      const own = tests.filter(t => t.welderId === w.id).map(t => ({ id: t.id, process: t.process, testDate: t.testDate }))
+      return { ...w, testIds: own.map(t => t.id), tests: own }
+    }),
+    pqrs: [...new Map(support.map(s => [s.pqrId, { id: s.pqrId, number: s.number }])).values()],
+    // Every process of every layer of the project's WPSs (a GTAW root, SMAW fill WPS needs both held).
+    processes: [...new Set(procs.flatMap(p => (p.processes?.length ? p.processes : [p.process])))].sort(),
+  }
 }
 
 export interface Appendix { fileName: string, contentType: string, sha256: string, storageKey: string, owner: string }

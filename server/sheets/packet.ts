@@ -1,55 +1,14 @@
-import { and, asc, eq, inArray, lte } from 'drizzle-orm'
 import type { Db } from '../database/client'
-import { customers, procedures, projectProcedures, projectWelders, projects, welders, welderTests } from '../database/schema'
+import { shopName, type PacketPlan } from '../database/sheet-records'
 import type { SessionUser } from '../utils/auth'
-import { gapsInPeriod, loadCertifiedTests, loadUses, type Gap, type Period } from './continuity'
+import { gapsInPeriod, loadCertifiedTests, loadUses, type Gap } from './continuity'
 import type { SheetModel } from './model'
 import type { PacketDocumentInput, PacketEntry } from './packet-document'
 import { renderPacket } from './packet-render'
-import { pqrIdsOf, shopName } from './records'
-import { continuityLogSheet, pqrSheetOf, procedureSheet, projectPeriod, welderTestSheet } from './sheets'
+import { continuityLogSheet, pqrSheetOf, procedureSheet, welderTestSheet } from './sheets'
 import { todayIso } from '../utils/today'
 
-export interface PacketPlan {
-  project: { id: number, number: string, name: string, customer: string }
-  period: Period
-  procedureIds: number[]
-  pqrIds: number[]
-  pqrs: { id: number, number: string }[]
-  welders: { id: number, name: string, stamp: string, testIds: number[], tests: { id: number, process: string, testDate: string }[] }[]
-  processes: string[]
-}
-
-/** What goes into a project's packet: its WPSs and their PQRs, its welders' certified tests up to the period's end. */
-export async function packetPlan(db: Db, projectId: number): Promise<PacketPlan | null> {
-  const [project] = await db.select({ id: projects.id, number: projects.number, name: projects.name, customer: customers.name })
-    .from(projects).innerJoin(customers, eq(customers.id, projects.customerId)).where(eq(projects.id, projectId))
-  const period = await projectPeriod(db, projectId)
-  if (!project || !period) return null
-  const procs = await db.select({ id: procedures.id, process: procedures.process, processes: procedures.processes }).from(projectProcedures)
-    .innerJoin(procedures, eq(procedures.id, projectProcedures.procedureId)).where(eq(projectProcedures.projectId, projectId))
-    .orderBy(asc(procedures.number), asc(procedures.revision))
-  const support = await pqrIdsOf(db, procs.map(p => p.id))
-  const crew = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp }).from(projectWelders)
-    .innerJoin(welders, eq(welders.id, projectWelders.welderId)).where(eq(projectWelders.projectId, projectId)).orderBy(asc(welders.stamp))
-  const tests = crew.length
-    ? await db.select({ id: welderTests.id, welderId: welderTests.welderId, process: welderTests.process, testDate: welderTests.testDate }).from(welderTests)
-        .where(and(inArray(welderTests.welderId, crew.map(w => w.id)), eq(welderTests.status, 'certified'), lte(welderTests.testDate, period.to)))
-        .orderBy(asc(welderTests.testDate), asc(welderTests.id))
-    : []
-  return {
-    project, period,
-    procedureIds: procs.map(p => p.id),
-    pqrIds: [...new Set(support.map(s => s.pqrId))],
-    welders: crew.map((w) => {
-      const own = tests.filter(t => t.welderId === w.id).map(t => ({ id: t.id, process: t.process, testDate: t.testDate }))
-      return { ...w, testIds: own.map(t => t.id), tests: own }
-    }),
-    pqrs: [...new Map(support.map(s => [s.pqrId, { id: s.pqrId, number: s.number }])).values()],
-    // Every process of every layer of the project's WPSs (a GTAW root, SMAW fill WPS needs both held).
-    processes: [...new Set(procs.flatMap(p => (p.processes?.length ? p.processes : [p.process])))].sort(),
-  }
-}
+export { packetPlan, type PacketPlan } from '../database/sheet-records'
 
 export function sheetCount(plan: PacketPlan) {
   return plan.procedureIds.length + plan.pqrIds.length + plan.welders.reduce((n, w) => n + w.testIds.length + 1, 0)

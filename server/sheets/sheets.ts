@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import type { Db } from '../database/client'
-import { issueContinuityLog, loadPqr, loadProcedure, loadWelderTest, projectDates, shopName } from '../database/sheet-records'
+import { issueContinuityLog, loadPqr, loadProcedure, loadWelderTest, shopName } from '../database/sheet-records'
 import type { SessionUser } from '../utils/auth'
 import { loadContinuityLog, type Period } from './continuity'
 import { continuitySheet } from './continuity-sheet'
@@ -11,9 +11,10 @@ import { renderPdf } from './pdf'
 import { pqrSheet } from './pqr'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
-import { todayIso } from '../utils/today'
 import { attachmentsOf } from '../database/attachments'
 import type { AttachmentRecordType } from '#shared/schemas/attachment'
+
+export { projectPeriod } from '../database/sheet-records'
 
 /** The public address the QR codes point at: AUTH_ORIGIN in production (required there), else the request's own. */
 export function publicOrigin(event: H3Event) {
@@ -75,13 +76,6 @@ export async function continuityLogSheet(db: Db, welderId: number, period: Perio
 }
 
 /** The period of a project, closed at today when it is still open. */
-export async function projectPeriod(db: Db, projectId: number): Promise<Period | null> {
-  const p = await projectDates(db, projectId)
-  if (!p) return null
-  const today = todayIso()
-  return { from: p.startsOn, to: p.endsOn && p.endsOn < today ? p.endsOn : today }
-}
-
 export async function renderSheet(sheet: SheetModel) {
   const tracker = new PageTracker()
   const started = performance.now()
