@@ -3,10 +3,10 @@ import { standingsOf } from './standings'
 import type { SessionUser } from '../utils/auth'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import { fieldFailure, forbidden, invalid, missing, type Outcome } from '../../shared/types/outcome'
-import type { ContinuityBulkInput, ContinuityEntryInput } from '../../shared/schemas/continuity'
+import type { ContinuityBulkInput, ContinuityEntryInput } from '../../shared/schemas/continuity-entry'
 import type { ContinuityListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { accounts, continuityEntries, shopSettings, welders } from './schema'
+import { accounts, continuityEntries, continuityImports, shopSettings, welders } from './schema'
 import { recordAudit } from './audit'
 import { checkImportOffThread } from '../workers/import-check'
 
@@ -25,15 +25,16 @@ export async function missingWelders(db: Db, ids: number[]) {
   return ids.filter(id => !known.has(id))
 }
 
-/** All entries in one transaction: every one is stored or none. */
+/** All entries in one transaction: every one is stored or none. An import is kept as one batch, to be undone whole. */
 export async function insertEntries(db: Db, entries: NewEntry[], accountId: number, action: string) {
   return db.transaction(async (tx) => {
+    const [batch] = action === 'import' ? await tx.insert(continuityImports).values({ importedBy: accountId, rows: entries.length }).returning({ id: continuityImports.id }) : []
     const rows = []
     // Chunks keep each statement under the parameter limit; the transaction keeps them all-or-nothing. Small chunks,
     // with a turn of the event loop between them, let an embedded database (which runs on this thread) answer other
     // requests while a large import is stored.
     for (let i = 0; i < entries.length; i += 25) {
-      rows.push(...await tx.insert(continuityEntries).values(entries.slice(i, i + 25).map(e => ({ ...e, recordedBy: accountId }))).returning({ id: continuityEntries.id }))
+      rows.push(...await tx.insert(continuityEntries).values(entries.slice(i, i + 25).map(e => ({ ...e, recordedBy: accountId, importId: batch?.id ?? null }))).returning({ id: continuityEntries.id }))
       await new Promise(resolve => setImmediate(resolve))
     }
     await recordAudit(tx as unknown as Db, {

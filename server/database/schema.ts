@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm'
 import {
   boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
+  type AnyPgColumn,
 } from 'drizzle-orm/pg-core'
 
 // Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
@@ -248,6 +249,8 @@ export const continuityEntries = pgTable('continuity_entries', {
   reference: text('reference').notNull(),
   recordedBy: integer('recorded_by').references(() => accounts.id),
   createdAt: created(),
+  // The CSV import that stored this entry (null: logged by hand); an import is undone as a whole (continuity_imports).
+  importId: integer('import_id').references((): AnyPgColumn => continuityImports.id),
 }, t => [
   index('continuity_welder_process_idx').on(t.welderId, t.process, t.weldedOn),
   index('continuity_date_idx').on(t.weldedOn),
@@ -490,3 +493,15 @@ export const signInFailures = pgTable('sign_in_failures', {
   index('sign_in_failures_last_idx').on(t.lastFailureAt),
   check('sign_in_failures_count_check', sql`${t.failures} >= 0`),
 ])
+
+// ---- tidy ----
+// One committed CSV import of continuity entries: who stored how many rows when, and whether (and by whom) it was undone.
+export const continuityImports = pgTable('continuity_imports', {
+  id: serial('id').primaryKey(),
+  importedBy: integer('imported_by').references(() => accounts.id),
+  rows: integer('rows').notNull(),
+  createdAt: created(),
+  undoneAt: timestamp('undone_at', { withTimezone: true }),
+  undoneBy: integer('undone_by').references(() => accounts.id),
+}, t => [index('continuity_imports_created_idx').on(t.createdAt)])
+// ---- end tidy ----

@@ -1,6 +1,6 @@
 import { standingWords } from '#shared/qualification/process-standing'
 import type { SheetBlock, SheetModel } from './model'
-import type { ContinuityLog } from './continuity'
+import type { ContinuityLog } from './continuity-log'
 import { caution } from './common'
 import { printable } from './format'
 

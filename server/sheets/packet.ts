@@ -1,7 +1,7 @@
 import type { Db } from '../database/client'
 import { shopName, type PacketPlan } from '../database/sheet-records'
 import type { SessionUser } from '../utils/auth'
-import { gapsInPeriod, loadCertifiedTests, loadUses, type Gap } from './continuity'
+import { gapsInPeriod, loadCertifiedTests, loadUses, type Gap } from './continuity-log'
 import type { SheetModel } from './model'
 import type { PacketDocumentInput, PacketEntry } from './packet-document'
 import { renderPacket } from './packet-render'

@@ -3,7 +3,7 @@ import type { signatures } from '../database/schema'
 import { contentFormatOf, contentHash, type SignedRecordType } from '../database/signing'
 import { issuedSheetByCode, recordHead, signatureByCode, signersOf, welderOf } from '../database/sheet-records'
 import { missing, type Outcome } from '../../shared/types/outcome'
-import { loadContinuityLog } from './continuity'
+import { loadContinuityLog } from './continuity-log'
 
 export interface Verification {
   code: string

@@ -1,5 +1,5 @@
 import Papa from 'papaparse'
-import { continuityImportRowSchema, importHeaders } from '../../shared/schemas/continuity'
+import { continuityImportRowSchema, importHeaders } from '../../shared/schemas/continuity-entry'
 
 // Checking a continuity CSV: parsing it, checking every row's fields and matching stamps to the roster. Pure (no
 // database: the roster is handed in), so it runs in a worker thread (import-worker.ts, import-check.ts).

@@ -1,5 +1,5 @@
 import { addDays, differenceInCalendarDays, format } from 'date-fns'
-import { parseDay } from '../rules/continuity'
+import { parseDay } from '../rules/continuity-lapse'
 import type { Standing } from './process-standing'
 
 export interface LapseWeek {

@@ -1,5 +1,5 @@
 import { differenceInCalendarDays } from 'date-fns'
-import { parseDay } from '../rules/continuity'
+import { parseDay } from '../rules/continuity-lapse'
 import { getRuleSet } from '../rules'
 import type { CodeId } from '../rules/types'
 

@@ -1,6 +1,6 @@
 import { z } from 'zod'
 import { isCalendarDay } from '../schemas/fields'
-import type { ContinuityInput } from './continuity'
+import type { ContinuityInput } from './continuity-lapse'
 import type { GaugeInput } from './gauge'
 import type { HeatInputInput } from './heat-input'
 import type { BendInput, CoversInput, ProcedureRangesInput, RadiographyInput, SpecimenSetInput, ToughnessInput, WelderTestInput, WpsSupportInput } from './inputs'

@@ -1,4 +1,4 @@
-import type { ContinuityInput, ContinuityResult } from './continuity'
+import type { ContinuityInput, ContinuityResult } from './continuity-lapse'
 import type { GaugeInput, GaugeResult } from './gauge'
 import type { HeatInputInput, HeatInputResult } from './heat-input'
 import type { BendInput, CoversInput, ProcedureRangesInput, RadiographyInput, SpecimenSetInput, ToughnessInput, WelderTestInput, WpsSupportInput } from './inputs'

@@ -1,6 +1,7 @@
 import type { ProcessVariables, ProductionWeld, WelderTestInput } from './inputs'
 import type { CoverAnswer, CoverReason, Undetermined, VariableState } from './results'
 import type { Basis } from './types'
+import { fieldWords } from '../vocabulary/field-words'
 
 /**
  * One welder essential variable as a code names it: its id, its clause, how Rootface compares it
@@ -47,14 +48,15 @@ export function categorical<T>(o: {
 }): CoverReason | null {
   const extra = o.process === undefined ? {} : { process: o.process }
   const { test, production } = o
+  const words = fieldWords(o.field) // in trade words: "P-No.", never "pNumber"
   if (test === undefined && production === undefined) return null
   if (test === undefined) {
     if (o.qualifiedByAll?.(production as T)) return reason('met', o.variable, o.clause, `Production ${o.show(production as T)}: qualified by any test.`, o.basis, extra)
-    return reason('not-recorded', o.variable, o.clause, `Production is ${o.show(production as T)}; the test did not record its ${o.field}: cannot tell, record it.`, o.basis, { ...extra, record: `test.${o.field}` })
+    return reason('not-recorded', o.variable, o.clause, `Production is ${o.show(production as T)}; the test did not record its ${words}: cannot tell, record it.`, o.basis, { ...extra, record: `test.${o.field}` })
   }
   if (production === undefined) {
-    if (o.qualifiesAll?.(test)) return reason('met', o.variable, o.clause, `The test (${o.show(test)}) qualifies every ${o.field}.`, o.basis, extra)
-    return reason('not-recorded', o.variable, o.clause, `The test was ${o.show(test)}, which does not qualify every ${o.field}; production does not state its ${o.field}: cannot tell, record it.`, o.basis, { ...extra, record: `production.${o.field}` })
+    if (o.qualifiesAll?.(test)) return reason('met', o.variable, o.clause, `The test (${o.show(test)}) qualifies every ${words}.`, o.basis, extra)
+    return reason('not-recorded', o.variable, o.clause, `The test was ${o.show(test)}, which does not qualify every ${words}; production does not state its ${words}: cannot tell, record it.`, o.basis, { ...extra, record: `production.${o.field}` })
   }
   const ok = o.qualifies(test, production)
   return reason(ok ? 'met' : 'not-met', o.variable, o.clause, ok

@@ -2,7 +2,7 @@ import { z } from 'zod'
 import { codeSchema, unitSchema } from '../rules/requests'
 import { getRuleSet } from '../rules'
 import { processSchema } from './list'
-import { calendarDay } from './continuity'
+import { calendarDay } from './continuity-entry'
 
 const length = (what: string) => z.number({ invalid_type_error: `${what} must be a number` }).finite().positive(`${what} must be more than 0`).max(10_000, `${what} is too large`)
 // Form inputs send '' for an empty number box; it means "not given".

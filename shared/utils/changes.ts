@@ -1,18 +1,11 @@
+import { fieldWords } from '../vocabulary/field-words'
+
 /** The fields that differ between two snapshots of a record, for the audit history. */
 export function changedFields(before: unknown, after: unknown): { field: string, from: unknown, to: unknown }[] {
   const a = (before && typeof before === 'object' ? before : {}) as Record<string, unknown>
   const b = (after && typeof after === 'object' ? after : {}) as Record<string, unknown>
   const keys = [...new Set([...Object.keys(a), ...Object.keys(b)])].filter(k => !['updatedAt', 'version'].includes(k)).sort()
   return keys.filter(k => JSON.stringify(a[k]) !== JSON.stringify(b[k])).map(k => ({ field: k, from: a[k], to: b[k] }))
-}
-
-// Field names as words on screen: trade abbreviations as the trade writes them, other names split into words.
-const knownWords: Record<string, string> = {
-  pNumber: 'P-No.', fNumber: 'F-No.', aNumber: 'A-No.', groupNumber: 'Group No.', ctwd: 'contact tip to work', pwht: 'PWHT',
-  od: 'OD', procedureId: 'WPS', pqrId: 'PQR', welderId: 'welder', supportingPqrIds: 'supporting PQRs', min: 'from', max: 'to',
-}
-export function fieldWords(key: string): string {
-  return knownWords[key] ?? key.replace(/([a-z0-9])([A-Z])/g, '$1 $2').replace(/[_-]+/g, ' ').toLowerCase()
 }
 
 /** A value as read on screen: a dash for nothing, yes/no, a list joined by commas. */

@@ -1,5 +1,5 @@
 import { logBulk } from '../../database/continuity'
-import { continuityBulkSchema } from '#shared/schemas/continuity'
+import { continuityBulkSchema } from '#shared/schemas/continuity-entry'
 
 /** POST /api/continuity/bulk: one process and date for many welders, all stored or none (supervisor, inspector) */
 export default defineEventHandler(async (event) => {

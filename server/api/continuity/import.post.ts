@@ -1,5 +1,5 @@
 import { importLog } from '../../database/continuity'
-import { continuityImportSchema } from '#shared/schemas/continuity'
+import { continuityImportSchema } from '#shared/schemas/continuity-entry'
 
 /**
  * POST /api/continuity/import: a CSV (stamp, process, date, reference). Without `commit` it answers the preview and the

@@ -1,5 +1,5 @@
 import { logEntry, mayLogContinuity } from '../../database/continuity'
-import { continuityEntrySchema } from '#shared/schemas/continuity'
+import { continuityEntrySchema } from '#shared/schemas/continuity-entry'
 
 /** POST /api/continuity: one entry; staff for anyone, a welder for themselves only if the shop allows it */
 export default defineEventHandler(async (event) => {

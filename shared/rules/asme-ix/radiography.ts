@@ -23,7 +23,10 @@ export function radiography(input: RadiographyInput, context: RuleContext): Radi
 
   // Linear indications: (a) any crack or zone of incomplete fusion or penetration.
   const planar = input.indications.find(i => i.kind === 'crack' || i.kind === 'incomplete-fusion' || i.kind === 'incomplete-penetration')
-  if (planar) return rejectWith(`A ${planar.kind.replace('-', ' ')} indication rejects the weld.`, 'QW-191.1.2.2(b)(1)')
+  if (planar) {
+    const words = planar.kind.replace('-', ' ')
+    return rejectWith(`${/^[aeiou]/.test(words) ? 'An' : 'A'} ${words} indication rejects the weld.`, 'QW-191.1.2.2(b)(1)')
+  }
 
   // (b) elongated slag: 1/8 in (3 mm) for t up to 3/8 in (10 mm); t/3 up to 2-1/4 in (57 mm); 3/4 in (19 mm) over that.
   const slagLimitText = t <= pick(asme.t3_8, u)

@@ -1,5 +1,5 @@
 import type { RuleSet } from '../rule-set'
-import { continuity } from '../continuity'
+import { continuity } from '../continuity-lapse'
 import { gaugeThickness } from '../gauge'
 import { arcEnergyClauses, heatInput } from '../heat-input'
 import { checkReadings } from '../readings'

@@ -2,7 +2,7 @@ import dayjs from 'dayjs'
 import customParseFormat from 'dayjs/plugin/customParseFormat.js'
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { calendarDay, continuityImportRowSchema } from '../../../../shared/schemas/continuity'
+import { calendarDay, continuityImportRowSchema } from '../../../../shared/schemas/continuity-entry'
 import { calendarDate, daySchema, hasLoneSurrogate, isCalendarDay, optionalText, requiredText } from '../../../../shared/schemas/fields'
 import { continuityQuerySchema } from '../../../../shared/schemas/sheet'
 

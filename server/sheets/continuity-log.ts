@@ -15,8 +15,11 @@ interface Use { process: string, weldedOn: string }
 /** A test counts for each process it qualifies: every process of a combination coupon (GTAW root, SMAW fill). */
 const holds = (t: CertifiedTest, process: string) => (t.processes?.length ? t.processes.includes(process) : t.process === process)
 
-/** Where the welder stands for a process on a day, from the latest certified test on or before it (null: none yet). */
-export function standingOn(tests: CertifiedTest[], uses: Use[], process: string, day: string): ProcessStanding | null {
+/**
+ * Where the welder stands for a process on a day, from the latest certified test on or before it (null: none yet).
+ * The standing itself is the shared rule's (processStanding → standingOn in shared/qualification/process-standing.ts).
+ */
+function standingFromLatestTest(tests: CertifiedTest[], uses: Use[], process: string, day: string): ProcessStanding | null {
   const test = tests.filter(t => holds(t, process) && t.testDate <= day).sort((a, b) => b.testDate.localeCompare(a.testDate))[0]
   if (!test) return null
   return processStanding({
@@ -39,7 +42,7 @@ export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: strin
   let day = period.from
   let guard = 0
   while (day <= period.to && guard++ < 10_000) {
-    const standing = standingOn(tests, uses, process, day)
+    const standing = standingFromLatestTest(tests, uses, process, day)
     if (standing && standing.standing !== 'lapsed') {
       day = standing.lapsesOn // current until the day it lapses
       continue
@@ -60,7 +63,7 @@ export async function loadContinuityLog(db: Db, welderId: number, period: Period
   const [tests, uses] = await Promise.all([loadCertifiedTests(db, welderId, period.to), loadUses(db, welderId, period.to)])
   const processes = [...new Set([...tests.flatMap(t => (t.processes?.length ? t.processes : [t.process])), ...uses.map(u => u.process)])].sort()
   const inPeriod = uses.filter(u => u.weldedOn >= period.from)
-  const standings = processes.map(p => ({ process: p, standing: standingOn(tests, uses, p, period.to), gaps: gapsInPeriod(tests, uses, p, period) }))
+  const standings = processes.map(p => ({ process: p, standing: standingFromLatestTest(tests, uses, p, period.to), gaps: gapsInPeriod(tests, uses, p, period) }))
   // What the issued sheet vouches for: the welder, the period, the tests and the uses it prints.
   const content = {
     welder: { id: welder.id, name: welder.name, stamp: welder.stamp },

@@ -1,6 +1,6 @@
 import dayjs from 'dayjs'
 import { describe, expect, it } from 'vitest'
-import { gapsInPeriod } from '../../../../server/sheets/continuity'
+import { gapsInPeriod } from '../../../../server/sheets/continuity-log'
 import { summaryOf } from '../../../../server/sheets/packet-document'
 
 // Six months after the last use, cross-checked with dayjs (not date-fns, which the rules use).

@@ -52,3 +52,10 @@ export const importHeaders: Record<keyof z.infer<typeof continuityImportRowSchem
   weldedOn: ['date', 'welded on', 'weldedon', 'welded'],
   reference: ['reference', 'job', 'ref'],
 }
+
+/**
+ * How long after it was stored a committed CSV import may be undone as a whole (by the quality manager): a week, long
+ * enough to notice a wrong file, short enough that the entries have not yet been relied on. Later entries or an issued
+ * continuity log that rest on the import refuse the undo whatever the age.
+ */
+export const importUndoDays = 7
