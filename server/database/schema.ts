@@ -89,6 +89,8 @@ export const procedures = pgTable('procedures', {
   processes: text('processes').array().notNull().default(sql`'{}'::text[]`),
   // The process layers in order (root, hot pass, fill, cap...), each validated by procedureLayerSchema on write.
   layers: jsonb('layers').notNull().default([]),
+  // AWS D1.1: written to the code's prequalification limits, approved without a PQR when the check finds no failure.
+  prequalified: boolean('prequalified').notNull().default(false),
   version: integer('version').notNull().default(1),
   createdBy: integer('created_by').references(() => accounts.id),
   approvedAt: timestamp('approved_at', { withTimezone: true }),

@@ -1,0 +1,1 @@
+ALTER TABLE "procedures" ADD COLUMN "prequalified" boolean DEFAULT false NOT NULL;
