@@ -10,7 +10,7 @@ const emptyIsNull = (v: unknown) => (v === '' ? null : v)
 const optionalLength = (what: string) => z.preprocess(emptyIsNull, length(what).nullish()).transform(v => v ?? null)
 
 export const bendTypes = ['face', 'root', 'side'] as const
-export const testPositions = ['1G', '2G', '3G', '4G', '5G', '6G', '1F', '2F', '3F', '4F', '5F'] as const
+export const testPositions = ['1G', '2G', '3G', '4G', '5G', '6G', '6GR', '1F', '2F', '3F', '4F', '5F'] as const
 export const radiographicKinds = ['crack', 'incomplete-fusion', 'incomplete-penetration', 'slag', 'rounded'] as const
 
 export const bendSpecimenSchema = z.object({
@@ -86,7 +86,7 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   if (v.unit !== undefined && !getRuleSet(v.code).units.includes(v.unit)) issue('unit', `This code prints its ranges in ${getRuleSet(v.code).units.join(' and ')}`)
   if (v.form === 'pipe' && !v.outsideDiameter) issue('outsideDiameter', 'A pipe coupon needs its outside diameter')
   if (v.weld === 'groove' && v.positions?.some(p => p.endsWith('F'))) issue('positions', 'A groove test is welded in 1G to 6G')
-  if (v.weld === 'fillet' && v.positions?.some(p => p.endsWith('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
+  if (v.weld === 'fillet' && v.positions?.some(p => p.includes('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
   const results = (v.bends?.length ?? 0) > 0 || v.radiography || v.macro
   if (results && v.visualAccepted !== true) {
     issue('visualAccepted', 'Record an accepted visual examination before bend, radiographic or macro results')

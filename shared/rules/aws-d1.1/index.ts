@@ -6,6 +6,7 @@ import { checkReadings } from '../readings'
 import { tensileStrength } from '../tensile'
 import { bend } from './bend'
 import { covers } from './covers'
+import { radiography } from './radiography'
 import { d11DefaultEdition, d11Editions, d11Tables } from './editions'
 import { specimens } from './specimens'
 import { welderRanges } from './welder-ranges'
@@ -20,6 +21,7 @@ export const awsD11: RuleSet = {
   welderRanges,
   covers,
   bend,
+  radiography,
   // Period of effectiveness (4.2.3.1 in 2015, 6.2.3 from 2020): "a period exceeding six months".
   continuity: (input, context) => continuity(input, {
     clause: d11Tables(context.edition).continuity,
