@@ -211,6 +211,8 @@ export const welderTests = pgTable('welder_tests', {
   deposits: jsonb('deposits').notNull().default([]),
   // The PQR whose coupon this is, when the test was made from it (QW-301.2)
   pqrId: integer('pqr_id').references(() => pqrs.id),
+  // AWS D1.3 joint type of the test (square-groove, flare-groove, fillet, plug, arc-spot, arc-seam); null for other codes.
+  jointType: text('joint_type'),
   status: text('status').notNull().default('recorded'),
   inspectorId: integer('inspector_id').references(() => accounts.id),
   certifiedAt: timestamp('certified_at', { withTimezone: true }),

@@ -12,12 +12,16 @@ type Answer = { id: number, version: number, status: string, message?: string, d
 
 let server: TestServer
 let supervisor: Client
+let inspector: Client
+let welderId: number
 const send = (client: Client, method: string, path: string, body?: unknown) =>
   client.json<Answer>(path, { method, headers: { 'content-type': 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) })
 
 beforeAll(async () => {
   server = await startServer()
   supervisor = await signedIn(server.url, 'supervisor')
+  inspector = await signedIn(server.url, 'inspector')
+  welderId = (await supervisor.json<{ items: { id: number }[] }>('/api/welders?q=KB-02')).body.items[0]!.id
 })
 afterAll(async () => server?.stop())
 
@@ -98,5 +102,72 @@ describe('a prequalified AWS D1.1 WPS', () => {
     const res = await send(supervisor, 'POST', `/api/procedures/${made.body.id}/approve`, { version: made.body.version, handCheck: 'Checked by hand against the clause.' })
     expect(res.status).toBe(422)
     expect(res.body.message).toContain('short-circuit')
+  })
+})
+
+interface TestView { id: number, version: number, status: string, jointType: string | null, evaluation: { outcome: string, steps: { step: string, state: string, text: string }[], ranges: { thickness?: { min: number, max: number | null }, positions: { groove: string[], fillet: string[] } } | null } }
+const testOf = async (id: number) => (await inspector.json<TestView>(`/api/tests/${id}`)).body
+
+describe('structural welder tests', () => {
+  it('a D1.3 fillet test on 14 gauge sheet saves with its joint type and certifies', async () => {
+    // 14 ga = 0.0747 in (Manufacturers' Standard Gauge, docs/sources.md D); GMAW-S is allowed under D1.3 (sources B).
+    const created = await send(inspector, 'POST', '/api/tests', {
+      welderId, testDate: '2026-11-25', code: 'aws-d1.3', edition: '2018', unit: 'in', processes: [{ process: 'GMAW', transfer: 'short-circuit', depositThickness: null }],
+      form: 'plate', weld: 'fillet', jointType: 'fillet', couponThickness: 0.0747, backing: false, positions: ['2F'],
+      visualAccepted: true, examination: 'macro-fracture', macro: { accepted: true, notes: 'two assemblies, macro-etch sound' },
+    })
+    expect(created.status).toBe(201)
+    const test = await testOf(created.body.id)
+    expect(test.jointType).toBe('fillet')
+    expect(test.evaluation.outcome).toBe('passed')
+    // D1.3 4.7.2 (2008; sources B, read): a fillet test is made on the thinnest production sheet, up to the 3/16 in scope limit.
+    expect(test.evaluation.ranges?.thickness).toEqual({ min: 0.0747, max: 0.1875 })
+    // D1.3 Table 4.4 (read): 2F qualifies F and H.
+    expect(test.evaluation.ranges?.positions.fillet).toEqual(['F', 'H'])
+    const certified = await send(inspector, 'POST', `/api/tests/${test.id}/certify`, { version: test.version })
+    expect(certified.status).toBe(200)
+    expect((await testOf(test.id)).status).toBe('certified')
+  })
+
+  it('D1.3 refuses a groove test without its joint type and sends sheet over 3/16 in to D1.1 (400 on the fields)', async () => {
+    const base = {
+      welderId, testDate: '2026-11-25', code: 'aws-d1.3', edition: '2018', unit: 'in', processes: [{ process: 'GMAW', transfer: 'short-circuit', depositThickness: null }],
+      form: 'plate', weld: 'groove', couponThickness: 0.0747, backing: false, positions: ['1G'], visualAccepted: null, examination: 'bend',
+    }
+    const noJoint = await send(inspector, 'POST', '/api/tests', base)
+    expect(noJoint.status).toBe(400)
+    expect(noJoint.body.data?.fieldErrors?.jointType).toBeDefined()
+    // D1.3 scope: 3/16 in (4.8 mm) or less (sources B, read).
+    const thick = await send(inspector, 'POST', '/api/tests', { ...base, jointType: 'square-groove', couponThickness: 0.25 })
+    expect(thick.status).toBe(400)
+    expect(thick.body.data?.fieldErrors?.couponThickness?.[0]).toContain('D1.1')
+  })
+
+  it('a D1.1 3G plate test judged by radiography certifies', async () => {
+    const created = await send(inspector, 'POST', '/api/tests', {
+      welderId, testDate: '2026-11-26', code: 'aws-d1.1', edition: '2020', unit: 'in', processes: [{ process: 'FCAW', transfer: null, depositThickness: 0.375 }],
+      form: 'plate', weld: 'groove', couponThickness: 0.375, backing: true, positions: ['3G'], progression: 'uphill',
+      visualAccepted: true, examination: 'radiography', radiography: { indications: [], reportNumber: 'RT-0426' },
+    })
+    expect(created.status).toBe(201)
+    const test = await testOf(created.body.id)
+    expect(test.evaluation.outcome).toBe('passed')
+    // D1.1:2020 Table 6.10 (read): 3G qualifies groove F, H, V.
+    expect(test.evaluation.ranges?.positions.groove).toEqual(['F', 'H', 'V'])
+    const certified = await send(inspector, 'POST', `/api/tests/${test.id}/certify`, { version: test.version })
+    expect(certified.status).toBe(200)
+    expect((await testOf(test.id)).status).toBe('certified')
+  })
+
+  it('a D1.1 film with porosity stays open for the inspector to judge by hand (never accepted by the program)', async () => {
+    const created = await send(inspector, 'POST', '/api/tests', {
+      welderId, testDate: '2026-11-26', code: 'aws-d1.1', edition: '2020', unit: 'in', processes: [{ process: 'SMAW', transfer: null, depositThickness: 0.375 }],
+      form: 'plate', weld: 'groove', couponThickness: 0.375, fNumber: '4', backing: true, positions: ['1G'],
+      visualAccepted: true, examination: 'radiography', radiography: { indications: [{ kind: 'rounded', length: 0.03 }], reportNumber: null },
+    })
+    expect(created.status).toBe(201)
+    const test = await testOf(created.body.id)
+    expect(test.evaluation.outcome).toBe('pending')
+    expect((await send(inspector, 'POST', `/api/tests/${test.id}/certify`, { version: test.version })).status).toBe(409)
   })
 })
