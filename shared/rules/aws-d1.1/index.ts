@@ -6,6 +6,7 @@ import { checkReadings } from '../readings'
 import { tensileStrength } from '../tensile'
 import { bend } from './bend'
 import { covers } from './covers'
+import { procedureRanges } from './procedure-ranges'
 import { radiography } from './radiography'
 import { d11DefaultEdition, d11Editions, d11Tables } from './editions'
 import { specimens } from './specimens'
@@ -18,6 +19,7 @@ export const awsD11: RuleSet = {
   editions: d11Editions,
   defaultEdition: d11DefaultEdition,
   units: ['in', 'mm'],
+  procedureRanges,
   welderRanges,
   covers,
   bend,

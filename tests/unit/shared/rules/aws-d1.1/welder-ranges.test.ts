@@ -121,7 +121,8 @@ describe('AWS D1.1 coverage and bends', () => {
     expect(big.specimens).toEqual([expect.objectContaining({ replace: true })])
     expect(bend([{ size: 0.2, atCorner: true, fromInternalDefect: true }]).accepted).toBe(false)
   })
-  it('D1.1 carries no procedure-ranges here: refused, not guessed', () => {
-    expect(refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit: 'in', input: { process: 'SMAW', couponThickness: 1 } })).toContain('no procedure-ranges')
+  it('D1.1 procedure-ranges refuses what it does not carry (ESW, sheet under 1/8 in), not guessed', () => {
+    expect(refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit: 'in', input: { process: 'ESW', couponThickness: 1 } })).toContain('not carried')
+    expect(refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit: 'in', input: { process: 'SMAW', couponThickness: 0.1 } })).toContain('D1.3')
   })
 })
