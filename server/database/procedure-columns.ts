@@ -108,8 +108,9 @@ export function draftOf(row: ProcedureRow, supportingPqrIds: number[]): Procedur
     diameter: { min: row.diameterMin, max: num(obj(v.diameter).max) },
     joints: {
       type: str(joints.type) ?? '', groove: str(joints.groove), grooveAngle: num(joints.grooveAngle),
-      rootOpening: range(joints.rootOpening), rootFace: range(joints.rootFace), backing: str(joints.backing),
+      rootOpening: range(joints.rootOpening), rootFace: range(joints.rootFace), backing: str(joints.backing), designation: str(joints.designation),
     },
+    prequalified: row.prequalified === true,
     positions: row.positions as ProcedureDraft['positions'],
     progression: (str(v.progression) as ProcedureDraft['progression']) ?? null,
     toughnessRequired: v.toughnessRequired === true,
@@ -129,6 +130,7 @@ export function columnsOf(draft: ProcedureDraft) {
     pNumberA: draft.baseMetals.a.pNumber, pNumberB: draft.baseMetals.b.pNumber,
     thicknessMin: draft.thickness.groove.min, thicknessMax: draft.thickness.groove.max, diameterMin: draft.diameter.min,
     positions: draft.positions, fNumbers: [...new Set(layers.flatMap(l => l.fillers.map(f => f.fNumber)))],
+    prequalified: draft.prequalified,
     variables,
   }
 }

@@ -2,7 +2,7 @@ import { and, eq, inArray, max, ne } from 'drizzle-orm'
 import type { Db } from './client'
 import { pqrs, procedurePqrs, procedures, projectProcedures, readings, signatures, welders } from './schema'
 import { contentHash, currentContentFormat, newVerifyCode } from './signing'
-import { columnsOf, draftOf, findProcedure, layersOf, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
+import { columnsOf, draftOf, findProcedure, layersOf, prequalifiedOf, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
 import { recordAudit } from './audit'
 import { isForeignKeyViolation, isUniqueViolation, settle } from '../utils/outcome'
 import { conflict, fieldFailure, frozen, invalid, missing, refused, stale } from '../../shared/types/outcome'
@@ -78,6 +78,32 @@ export async function updateDraft(db: Db, id: number, patch: ProcedurePatch, use
   })
 }
 
+/** A WPS backed by PQRs: approvable when they support it, or by hand for a code whose support rules are not carried. */
+async function supportGate(tx: Db, row: ProcedureRow) {
+  const { check } = await supportOf(tx, row, await supportingPqrIdsOf(tx, row.id))
+  const byHand = check.rulesMissing && check.violations.every(v => v.clause === 'rules')
+  if (check.blockers.length || (!check.supported && !byHand)) {
+    const reasons = [...check.blockers, ...check.violations.map(v => `${v.clause}: ${v.text}`)]
+    throw refused('Not supported', `${row.number} rev. ${row.revision} cannot be approved: ${reasons.join(' ')}`, { blockers: check.blockers, violations: check.violations })
+  }
+  return byHand
+}
+
+/**
+ * A prequalified AWS D1.1 WPS: approvable without a PQR when no limit fails; limits not carried (check by hand) need
+ * the signed statement.
+ */
+async function prequalifiedGate(tx: Db, row: ProcedureRow) {
+  const check = await prequalifiedOf(tx, row)
+  if (!check) throw refused('Not prequalified', `${row.number} rev. ${row.revision} is marked prequalified, but only AWS D1.1 WPSs are checked as prequalified here.`, {})
+  const failures = check.items.filter(i => i.state === 'fail')
+  if (failures.length) {
+    const reasons = failures.map(i => `${i.table}: ${i.text}${i.required ? ` Required: ${i.required}.` : ''}`)
+    throw refused('Not prequalified', `${row.number} rev. ${row.revision} is outside the prequalification limits: ${reasons.join(' ')}`, { failures })
+  }
+  return check.byHand > 0
+}
+
 /** Approval: the supervisor signs the draft, which freezes it, and the earlier approved revision is superseded. */
 export async function approveProcedure(db: Db, id: number, version: number, user: SessionUser, handCheck?: string | null) {
   return settle(async () => {
@@ -85,14 +111,13 @@ export async function approveProcedure(db: Db, id: number, version: number, user
       const [row] = await tx.select().from(procedures).where(eq(procedures.id, id)).for('update')
       if (!row) throw missing('Procedure')
       assertEditable(row, version)
-      const { check } = await supportOf(tx, row, await supportingPqrIdsOf(tx, id))
-      const byHand = check.rulesMissing && check.violations.every(v => v.clause === 'rules')
-      if (check.blockers.length || (!check.supported && !byHand)) {
-        const reasons = [...check.blockers, ...check.violations.map(v => `${v.clause}: ${v.text}`)]
-        throw refused('Not supported', `${row.number} rev. ${row.revision} cannot be approved: ${reasons.join(' ')}`, { blockers: check.blockers, violations: check.violations })
-      }
+      const byHand = row.prequalified ? await prequalifiedGate(tx, row) : await supportGate(tx, row)
       if (byHand) {
-        if (!handCheck || handCheck.length < 10) throw fieldFailure('handCheck', 'This code\'s support rules are not carried here: say how the ranges were checked against the PQRs (at least 10 characters)')
+        if (!handCheck || handCheck.length < 10) {
+          throw fieldFailure('handCheck', row.prequalified
+            ? 'Some prequalification limits are not carried here: say how you checked them by hand (at least 10 characters)'
+            : 'This code\'s support rules are not carried here: say how the ranges were checked against the PQRs (at least 10 characters)')
+        }
         // The statement is part of what the signature covers.
         await tx.update(procedures).set({ variables: { ...(row.variables as Record<string, unknown>), handCheck } }).where(eq(procedures.id, id))
       }

@@ -1,12 +1,13 @@
-import { and, arrayContains, asc, count, desc, eq, ilike, max, or, sql } from 'drizzle-orm'
+import { and, arrayContains, asc, count, desc, eq, ilike, inArray, max, or, sql } from 'drizzle-orm'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import type { ProcedureListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
-import { accounts, procedurePqrs, procedures, readings, signatures, welders } from './schema'
+import { accounts, baseMetals, procedurePqrs, procedures, readings, signatures, welders } from './schema'
 import { supportPqrs } from './pqrs'
 import { auditorMayReadProcedure } from './projects'
 import type { SessionUser } from '../utils/auth'
 import { layeredSupport } from '#shared/qualification/layer-support'
+import { prequalifiedOfDraft } from '#shared/qualification/prequalified-wps'
 
 import { columnsOf, draftOf, layersOf, obj, str, type ProcedureRow } from './procedure-columns'
 
@@ -29,6 +30,15 @@ export async function supportOf(db: Db, row: ProcedureRow, pqrIds: number[]) {
   return { pqrs, check: layeredSupport(draft, pqrs) }
 }
 
+/** The AWS D1.1 prequalification check of a stored WPS marked prequalified (null otherwise), its base metals read from the catalogue. */
+export async function prequalifiedOf(db: Db, row: ProcedureRow) {
+  if (!row.prequalified || row.code !== 'aws-d1.1') return null
+  const draft = draftOf(row, [])
+  const ids = [draft.baseMetals.a.baseMetalId, draft.baseMetals.b.baseMetalId].filter((id): id is number => id !== null)
+  const catalogue = ids.length ? await db.select({ id: baseMetals.id, specification: baseMetals.specification, grade: baseMetals.grade }).from(baseMetals).where(inArray(baseMetals.id, ids)) : []
+  return prequalifiedOfDraft(draft, catalogue)
+}
+
 /** Whether this row is the current revision of its number: the highest approved one. */
 export async function isCurrent(db: Db, row: ProcedureRow) {
   if (row.status !== 'approved') return false
@@ -40,7 +50,7 @@ export async function isCurrent(db: Db, row: ProcedureRow) {
 /** One WPS with its draft variables, supporting PQRs, signatures, revisions and the live support check. */
 export async function procedureDetail(db: Db, row: ProcedureRow) {
   const pqrIds = await supportingPqrIdsOf(db, row.id)
-  const [{ pqrs, check }, signed, revisions, current, [author]] = await Promise.all([
+  const [{ pqrs, check }, signed, revisions, current, [author], prequalified] = await Promise.all([
     supportOf(db, row, pqrIds),
     db.select({ id: signatures.id, signerName: signatures.signerName, meaning: signatures.meaning, signedAt: signatures.signedAt, sha256: signatures.sha256, verifyCode: signatures.verifyCode, recordVersion: signatures.recordVersion })
       .from(signatures).where(and(eq(signatures.recordType, 'procedure'), eq(signatures.recordId, row.id))).orderBy(asc(signatures.signedAt)),
@@ -48,6 +58,7 @@ export async function procedureDetail(db: Db, row: ProcedureRow) {
       .from(procedures).where(eq(procedures.number, row.number)).orderBy(desc(procedures.revision)),
     isCurrent(db, row),
     row.createdBy ? db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, row.createdBy)) : Promise.resolve([]),
+    prequalifiedOf(db, row),
   ])
   return {
     procedure: {
@@ -56,7 +67,7 @@ export async function procedureDetail(db: Db, row: ProcedureRow) {
       updatedAt: row.updatedAt, createdBy: author?.name ?? null, current, handCheck: str(obj(row.variables).handCheck),
     },
     draft: draftOf(row, pqrIds),
-    pqrs, support: check, signatures: signed, revisions,
+    pqrs, support: check, signatures: signed, revisions, prequalified,
   }
 }
 

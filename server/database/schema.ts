@@ -90,6 +90,8 @@ export const procedures = pgTable('procedures', {
   processes: text('processes').array().notNull().default(sql`'{}'::text[]`),
   // The process layers in order (root, hot pass, fill, cap...), each validated by procedureLayerSchema on write.
   layers: jsonb('layers').notNull().default([]),
+  // AWS D1.1: written to the code's prequalification limits, approved without a PQR when the check finds no failure.
+  prequalified: boolean('prequalified').notNull().default(false),
   version: integer('version').notNull().default(1),
   createdBy: integer('created_by').references(() => accounts.id),
   approvedAt: timestamp('approved_at', { withTimezone: true }),
@@ -210,6 +212,8 @@ export const welderTests = pgTable('welder_tests', {
   deposits: jsonb('deposits').notNull().default([]),
   // The PQR whose coupon this is, when the test was made from it (QW-301.2)
   pqrId: integer('pqr_id').references(() => pqrs.id),
+  // AWS D1.3 joint type of the test (square-groove, flare-groove, fillet, plug, arc-spot, arc-seam); null for other codes.
+  jointType: text('joint_type'),
   status: text('status').notNull().default('recorded'),
   inspectorId: integer('inspector_id').references(() => accounts.id),
   certifiedAt: timestamp('certified_at', { withTimezone: true }),

@@ -6,6 +6,7 @@ import {
 } from './schema'
 import { contentFormatOf, contentHash, newVerifyCode, type SignedRecordType } from './signing'
 import { pqrLayersOf, supportPqrs } from './pqrs'
+import { prequalifiedOf } from './procedures'
 import type { SessionUser } from '../utils/auth'
 import type { SheetSignature } from '../sheets/model'
 import { todayIso } from '../utils/today'
@@ -55,6 +56,7 @@ export async function loadProcedure(db: Db, id: number) {
     supersededBy: later.find(l => l.revision > row.revision && l.status !== 'draft')?.revision ?? null,
     fillerCatalogue,
     signed: await signaturesOf(db, 'procedure', id),
+    prequalified: await prequalifiedOf(db, row),
   }
 }
 export type ProcedureRecord = NonNullable<Awaited<ReturnType<typeof loadProcedure>>>

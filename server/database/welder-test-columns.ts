@@ -48,7 +48,7 @@ export function variablesOf(row: Row): WelderTestVariables {
     form: row.form as 'plate' | 'pipe', weld: row.weld as 'groove' | 'fillet', couponThickness: row.couponThickness,
     depositThickness: row.depositThickness, layers: row.layers, outsideDiameter: row.outsideDiameter, pNumber: row.pNumber,
     fNumber: row.fNumber, backing: row.backing, positions: row.positions, progression: row.progression as 'uphill' | 'downhill' | null,
-    processes: rulesProcesses(depositsOf(row), row.fNumber, row.progression),
+    processes: rulesProcesses(depositsOf(row), row.fNumber, row.progression), jointType: row.jointType,
   }
 }
 

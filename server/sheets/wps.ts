@@ -157,7 +157,7 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
       },
     },
     { heading: 'Technique', clause: c('technique'), fields: [{ label: 'Cleaning', value: orDash(draft.cleaning), clause: asme ? 'QW-410.5' : undefined }] },
-    supportBlock(record, draft),
+    record.prequalified ? prequalifiedBlock(record.prequalified) : supportBlock(record, draft),
   ]
 
   const signed = signedParts(record.signed, origin)
@@ -167,6 +167,26 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
     subtitle: printable(p.title), codeLine: codeLine(p.code, p.edition), unit, status,
     banner: p.status === 'draft' ? 'DRAFT · not for production' : p.status === 'superseded' ? 'SUPERSEDED' : null,
     blocks, statement: null, ...signed, caution: caution(p.code, p.edition),
+  }
+}
+
+/** A prequalified WPS: each limit of the edition's prequalification clause checked, with its table and result. */
+function prequalifiedBlock(check: NonNullable<ProcedureRecord['prequalified']>): SheetBlock {
+  const words = { 'pass': 'within', 'fail': 'outside', 'by-hand': 'check by hand' } as const
+  return {
+    heading: `Prequalified (AWS D1.1:${check.edition} ${check.clause})`,
+    notes: [
+      check.failures
+        ? `${check.failures} limit${check.failures === 1 ? ' lies' : 's lie'} outside the prequalification limits (marked "outside"): not prequalified as written.`
+        : 'No limit checked lies outside the prequalification limits; limits marked "check by hand" are not carried by Rootface and were checked by hand.',
+      'No PQR is needed for a prequalified WPS; welders using it are still qualified by test.',
+      check.caution,
+    ],
+    table: {
+      columns: ['Limit', 'Table', 'Finding', 'Result'],
+      rows: check.items.map(i => [i.limit, i.table, printable(`${i.text}${i.required && i.state !== 'pass' ? ` Required: ${i.required}.` : ''}`), words[i.state]]),
+      widths: [56, 90, '*', 56],
+    },
   }
 }
 

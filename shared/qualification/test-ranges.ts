@@ -27,6 +27,8 @@ export interface WelderTestVariables {
   fillerForm?: 'solid' | 'metal-cored' | 'flux-cored' | 'powder' | null
   backingGas?: boolean | null
   current?: 'AC' | 'DCEP' | 'DCEN' | null
+  /** AWS D1.3 joint type (square-groove, flare-groove, fillet, plug, arc-spot, arc-seam). */
+  jointType?: string | null
 }
 
 const defined = (o: Record<string, unknown>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== null && v !== undefined))
@@ -36,6 +38,7 @@ export function welderRangesInput(test: WelderTestVariables) {
   const coupon = {
     form: test.form, weld: test.weld, testPositions: test.positions, couponThickness: test.couponThickness,
     outsideDiameter: test.outsideDiameter, backing: test.backing, pNumber: test.pNumber,
+    joint: test.code === 'aws-d1.3' ? test.jointType : undefined,
   }
   if (test.processes && test.processes.length > 0) return defined({ ...coupon, processes: test.processes.map(p => defined({ ...p })) })
   return defined({

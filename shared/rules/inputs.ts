@@ -61,6 +61,8 @@ export interface ProcedureRangesInput {
   toughness?: boolean
   /** Thickest single weld pass in the coupon, for QW-403.9. */
   maxPassThickness?: number
+  /** AWS D1.1: the PQR's groove test positions, for the WPS positions qualified. */
+  testPositions?: string[]
 }
 
 export type D13Joint = 'square-groove' | 'flare-groove' | 'fillet' | 'plug' | 'arc-spot' | 'arc-seam'

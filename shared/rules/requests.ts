@@ -48,6 +48,8 @@ export const procedureRangesSchema = z.object({
   depositThickness: positive('depositThickness').optional(),
   toughness: z.boolean({ invalid_type_error: 'toughness must be true or false' }).optional(),
   maxPassThickness: positive('maxPassThickness').optional(),
+  /** AWS D1.1: the PQR's groove test positions (1G–6G, 6GR), for the WPS positions qualified. */
+  testPositions: z.array(z.string().max(4), { invalid_type_error: 'testPositions must be a list such as ["2G"]' }).max(4).optional(),
 }).strict()
 
 const progressionSchema = z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'progression must be "uphill" or "downhill"' }) })

@@ -116,7 +116,11 @@ export const procedureDraftSchema = z.object({
     rootOpening: rangeOf('Root opening'),
     rootFace: rangeOf('Root face'),
     backing: optionalText('Backing', 120),
+    /** A prequalified joint detail of the code (AWS D1.1 B-U2a, TC-U4a-GF...). */
+    designation: optionalText('Joint designation', 20),
   }),
+  /** AWS D1.1: a prequalified WPS, held to the code's prequalification limits instead of a PQR. */
+  prequalified: z.boolean().default(false),
   positions: z.array(z.enum(positionLetters, { errorMap: () => ({ message: 'Positions are F, H, V or O' }) })).min(1, 'Pick at least one position'),
   progression: z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'Progression is uphill or downhill' }) }).nullable().default(null),
   toughnessRequired: z.boolean().default(false),
@@ -128,6 +132,9 @@ export const procedureDraftSchema = z.object({
 }).superRefine((v, ctx) => {
   if (v.thickness.groove.min === null || v.thickness.groove.max === null) {
     ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['thickness', 'groove', 'max'], message: 'Give the groove thickness range, minimum and maximum' })
+  }
+  if (v.prequalified && v.code !== 'aws-d1.1') {
+    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['prequalified'], message: 'Only AWS D1.1 WPSs are checked as prequalified here' })
   }
   if (v.positions.includes('V') && !v.progression) {
     ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['progression'], message: 'Vertical welding needs a progression, uphill or downhill' })
@@ -176,8 +183,8 @@ export function blankProcedureDraft(): ProcedureDraft {
     number: '', title: '', code: 'asme-ix', edition: '2023', unit: 'in', supportingPqrIds: [],
     baseMetals: { a: { baseMetalId: null, pNumber: '1', groupNumber: null }, b: { baseMetalId: null, pNumber: '1', groupNumber: null } },
     thickness: { groove: emptyRange(), fillet: emptyRange() }, diameter: emptyRange(),
-    joints: { type: '', groove: null, grooveAngle: null, rootOpening: emptyRange(), rootFace: emptyRange(), backing: null },
-    positions: ['F', 'H'], progression: null, toughnessRequired: false, preheatMin: null, interpassMax: null,
+    joints: { type: '', groove: null, grooveAngle: null, rootOpening: emptyRange(), rootFace: emptyRange(), backing: null, designation: null },
+    prequalified: false, positions: ['F', 'H'], progression: null, toughnessRequired: false, preheatMin: null, interpassMax: null,
     pwht: { required: false, temperature: emptyRange(), holdHours: null, note: null }, cleaning: null,
     layers: [blankLayer()],
   }

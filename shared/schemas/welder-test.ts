@@ -10,7 +10,12 @@ const emptyIsNull = (v: unknown) => (v === '' ? null : v)
 const optionalLength = (what: string) => z.preprocess(emptyIsNull, length(what).nullish()).transform(v => v ?? null)
 
 export const bendTypes = ['face', 'root', 'side'] as const
-export const testPositions = ['1G', '2G', '3G', '4G', '5G', '6G', '1F', '2F', '3F', '4F', '5F'] as const
+export const testPositions = ['1G', '2G', '3G', '4G', '5G', '6G', '6GR', '1F', '2F', '3F', '4F', '5F'] as const
+/** AWS D1.3 joint types a welder is tested on (D1.3 4.7 in 2008, clause 6 in 2018): each its own qualification. */
+export const d13JointTypes = ['square-groove', 'flare-groove', 'fillet', 'plug', 'arc-spot', 'arc-seam'] as const
+/** AWS D1.3 covers sheet steel of 3/16 in (4.8 mm) and less; thicker work is welded to AWS D1.1. */
+const d13ScopeMax = { in: 0.1875, mm: 4.8 } as const
+
 export const radiographicKinds = ['crack', 'incomplete-fusion', 'incomplete-penetration', 'slag', 'rounded'] as const
 
 export const bendSpecimenSchema = z.object({
@@ -65,6 +70,7 @@ const variables = {
   fNumber: z.string().trim().regex(/^\d{1,2}$/, 'A whole number such as 4').nullish().or(z.literal('')).transform(v => v || null),
   backing: z.boolean().default(true),
   positions: z.array(z.enum(testPositions), { required_error: 'Pick the test position' }).min(1, 'Pick the test position').max(4),
+  jointType: z.preprocess(emptyIsNull, z.enum(d13JointTypes, { errorMap: () => ({ message: 'Pick the D1.3 joint type' }) }).nullish()).transform(v => v ?? null),
   progression: z.preprocess(emptyIsNull, z.enum(['uphill', 'downhill']).nullish()).transform(v => v ?? null),
   // null: not examined yet; visual examination is the gate before any mechanical test
   visualAccepted: z.boolean().nullish().transform(v => v ?? null),
@@ -75,7 +81,23 @@ const variables = {
   macro: macroRecordSchema.nullish().transform(v => v ?? null),
 }
 
-type Draft = { code: z.infer<typeof codeSchema>, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+type Draft = { code: z.infer<typeof codeSchema>, jointType?: string | null, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+
+/** AWS D1.3: a joint type that fits the weld, sheet only, and the scope check that sends thicker work to D1.1. */
+function d13Consistent(v: Draft, issue: (path: string, message: string) => void) {
+  if (v.code !== 'aws-d1.3') {
+    if (v.jointType) issue('jointType', 'A joint type is recorded for AWS D1.3 tests only')
+    return
+  }
+  const groove = v.jointType === 'square-groove' || v.jointType === 'flare-groove'
+  if (v.weld === 'groove' && !groove) issue('jointType', 'A D1.3 groove test is a square-groove or flare-groove joint')
+  if (v.weld === 'fillet' && v.jointType && groove) issue('jointType', 'A square or flare groove is a groove test, not a fillet test')
+  if (v.form === 'pipe') issue('form', 'AWS D1.3 qualifies welders on sheet: record the coupon as plate')
+  const max = d13ScopeMax[v.unit ?? 'in']
+  if (v.couponThickness && v.couponThickness > max) {
+    issue('couponThickness', `Over ${v.unit === 'mm' ? '4.8 mm' : '3/16 in'} is outside AWS D1.3 (sheet steel): record this test under AWS D1.1`)
+  }
+}
 
 /** Cross-field rules a record must keep whatever the code. */
 function consistent(v: Draft, ctx: z.RefinementCtx) {
@@ -85,8 +107,9 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   }
   if (v.unit !== undefined && !getRuleSet(v.code).units.includes(v.unit)) issue('unit', `This code prints its ranges in ${getRuleSet(v.code).units.join(' and ')}`)
   if (v.form === 'pipe' && !v.outsideDiameter) issue('outsideDiameter', 'A pipe coupon needs its outside diameter')
+  d13Consistent(v, issue)
   if (v.weld === 'groove' && v.positions?.some(p => p.endsWith('F'))) issue('positions', 'A groove test is welded in 1G to 6G')
-  if (v.weld === 'fillet' && v.positions?.some(p => p.endsWith('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
+  if (v.weld === 'fillet' && v.positions?.some(p => p.includes('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
   const results = (v.bends?.length ?? 0) > 0 || v.radiography || v.macro
   if (results && v.visualAccepted !== true) {
     issue('visualAccepted', 'Record an accepted visual examination before bend, radiographic or macro results')

@@ -14,6 +14,7 @@ import {
   demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
 } from './demo-data'
+import { seedStructuralDemo } from './demo-structural'
 
 const day = (today: Date, daysAgo: number) => format(subDays(today, daysAgo), 'yyyy-MM-dd')
 
@@ -100,7 +101,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         backing: w.backing, positions: [...w.positions], progression: w.positions.some(p => ['3G', '5G', '6G', '3F'].includes(p)) ? 'uphill' : null,
         visualAccepted: true, visualNotes: null, examination: w.bends.length ? 'bend' : 'macro-fracture',
         bends: w.bends.map(([type, size]) => ({ type, largestIndication: size, atCorner: false })), radiography: null,
-        macro: null,
+        macro: null, jointType: null,
       }
       const { values, bends } = welderTestColumns(input)
       const [row] = await tx.insert(t.welderTests).values({
@@ -130,6 +131,8 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         }
       }
     }
+
+    await seedStructuralDemo(tx as unknown as Db, { supervisorId: supervisor.id, inspectorId: inspector.id, welderId: welderId.get('KB-05')!, today })
 
     // Sign what the demo shows as approved or certified, over the content as stored.
     const toSign: { type: SignedRecordType, id: number, meaning: 'approved' | 'certified', signer: typeof supervisor }[] = [

@@ -6,6 +6,8 @@ import { checkReadings } from '../readings'
 import { tensileStrength } from '../tensile'
 import { bend } from './bend'
 import { covers } from './covers'
+import { procedureRanges } from './procedure-ranges'
+import { radiography } from './radiography'
 import { d11DefaultEdition, d11Editions, d11Tables } from './editions'
 import { specimens } from './specimens'
 import { welderRanges } from './welder-ranges'
@@ -17,9 +19,11 @@ export const awsD11: RuleSet = {
   editions: d11Editions,
   defaultEdition: d11DefaultEdition,
   units: ['in', 'mm'],
+  procedureRanges,
   welderRanges,
   covers,
   bend,
+  radiography,
   // Period of effectiveness (4.2.3.1 in 2015, 6.2.3 from 2020): "a period exceeding six months".
   continuity: (input, context) => continuity(input, {
     clause: d11Tables(context.edition).continuity,

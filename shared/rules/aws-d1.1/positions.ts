@@ -31,6 +31,8 @@ const table: Record<string, Record<string, Row>> = {
     '2G': row(['F', 'H'], ['F', 'H'], true),
     '5G': row(['F', 'V', 'O'], ['F', 'V', 'O'], true),
     '6G': row(all, all, true),
+    // 6GR: 6G with a restriction ring (T-, Y- and K-connections); all positions, from memory.
+    '6GR': row(all, all, true),
   },
   'pipe-fillet': {
     '1F': row([], ['F'], true),

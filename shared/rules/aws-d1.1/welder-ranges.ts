@@ -35,7 +35,14 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
   }
   else {
     reasons.push({ clause: positionsClause, text: `Fillet: ${d11Letters(pos.fillet)}. A fillet test qualifies no groove welds.`, basis: pos.fromMemory ? 'memory' : 'verified' })
-    reasons.push({ clause: input.form === 'plate' ? tables.plateThickness : tables.pipeRanges, text: 'The thickness range of a fillet test is not carried by this module: read it in the table.', basis: 'convention' })
+    if (input.form === 'plate') {
+      // Fillet weld test plate (Table 4.11 in 2015, 6.11 from 2020), from memory: 1/8 in (3 mm) and over, unlimited.
+      result.thickness = range(pick(d11.t1_8, u), null)
+      reasons.push({ clause: tables.plateThickness, text: `A fillet weld test on plate qualifies fillet welds on base metal of ${formatRange(pick(d11.t1_8, u), null, u)}.`, basis: 'memory' })
+    }
+    else {
+      reasons.push({ clause: tables.pipeRanges, text: 'The thickness range of a pipe fillet test is not carried by this module: read it in the table.', basis: 'convention' })
+    }
   }
 
   const undetermined: Undetermined[] = []
@@ -83,15 +90,18 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
       reasons.push({ clause: tables.pipeRanges, text: `Test pipe of ${f(pick(d11.od4, u))} or less: sizes ${formatRange(pick(d11.od3_4, u), pick(d11.od4, u), u)}.`, basis: si })
     }
     else {
-      reasons.push({ clause: `${tables.pipeRanges} note f`, text: `Test pipe over ${f(pick(d11.od4, u))}: qualifies up to unlimited size; the minimum size (note f) is not carried, so no diameter range is given.`, basis: 'partial' })
+      // Over 4 in: unlimited size (read). The minimum of note f was not legible: Rootface starts at the test size itself,
+      // the least any minimum can be, so a smaller production pipe is never called covered.
+      result.diameter = range(od, null)
+      reasons.push({ clause: `${tables.pipeRanges} note f`, text: `Test pipe over ${f(pick(d11.od4, u))}: sizes up to unlimited (read). The smallest size of note f is not carried: Rootface qualifies from the test size, ${f(od)}, up; check note f by hand for smaller pipe.`, basis: 'partial' })
     }
     const wallRange = small || thinWall ? range(pick(d11.t1_8, u), pick(d11.t3_4, u)) : range(pick(d11.t3_16, u), null)
     result.thickness = wallRange
     reasons.push({ clause: tables.pipeRanges, text: `Wall qualified: ${formatRange(toMicro(wallRange.min ?? 0), wallRange.max === null ? null : toMicro(wallRange.max), u)}.`, basis: si })
-    const fixed = input.testPositions.some(p => ['5G', '6G'].includes(p.toUpperCase()))
+    const fixed = input.testPositions.some(p => ['5G', '6G', '6GR'].includes(p.toUpperCase()))
     const n = fixed ? 2 : 1
     result.bendSpecimens = small || thinWall ? { face: n, root: n, side: 0, total: 2 * n } : { face: 0, root: 0, side: 2 * n, total: 2 * n }
-    reasons.push({ clause: tables.pipeRanges, text: `Bends (${fixed ? '5G/6G' : '1G/2G'}): ${small || thinWall ? `${n} face and ${n} root` : `${2 * n} side`}.`, basis: 'verified' })
+    reasons.push({ clause: tables.pipeRanges, text: `Bends (${fixed ? '5G/6G/6GR' : '1G/2G'}): ${small || thinWall ? `${n} face and ${n} root` : `${2 * n} side`}.`, basis: 'verified' })
     result.positions.groovePipe = pos.groove
   }
 

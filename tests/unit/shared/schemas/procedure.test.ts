@@ -7,7 +7,7 @@ function complete(): ProcedureDraft {
     ...blankProcedureDraft(),
     number: 'WPS-100', title: 'GMAW-S sheet', edition: '2019',
     thickness: { groove: { min: 0.0625, max: 0.1345 }, fillet: { min: null, max: null } },
-    joints: { type: 'butt', groove: 'square groove', grooveAngle: null, rootOpening: { min: 0, max: 0.0625 }, rootFace: { min: null, max: null }, backing: 'none' },
+    joints: { type: 'butt', groove: 'square groove', grooveAngle: null, rootOpening: { min: 0, max: 0.0625 }, rootFace: { min: null, max: null }, backing: 'none', designation: null },
     layers: [{
       ...blankLayer('GMAW'),
       fillers: [{ fillerMetalId: null, specification: 'SFA-5.18', classification: 'ER70S-6', fNumber: '6', aNumber: '1', size: 0.035 }],

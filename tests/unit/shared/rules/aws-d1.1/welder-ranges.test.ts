@@ -81,8 +81,8 @@ describe('AWS D1.1:2020 Table 10.13 pipe groove ranges (proxied scribd "WQT - AW
     expect(pipe(8.625, 0.5).bendSpecimens).toEqual({ face: 0, root: 0, side: 4, total: 4 })
     expect(pipe(8.625, 0.5, ['2G']).bendSpecimens).toEqual({ face: 0, root: 0, side: 2, total: 2 })
   })
-  it('over 4 in: the minimum size (note f) is not carried, so no diameter is given', () => {
-    expect(pipe(8.625, 0.322).diameter).toBeUndefined()
+  it('over 4 in: unlimited size (read); note f (the minimum) is not carried, so the test size is the floor (convention)', () => {
+    expect(pipe(8.625, 0.322).diameter).toEqual({ min: 8.625, max: null })
   })
   it('pipe fillet 4F → F, H, OH and 5F → all (Table 10.12, read)', () => {
     const f = (t: string) => pos(wr({ process: 'SMAW', form: 'pipe', weld: 'fillet', testPositions: [t], outsideDiameter: 6 })).fillet
@@ -121,8 +121,8 @@ describe('AWS D1.1 coverage and bends', () => {
     expect(big.specimens).toEqual([expect.objectContaining({ replace: true })])
     expect(bend([{ size: 0.2, atCorner: true, fromInternalDefect: true }]).accepted).toBe(false)
   })
-  it('D1.1 carries no procedure-ranges or radiography here: refused, not guessed', () => {
-    expect(refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit: 'in', input: { process: 'SMAW', couponThickness: 1 } })).toContain('no procedure-ranges')
-    expect(refused({ code: 'aws-d1.1', check: 'radiography', unit: 'in', input: { thickness: 1, indications: [] } })).toContain('no radiography')
+  it('D1.1 procedure-ranges refuses what it does not carry (ESW, sheet under 1/8 in), not guessed', () => {
+    expect(refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit: 'in', input: { process: 'ESW', couponThickness: 1 } })).toContain('not carried')
+    expect(refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit: 'in', input: { process: 'SMAW', couponThickness: 0.1 } })).toContain('D1.3')
   })
 })
