@@ -113,3 +113,16 @@ export const isoValidityKindIds = ['confirmation', 'production-welds'] as const
 
 /** Whether a stored code is the ISO welder standard (the code family ISO standings are kept in). */
 export const isIsoWelderCode = (code: string) => code === 'iso-9606-1'
+
+/**
+ * A procedure (WPS or PQR/WPQR) is never "ISO 9606-1": that is the welder standard. Procedures recorded with the ISO code
+ * are read as ISO 15614-1 (procedure test, WPQR) and ISO 15609-1 (WPS content). The stored code stays as it was, so
+ * signed procedures keep verifying; only the words change.
+ */
+export function procedureCodeTitle(code: string, record: 'wps' | 'pqr', fallback: (code: string) => string): string {
+  if (!isIsoWelderCode(code) && code !== 'iso-15614-1') return fallback(code)
+  return record === 'wps' ? 'ISO 15609-1 (WPS), qualified to ISO 15614-1' : 'ISO 15614-1 (WPQR)'
+}
+export function procedureCodeShortName(code: string, fallback: (code: string) => string): string {
+  return isIsoWelderCode(code) || code === 'iso-15614-1' ? 'ISO 15614-1' : fallback(code)
+}

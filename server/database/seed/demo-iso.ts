@@ -3,15 +3,18 @@ import type { Db } from '../client'
 import * as t from '../schema'
 import { canonicalJson, contentHash, currentContentFormat, newVerifyCode, sha256Hex } from '../signing'
 import { columnsOf } from '../welder-test-columns'
+import { pqrLayersOf } from '../pqr-columns'
 import type { WelderTestInput } from '../../../shared/schemas/welder-test'
 
 // The demo shop's ISO side (invented): a welder certified to ISO 9606-1 for 135 P BW FM1 S t10 PF ss nb, route 9.3 b),
 // tested 22 months ago, confirmed every five months by the welding coordinator, with two production welds tested in the
-// last six months of the first two years (so the certificate runs two more years).
+// last six months of the first two years (so the certificate runs two more years). And an ISO 15614-1 WPQR (recorded
+// under the ISO code; read as ISO 15614-1), 135 spray on 15 mm plate in PA with impact tests, values in mm and °C.
 const iso = (d: Date) => format(d, 'yyyy-MM-dd')
 
 export async function seedDemoIso(tx: Db, ctx: { today: Date, supervisor: { id: number, name: string }, inspector: { id: number, name: string } }) {
   const { today, supervisor, inspector } = ctx
+  await seedDemoIsoWpqr(tx, today)
   const [welder] = await tx.insert(t.welders).values({ name: 'Ines Varga', stamp: 'IV-21', employeeNumber: 'E-2107', status: 'active' }).returning()
   const tested = subMonths(today, 22)
   const input: WelderTestInput = {
@@ -40,4 +43,18 @@ export async function seedDemoIso(tx: Db, ctx: { today: Date, supervisor: { id: 
     const content = { testId: row!.id, kind: r.kind, on: r.on, confirmer: r.confirmer, statement: r.statement, reference: r.reference, signerName: signer.name }
     await tx.insert(t.isoValidityRecords).values({ ...content, signerId: signer.id, sha256: sha256Hex(canonicalJson(content)) })
   }
+}
+
+/** The demo's ISO 15614-1 WPQR, recorded (not yet certified): a draft WPS can be written from it. */
+export async function seedDemoIsoWpqr(tx: Db, today: Date) {
+  const [base] = await tx.select().from(t.baseMetals).limit(1)
+  const [filler] = await tx.select().from(t.fillerMetals).limit(1)
+  const values = {
+    number: 'WPQR-ISO-07', testDate: iso(subMonths(today, 5)), code: 'iso-9606-1', edition: '2017', unit: 'mm', process: 'GMAW', transfer: 'spray',
+    couponThickness: 15, depositThickness: 15, baseMetalId: base!.id, fillerMetalId: filler!.id, toughnessRequired: true,
+    actuals: { amps: 265, volts: 28.5, wireFeed: 9.5, travelSpeed: 320, gas: 'M21 (82Ar-18CO2)', gasFlow: 16, position: 'PA', preheat: 20, interpass: 200 },
+    labReportNumber: 'NK-WP-3318', status: 'recorded', layers: [] as unknown[],
+  }
+  const layers = pqrLayersOf(values as Parameters<typeof pqrLayersOf>[0])
+  await tx.insert(t.pqrs).values({ ...values, layers, processes: [...new Set(layers.map(l => l.process))] })
 }
