@@ -104,6 +104,17 @@ describe('ISO 9606-1 welder tests', () => {
     expect(board.rows.filter(r => r.process !== '135').every(r => r.code !== 'iso-9606-1')).toBe(true)
   })
 
+  it('the certificate sheet speaks the standard\'s terms: designation, examiner, 9.2 record, 9.3 route, caution', async () => {
+    const sheet = (await inspector.json<{ kindTitle: string, blocks: { heading: string, fields?: { label: string, value: string }[], table?: { rows: string[][] } }[], caution: string }>(`/api/sheets/tests/${id}?format=json`)).body
+    expect(sheet.kindTitle).toContain('ISO 9606-1')
+    const cert = sheet.blocks.find(b => b.heading === 'ISO 9606-1 certificate')!
+    expect(cert.fields?.find(f => f.label === 'Designation')?.value).toBe('ISO 9606-1 135 P BW FM1 S t10 PF ss nb')
+    expect(cert.fields?.find(f => f.label === 'Examiner')?.value).toBe('R. Examiner')
+    expect(cert.fields?.find(f => f.label === 'Revalidation')?.value).toMatch(/^9\.3 b\)/)
+    expect(sheet.blocks.find(b => b.heading.startsWith('Validity'))?.table?.rows).toHaveLength(1)
+    expect(sheet.caution).toMatch(/final word/)
+  })
+
   it('an ASME test is not an ISO certificate: its iso-validity is a 404', async () => {
     const list = (await supervisor.json<{ items: { id: number, code: string }[] }>('/api/tests?pageSize=50')).body.items
     const asme = list.find(t => t.code === 'asme-ix')!
