@@ -214,6 +214,8 @@ export const welderTests = pgTable('welder_tests', {
   pqrId: integer('pqr_id').references(() => pqrs.id),
   // AWS D1.3 joint type of the test (square-groove, flare-groove, fillet, plug, arc-spot, arc-seam); null for other codes.
   jointType: text('joint_type'),
+  // ISO 9606-1 only: filler type, weld details, examiner, methods of test, identification, 9.3 route (shared/schemas/welder-test.ts)
+  iso: jsonb('iso'),
   status: text('status').notNull().default('recorded'),
   inspectorId: integer('inspector_id').references(() => accounts.id),
   certifiedAt: timestamp('certified_at', { withTimezone: true }),
@@ -328,7 +330,7 @@ export const signatures = pgTable('signatures', {
   // Which fields the hash covers (server/database/signing.ts): 1 before process layers, 2 with them
   contentFormat: integer('content_format').notNull().default(1),
 }, t => [
-  check('signatures_content_format_check', sql`${t.contentFormat} in (1, 2)`),
+  check('signatures_content_format_check', sql`${t.contentFormat} in (1, 2, 3)`),
   uniqueIndex('signatures_verify_code_key').on(t.verifyCode),
   index('signatures_record_idx').on(t.recordType, t.recordId),
   check('signatures_meaning_check', sql`${t.meaning} in ('prepared', 'witnessed', 'approved', 'certified')`),
@@ -509,3 +511,24 @@ export const continuityImports = pgTable('continuity_imports', {
   undoneBy: integer('undone_by').references(() => accounts.id),
 }, t => [index('continuity_imports_created_idx').on(t.createdAt)])
 // ---- end tidy ----
+// ---- iso ----
+// ISO 9606-1 validity of a certified test: the six-monthly confirmations of clause 9.2 and the 9.3 b) records of
+// production welds tested. Each is signed by its author (sha256 over its content) and never edited.
+export const isoValidityRecords = pgTable('iso_validity_records', {
+  id: serial('id').primaryKey(),
+  testId: integer('test_id').notNull().references(() => welderTests.id),
+  kind: text('kind').notNull(),
+  on: date('on', { mode: 'string' }).notNull(),
+  confirmer: text('confirmer').notNull(),
+  statement: text('statement').notNull(),
+  reference: text('reference'),
+  signerId: integer('signer_id').notNull().references(() => accounts.id),
+  signerName: text('signer_name').notNull(),
+  sha256: text('sha256').notNull(),
+  createdAt: created(),
+}, t => [
+  index('iso_validity_records_test_idx').on(t.testId, t.on),
+  check('iso_validity_records_kind_check', sql`${t.kind} in ('confirmation', 'production-welds')`),
+  check('iso_validity_records_confirmer_check', sql`${t.confirmer} in ('coordinator', 'examiner')`),
+])
+// ---- end iso ----

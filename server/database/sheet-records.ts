@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, inArray, lte, or } from 'drizzle-orm'
 import type { Db } from './client'
 import {
-  accounts, attachments, baseMetals, continuityEntries, customers, fillerMetals, issuedSheets, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs,
+  accounts, attachments, baseMetals, continuityEntries, customers, fillerMetals, isoValidityRecords, issuedSheets, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs,
   procedures, projectProcedures, projects, projectWelders, shopSettings, signatures, welders, welderTestBends, welderTests,
 } from './schema'
 import { contentFormatOf, contentHash, newVerifyCode, type SignedRecordType } from './signing'
@@ -97,7 +97,9 @@ export async function loadWelderTest(db: Db, id: number) {
     ? await db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, test.inspectorId))
     : []
   const bends = await db.select().from(welderTestBends).where(eq(welderTestBends.testId, id)).orderBy(asc(welderTestBends.id))
-  return { test, welder: row.welders, procedure: procedure ?? null, inspector: inspector?.name ?? null, bends, signed: await signaturesOf(db, 'welder-test', id) }
+  // ISO 9606-1: the signed 9.2 confirmations and 9.3 b) records, for the certificate
+  const isoRecords = test.code === 'iso-9606-1' ? await db.select().from(isoValidityRecords).where(eq(isoValidityRecords.testId, id)).orderBy(asc(isoValidityRecords.on), asc(isoValidityRecords.id)) : []
+  return { test, welder: row.welders, procedure: procedure ?? null, inspector: inspector?.name ?? null, bends, isoRecords, signed: await signaturesOf(db, 'welder-test', id) }
 }
 export type WelderTestRecord = NonNullable<Awaited<ReturnType<typeof loadWelderTest>>>
 

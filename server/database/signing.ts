@@ -29,32 +29,39 @@ export function newVerifyCode() {
  * The content a signature covers: the record's own fields, without bookkeeping (timestamps, version counters).
  * Which fields is fixed per content format, so a later column never changes the hash of an earlier signature:
  * format 1 is the record as it was before process layers; format 2 adds the layers, the process list, base metal B,
- * the coupon's welder and the PQR a welder test came from. A signature keeps the format it was made with.
+ * the coupon's welder and the PQR a welder test came from; format 3 adds a welder test's ISO 9606-1 block (filler type,
+ * weld details, examiner, methods of test, 9.3 route). A signature keeps the format it was made with.
  */
-export type ContentFormat = 1 | 2
-export const currentContentFormat: ContentFormat = 2
+export type ContentFormat = 1 | 2 | 3
+export const currentContentFormat: ContentFormat = 3
 
 const fieldsOf: Record<SignedRecordType, Record<ContentFormat, string[]>> = {
   'procedure': {
     1: ['id', 'number', 'revision', 'title', 'code', 'edition', 'unit', 'process', 'transfer', 'pNumberA', 'pNumberB', 'thicknessMin', 'thicknessMax',
       'diameterMin', 'positions', 'fNumbers', 'variables'],
     2: [],
+    3: [],
   },
   'pqr': {
     1: ['id', 'number', 'testDate', 'code', 'edition', 'unit', 'process', 'transfer', 'couponThickness', 'depositThickness', 'baseMetalId',
       'fillerMetalId', 'toughnessRequired', 'actuals', 'toughness', 'labReportNumber'],
     2: [],
+    3: [],
   },
   'welder-test': {
     1: ['id', 'welderId', 'procedureId', 'testDate', 'code', 'edition', 'unit', 'process', 'transfer', 'form', 'weld', 'couponThickness',
       'depositThickness', 'layers', 'outsideDiameter', 'pNumber', 'fNumber', 'backing', 'positions', 'progression', 'visualAccepted', 'visualNotes',
       'examination', 'radiography', 'ranges'],
     2: [],
+    3: [],
   },
 }
 fieldsOf.procedure[2] = [...fieldsOf.procedure[1], 'processes', 'layers']
 fieldsOf.pqr[2] = [...fieldsOf.pqr[1], 'processes', 'layers', 'baseMetalBId', 'welderId']
 fieldsOf['welder-test'][2] = [...fieldsOf['welder-test'][1], 'processes', 'deposits', 'pqrId']
+fieldsOf.procedure[3] = fieldsOf.procedure[2]
+fieldsOf.pqr[3] = fieldsOf.pqr[2]
+fieldsOf['welder-test'][3] = [...fieldsOf['welder-test'][2], 'iso']
 
 const pick = (row: Record<string, unknown>, keys: string[]) => Object.fromEntries(keys.filter(k => k in row).map(k => [k, row[k]]))
 const omit = <T extends Record<string, unknown>>(row: T, keys: string[]) =>
@@ -89,5 +96,5 @@ export async function contentHash(db: Db, type: SignedRecordType, id: number, fo
 }
 
 export function contentFormatOf(value: number | null | undefined): ContentFormat {
-  return value === 1 ? 1 : 2
+  return value === 1 ? 1 : value === 3 ? 3 : 2
 }

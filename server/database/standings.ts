@@ -1,12 +1,14 @@
 import { and, asc, between, desc, eq, ilike, inArray, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
-import { continuityEntries, procedures, processStandings, standingRefresh, welders, welderTests } from './schema'
+import { continuityEntries, isoValidityRecords, procedures, processStandings, standingRefresh, welders, welderTests } from './schema'
 import { allOf, containsPattern } from '../utils/list'
 import { lapseWeeks } from '../../shared/qualification/lapse-weeks'
 import { renewalOf } from '../../shared/qualification/renewal'
 import type { StandingsQuery } from '../../shared/schemas/list-queries'
 import { continuityChain, standingOn, type Chain, type ProcessStanding } from '../../shared/qualification/process-standing'
 import type { CodeId } from '../../shared/rules/types'
+import { isoChain, sameFamily } from '../../shared/qualification/iso-standing'
+import type { IsoRoute, IsoValidityRecord } from '../../shared/rules/iso-9606-1/validity'
 
 const chunked = <T>(list: T[], size: number) => Array.from({ length: Math.ceil(list.length / size) }, (_, i) => list.slice(i * size, (i + 1) * size))
 
@@ -34,11 +36,18 @@ export async function refreshStandings(db: Db) {
 async function recompute(tx: Db, part: { welderId: number, process: string }[]) {
   const ids = [...new Set(part.map(d => d.welderId))]
   // One after the other: PGlite cannot run two statements of one transaction at once.
-  const certified = await tx.select({ welderId: welderTests.welderId, process: welderTests.process, processes: welderTests.processes, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate })
+  const certified = await tx.select({ id: welderTests.id, welderId: welderTests.welderId, process: welderTests.process, processes: welderTests.processes, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate, iso: welderTests.iso })
     .from(welderTests).where(and(inArray(welderTests.welderId, ids), eq(welderTests.status, 'certified')))
     .orderBy(desc(welderTests.testDate), desc(welderTests.id))
   // A combination coupon counts for each of its processes (ASME IX QW-452.1(b)); older tests list none and count for their one.
+  // A test counts only for processes of its own code family (ISO 4063 numbers for ISO 9606-1, names otherwise).
   const tests = certified.flatMap(({ processes, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process })))
+    .filter(t => sameFamily(t.code, t.process))
+  const isoIds = [...new Set(tests.filter(t => t.code === 'iso-9606-1').map(t => t.id))]
+  const isoRecords = isoIds.length
+    ? await tx.select({ testId: isoValidityRecords.testId, kind: isoValidityRecords.kind, on: isoValidityRecords.on }).from(isoValidityRecords).where(inArray(isoValidityRecords.testId, isoIds))
+    : []
+  const recordsOf = (testId: number) => isoRecords.filter(r => r.testId === testId).map(r => ({ kind: r.kind, on: r.on }) as IsoValidityRecord)
   const uses = await tx.select({ welderId: continuityEntries.welderId, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn })
     .from(continuityEntries).where(inArray(continuityEntries.welderId, ids))
   const key = (welderId: number, process: string) => `${welderId}|${process}`
@@ -54,7 +63,10 @@ async function recompute(tx: Db, part: { welderId: number, process: string }[]) 
   const rows = part.flatMap((d) => {
     const test = newest.get(key(d.welderId, d.process))
     if (!test) return []
-    const chain = continuityChain({ ...test, code: test.code as CodeId, uses: usesOf.get(key(d.welderId, d.process)) ?? [] })
+    const route = (test.iso as { route?: IsoRoute } | null)?.route
+    const chain = test.code === 'iso-9606-1' && route
+      ? isoChain({ ...test, code: 'iso-9606-1', route }, recordsOf(test.id))
+      : continuityChain({ ...test, code: test.code as CodeId, uses: usesOf.get(key(d.welderId, d.process)) ?? [] })
     return [{ welderId: d.welderId, process: chain.process, code: chain.code, edition: chain.edition, testDate: chain.testDate, lastUse: chain.lastUse, lapsesOn: chain.lapsesOn, rule: chain.rule }]
   })
   // A process left with no certified test (rare) loses its row; the rest are upserted.

@@ -1,10 +1,12 @@
 import type { welderTestBends, welderTests } from './schema'
 import { testOutcome, type TestRecord } from '../../shared/qualification/test-outcome'
-import type { WelderTestVariables } from '../../shared/qualification/test-ranges'
+import { isoDetailVariables, type WelderTestVariables } from '../../shared/qualification/test-ranges'
 import type { ProcessVariables } from '../../shared/rules/inputs'
 import type { WelderRangesResult } from '../../shared/rules/results'
-import { combinedProcess, type WelderTestInput } from '../../shared/schemas/welder-test'
+import { combinedProcess } from '../../shared/schemas/welder-test'
 import type { CodeId, Unit } from '../../shared/rules/types'
+import { designation } from '../../shared/rules/iso-9606-1/designation'
+import type { IsoTestInput, WelderTestInput } from '../../shared/schemas/welder-test'
 
 /** A welder test's input as columns, and a stored test as the rules read it: pure (relative imports only, for the seed scripts). */
 
@@ -49,6 +51,7 @@ export function variablesOf(row: Row): WelderTestVariables {
     depositThickness: row.depositThickness, layers: row.layers, outsideDiameter: row.outsideDiameter, pNumber: row.pNumber,
     fNumber: row.fNumber, backing: row.backing, positions: row.positions, progression: row.progression as 'uphill' | 'downhill' | null,
     processes: rulesProcesses(depositsOf(row), row.fNumber, row.progression), jointType: row.jointType,
+    iso: row.iso as WelderTestVariables['iso'],
   }
 }
 
@@ -70,7 +73,10 @@ export function recordOf(row: Row, bends: Pick<Bend, 'type' | 'largestIndication
  * deposit and the deposit it qualifies (ASME IX QW-452.1(b): each process its own) go in `deposits`.
  */
 export function columnsOf(input: WelderTestInput) {
-  const { bends, radiography: _r, macro: _m, processes, ...variables } = input
+  const { bends, radiography: _r, macro: _m, processes, ...given } = input
+  // ISO 9606-1: backing follows the weld details (ss nb without; ss mb and bs with), so the two never disagree.
+  const isoBacking = input.code === 'iso-9606-1' ? (isoDetailVariables(input.iso) as { backing?: boolean }).backing : undefined
+  const variables = isoBacking === undefined ? given : { ...given, backing: isoBacking }
   const combined = combinedProcess(processes)
   const record: TestRecord = {
     ...variables, ...combined, processes: rulesProcesses(processes, variables.fNumber, variables.progression),
@@ -93,4 +99,17 @@ export function columnsOf(input: WelderTestInput) {
     bends: bends.map((b, i) => ({ ...b, accepted: verdicts[i]?.accepted ?? false })),
     outcome,
   }
+}
+
+/** The ISO 9606-1 designation of a stored test (clause 10), or null for another code. */
+export function designationOf(row: Row): string | null {
+  if (row.code !== 'iso-9606-1') return null
+  const iso = row.iso as Partial<IsoTestInput> | null
+  return designation({
+    processes: depositsOf(row).map(d => ({ process: d.process, depositThickness: d.depositThickness })),
+    form: row.form as 'plate' | 'pipe', weld: row.weld as 'groove' | 'fillet',
+    fillerGroup: row.fNumber && /^[1-6]$/.test(row.fNumber) ? Number(row.fNumber) : null, fillerType: iso?.fillerType ?? null,
+    couponThickness: row.couponThickness, outsideDiameter: row.outsideDiameter, positions: row.positions,
+    details: iso?.details ?? null, gouging: iso?.gouging ?? null,
+  })
 }

@@ -5,7 +5,7 @@ import type { Db } from './client'
 import { accounts, pqrs, procedures, signatures, welders, welderTestBends, welderTests } from './schema'
 import { contentHash, currentContentFormat, newVerifyCode } from './signing'
 import { testOutcome } from '../../shared/qualification/test-outcome'
-import { columnsOf, depositsOf, examRecordOf, recordOf, type ExamRecord, type StoredDeposit } from './welder-test-columns'
+import { columnsOf, depositsOf, designationOf, examRecordOf, recordOf, type ExamRecord, type StoredDeposit } from './welder-test-columns'
 import type { WelderTestInput } from '../../shared/schemas/welder-test'
 import { recordAudit } from './audit'
 import { settle } from '../utils/outcome'
@@ -123,6 +123,7 @@ export async function loadWelderTest(db: Db, id: number) {
     welder: found.welder, procedure: found.procedure?.id ? found.procedure : null, inspectorName: found.inspectorName,
     signatures: signed.map(s => ({ id: s.id, meaning: s.meaning, signerName: s.signerName, signedAt: s.signedAt, sha256: s.sha256, verifyCode: s.verifyCode, recordVersion: s.recordVersion })),
     evaluation: testOutcome(record),
+    designation: designationOf(found.test),
   }
 }
 

@@ -1,5 +1,6 @@
 import { cautionText, codeName } from '#shared/rules/caution'
 import type { CodeId, Reason } from '#shared/rules/types'
+import { iso15614Caution } from '#shared/rules/iso-15614-1'
 import type { SheetBlock, SheetModel } from './model'
 import type { SignatureSet } from '../database/sheet-records'
 
@@ -22,6 +23,16 @@ export function codeLine(code: string, edition: string) {
   return isCode(code) ? `${codeName(code)}, ${edition} edition` : `${code}, ${edition}`
 }
 
+/** A procedure's code line: a WPS or PQR recorded with the ISO code is ISO 15609-1 / ISO 15614-1, never the welder standard. */
+export function procedureCodeLine(code: string, edition: string, record: 'wps' | 'pqr') {
+  return code === 'iso-9606-1' ? `${record === 'wps' ? 'ISO 15609-1 (WPS), qualified to ISO 15614-1' : 'ISO 15614-1 (WPQR)'} (recorded under the ISO code, ${edition})` : codeLine(code, edition)
+}
+
+/** A procedure's caution: the ISO procedure standard's words for a WPS or PQR recorded with the ISO code. */
+export function procedureCaution(code: string, edition: string) {
+  return code === 'iso-9606-1' ? iso15614Caution : caution(code, edition)
+}
+
 export function caution(code: string, edition: string) {
   return isCode(code)
     ? cautionText(code, edition)
@@ -29,9 +40,9 @@ export function caution(code: string, edition: string) {
 }
 
 /** The certification the signers of a test record make, in this program's words. */
-export function certification(code: string, edition: string, what: 'coupon' | 'coupons') {
+export function certification(code: string, edition: string, what: 'coupon' | 'coupons', record?: 'pqr') {
   return `The signers certify that the statements in this record are correct and that the test ${what === 'coupon' ? 'coupon was' : 'coupons were'} `
-    + `prepared, welded and tested in accordance with the requirements of ${codeLine(code, edition)}.`
+    + `prepared, welded and tested in accordance with the requirements of ${record ? procedureCodeLine(code, edition, record) : codeLine(code, edition)}.`
 }
 
 export function reasonsBlock(heading: string, reasons: Reason[], clause?: string): SheetBlock {

@@ -2,7 +2,7 @@ import { evaluate } from '#shared/rules'
 import type { Reason, Unit } from '#shared/rules/types'
 import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { PqrRecord } from '../database/sheet-records'
-import { caution, certification, codeLine, groupClause, isCode, reasonsBlock, signedParts } from './common'
+import { procedureCaution, certification, procedureCodeLine as codeLine, groupClause, isCode, reasonsBlock, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, temperature, yesNo } from './format'
 import { unitLabels } from '#shared/qualification/procedure-units'
 
@@ -25,7 +25,7 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
       heading: 'Record',
       fields: [
         { label: 'Test date', value: q.testDate },
-        { label: 'Code', value: codeLine(q.code, q.edition) },
+        { label: 'Code', value: codeLine(q.code, q.edition, 'pqr') },
         { label: 'Processes', value: processes.join(' + ') },
         { label: 'Welder of the coupon', value: record.welder ? `${printable(record.welder.name)} (${printable(record.welder.stamp)})` : 'not recorded', clause: q.code === 'asme-ix' ? 'QW-301.2' : undefined },
         { label: 'Laboratory report', value: orDash(q.labReportNumber) },
@@ -91,9 +91,9 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
   return {
     kind: 'pqr', kindTitle: 'Procedure qualification record (PQR)', shopName: shop, number: q.number, revision: null,
     subtitle: `${processes.join(' + ')}, coupon ${length(q.couponThickness, unit)}, tested ${q.testDate}`,
-    codeLine: codeLine(q.code, q.edition), unit, status: q.status,
+    codeLine: codeLine(q.code, q.edition, 'pqr'), unit, status: q.status,
     banner: q.status === 'failed' ? 'FAILED · qualifies nothing' : q.status === 'recorded' ? 'NOT CERTIFIED' : null,
-    blocks, statement: certification(q.code, q.edition, 'coupon'), ...signedParts(record.signed, origin), caution: caution(q.code, q.edition),
+    blocks, statement: certification(q.code, q.edition, 'coupon', 'pqr'), ...signedParts(record.signed, origin), caution: procedureCaution(q.code, q.edition),
   }
 }
 

@@ -5,6 +5,8 @@ import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { WelderTestRecord } from '../database/sheet-records'
 import { caution, certification, codeLine, reasonsBlock, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, yesNo } from './format'
+import { isoCertificateBlocks } from './iso-certificate'
+import { todayIso } from '../utils/today'
 
 type Ranges = WelderRangesResult & { reasons: Reason[] }
 
@@ -65,6 +67,7 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
         notes: ['Each process qualifies its own deposit; the combination qualifies the sum (QW-452.1(b) and its notes).'],
       } satisfies SheetBlock]
       : []),
+    ...isoCertificateBlocks(record, todayIso()),
     resultsBlock(record),
   ]
   if (record.bends.length) {
@@ -80,7 +83,7 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
   blocks.push(...rangeBlocks(record))
   const status = t.status
   return {
-    kind: 'wpq', kindTitle: 'Welder performance qualification (WPQ)', shopName: shop, number: `WPQ-${t.id}`, revision: null,
+    kind: 'wpq', kindTitle: t.code === 'iso-9606-1' ? 'Welder qualification test certificate (ISO 9606-1)' : 'Welder performance qualification (WPQ)', shopName: shop, number: `WPQ-${t.id}`, revision: null,
     subtitle: `${printable(record.welder.name)} (${printable(record.welder.stamp)}), ${processes.map(d => d.process).join(' + ')}, ${list(t.positions)}, tested ${t.testDate}`,
     codeLine: codeLine(t.code, t.edition), unit, status,
     banner: status === 'failed' ? 'FAILED · qualifies nothing' : status === 'recorded' ? 'NOT CERTIFIED' : null,

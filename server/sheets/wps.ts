@@ -4,7 +4,7 @@ import type { Unit } from '#shared/rules/types'
 import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { ProcedureRecord } from '../database/sheet-records'
 import { draftOf, layeredSupport } from '../database/procedures'
-import { caution, codeLine, groupClause, isCode, signedParts } from './common'
+import { procedureCaution as caution, procedureCodeLine as codeLine, groupClause, isCode, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, temperature, windowText, yesNo } from './format'
 
 type Window = { min: number | null, max: number | null, setPoint?: number | null }
@@ -98,7 +98,7 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
       heading: 'Scope',
       fields: [
         { label: 'Title', value: printable(p.title) },
-        { label: 'Code', value: codeLine(p.code, p.edition) },
+        { label: 'Code', value: codeLine(p.code, p.edition, 'wps') },
         { label: 'Processes', value: draft.layers.map(l => `${l.process}${l.transfer ? ` (${l.transfer})` : ''} ${printable(l.name)}`).join(' + ') },
         { label: 'Units', value: unit === 'in' ? 'inch, °F' : 'millimetre, °C' },
         { label: 'Supporting PQRs', value: list(record.pqrs.map(q => `${q.number} (tested ${q.testDate}, ${q.status})`)) },
@@ -164,7 +164,7 @@ export function wpsSheet(record: ProcedureRecord, shop: string, origin: string):
   const status = p.status === 'superseded' && record.supersededBy !== null ? `superseded by rev. ${record.supersededBy}` : p.status
   return {
     kind: 'wps', kindTitle: 'Welding procedure specification (WPS)', shopName: shop, number: p.number, revision: p.revision,
-    subtitle: printable(p.title), codeLine: codeLine(p.code, p.edition), unit, status,
+    subtitle: printable(p.title), codeLine: codeLine(p.code, p.edition, 'wps'), unit, status,
     banner: p.status === 'draft' ? 'DRAFT · not for production' : p.status === 'superseded' ? 'SUPERSEDED' : null,
     blocks, statement: null, ...signed, caution: caution(p.code, p.edition),
   }

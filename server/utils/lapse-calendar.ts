@@ -17,7 +17,7 @@ export function lapseCalendar(welder: { id: number, name: string, stamp: string 
     return {
       uid: `lapse-${welder.id}-${s.process}@rootface`,
       title: `${s.process} qualification lapses (${welder.stamp})`,
-      description: `${welder.name}, stamp ${welder.stamp}: ${s.process} lapses on ${s.lapsesOn} unless the process is used and logged before then. Last logged use ${s.lastUse}. ${s.rule} The governing code edition, the shop's quality manual and the inspector have the final word.`,
+      description: `${welder.name}, stamp ${welder.stamp}: ${s.process} lapses on ${s.lapsesOn} ${s.code === 'iso-9606-1' ? `unless the ISO 9606-1 certificate is confirmed (9.2) before then. Last confirmation ${s.lastUse}.` : `unless the process is used and logged before then. Last logged use ${s.lastUse}.`} ${s.rule} The governing code edition, the shop's quality manual and the inspector have the final word.`,
       start: [y, m, d], end: [next.getFullYear(), next.getMonth() + 1, next.getDate()],
       productId: '-//Rootface//Lapse dates//EN', calName: `Lapse dates ${welder.stamp}`,
       alarms: [

@@ -46,8 +46,12 @@ export function lapseReminderMail(input: { welder: { id: number, name: string, s
   const body = renderLetter({
     greeting: `Hello ${input.welder.name},`,
     paragraphs: [
-      `Your ${s.process} qualification (stamp ${input.welder.stamp}) lapses on ${s.lapsesOn}, in ${days}. The last use on record is ${s.lastUse}.`,
-      `Welding with ${s.process} before that day, logged in the continuity log, keeps it current. Once it has lapsed you need a new test.`,
+      ...(s.code === 'iso-9606-1'
+        // ISO 9606-1: kept by the six-monthly confirmation (9.2) and ended by the revalidation route (9.3), not by logged uses
+        ? [`Your ISO 9606-1 certificate for process ${s.process} (stamp ${input.welder.stamp}) lapses on ${s.lapsesOn}, in ${days}. The last confirmation on record is ${s.lastUse}.`,
+            'A six-monthly confirmation (9.2) signed by the welding coordinator or the examiner before that day keeps it, unless its 9.3 end of validity comes first; then it needs a retest or the production welds tested.']
+        : [`Your ${s.process} qualification (stamp ${input.welder.stamp}) lapses on ${s.lapsesOn}, in ${days}. The last use on record is ${s.lastUse}.`,
+            `Welding with ${s.process} before that day, logged in the continuity log, keeps it current. Once it has lapsed you need a new test.`]),
       `${codeName(s.code)} ${s.edition}: ${s.rule}`,
     ],
     action: { label: 'See your qualifications', href: input.link },

@@ -3,6 +3,8 @@ import { codeName } from '../rules/caution'
 import { convertLength } from '../rules/units'
 import type { ToughnessResults } from '../rules/inputs'
 import type { Basis, CodeId, Range, Unit } from '../rules/types'
+import { isoProcedureFindings } from './iso-procedure-support'
+import { iso15614Caution } from '../rules/iso-15614-1'
 
 /** A supporting PQR as the support check needs it (lengths in the PQR's own unit). */
 export interface SupportPqr {
@@ -156,6 +158,14 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
     findings.push({ met: false, clause: 'code', text: `${p.number} was qualified to ${codeName(p.code as CodeId)}; this WPS is written to ${codeName(wps.code as CodeId)}.`, basis: 'convention', field: 'supportingPqrIds' })
   }
   if (sameCode.length === 0) return result(false, null)
+  if (rulesMissing && wps.code === 'iso-9606-1') {
+    // A procedure recorded with the ISO code is an ISO 15609-1 WPS qualified to ISO 15614-1: compared variable by variable
+    // where the record holds the value; the rest, and the approval, stay a check by hand.
+    findings.push(...isoProcedureFindings(wps, sameCode))
+    findings.push({ met: false, clause: 'rules', basis: 'convention', field: null,
+      text: 'ISO 15614-1 ranges are carried from memory: confirm each against the WPQRs by hand and say how when approving.' })
+    return result(false, iso15614Caution)
+  }
   if (rulesMissing) {
     findings.push({ met: false, clause: 'rules', basis: 'convention', field: null,
       text: `Rootface carries no procedure-support rules for ${ruleSet!.title}: check each range against the PQRs by hand and say how when approving.` })

@@ -29,6 +29,19 @@ export interface WelderTestVariables {
   current?: 'AC' | 'DCEP' | 'DCEN' | null
   /** AWS D1.3 joint type (square-groove, flare-groove, fillet, plug, arc-spot, arc-seam). */
   jointType?: string | null
+  /** ISO 9606-1: filler type and weld details (ss nb, ss mb, bs; sl, ml) */
+  iso?: { fillerType?: string | null, details?: string | null } | null
+}
+
+/** ISO 9606-1, 5.9: the weld details as the rules' sides, backing and layering. */
+export function isoDetailVariables(iso: WelderTestVariables['iso']) {
+  const d = iso?.details
+  if (d === 'ss nb') return { sides: 'single', backing: false }
+  if (d === 'ss mb') return { sides: 'single', backing: true }
+  if (d === 'bs') return { sides: 'both', backing: true }
+  if (d === 'sl') return { layering: 'single' }
+  if (d === 'ml') return { layering: 'multi' }
+  return {}
 }
 
 const defined = (o: Record<string, unknown>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== null && v !== undefined))
@@ -39,10 +52,13 @@ export function welderRangesInput(test: WelderTestVariables) {
     form: test.form, weld: test.weld, testPositions: test.positions, couponThickness: test.couponThickness,
     outsideDiameter: test.outsideDiameter, backing: test.backing, pNumber: test.pNumber,
     joint: test.code === 'aws-d1.3' ? test.jointType : undefined,
+    ...(test.code === 'iso-9606-1' ? isoDetailVariables(test.iso) : {}),
   }
-  if (test.processes && test.processes.length > 0) return defined({ ...coupon, processes: test.processes.map(p => defined({ ...p })) })
+  // ISO 9606-1, 5.6: the filler type (a combination coupon gives it per process; the one type recorded applies to each)
+  const fillerType = test.code === 'iso-9606-1' ? test.iso?.fillerType ?? undefined : undefined
+  if (test.processes && test.processes.length > 0) return defined({ ...coupon, processes: test.processes.map(p => defined({ ...p, fillerType })) })
   return defined({
-    ...coupon, process: test.process, transfer: test.transfer, depositThickness: test.depositThickness, layers: test.layers,
+    ...coupon, fillerType, process: test.process, transfer: test.transfer, depositThickness: test.depositThickness, layers: test.layers,
     // Stored as text ("4"); the rules take the F-Number as a number.
     fNumber: test.fNumber === null || test.fNumber === undefined || test.fNumber === '' ? undefined : Number(test.fNumber),
     progression: test.progression === 'uphill' || test.progression === 'downhill' ? test.progression : undefined, fillerAdded: test.fillerAdded, consumableInsert: test.consumableInsert, fillerForm: test.fillerForm,

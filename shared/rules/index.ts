@@ -5,6 +5,7 @@ import { awsD11 } from './aws-d1.1'
 import { awsD13 } from './aws-d1.3'
 import { cautionText } from './caution'
 import { iso96061 } from './iso-9606-1'
+import { evaluateIso15614 } from './iso-15614-1'
 import { RuleRefusal } from './refusal'
 import { envelopeSchema, formatIssues, inputSchemas } from './requests'
 
@@ -60,6 +61,10 @@ export type EvaluationResult = Evaluated & ResultMeta
  * cannot be evaluated without guessing gives { error } with a message for the user.
  */
 export function evaluate(request: unknown): EvaluationResult | ErrorResult {
+  // The procedure standard ISO 15614-1 has its own inputs (mm, °C, ISO 4063 numbers); the other requests are unchanged.
+  if (request !== null && typeof request === 'object' && (request as { code?: unknown }).code === 'iso-15614-1') {
+    return evaluateIso15614(request) as unknown as EvaluationResult | ErrorResult
+  }
   try {
     const envelope = envelopeSchema.safeParse(request)
     if (!envelope.success) return { error: formatIssues(envelope.error, '') }

@@ -2,12 +2,15 @@ import { z } from 'zod'
 import { calendarDate } from './fields'
 import { listQuerySchema, processSchema } from './list'
 import { codeIds, procedureStatuses, pqrStatuses, welderStatuses, welderTestStatuses } from '../vocabulary/records'
+import { isoProcessIds } from '../vocabulary/iso'
 
 // The query of each list route: its sort columns and filters. The route validates with it; its table sends it.
 
 const id = z.coerce.number().int().positive().max(2_147_483_647)
 const isoDate = calendarDate('Date', { format: 'Use YYYY-MM-DD' })
 const pNumber = z.string().trim().max(8).optional()
+// Welder tests and standings are listed under ASME/AWS process names or ISO 4063 numbers (ISO 9606-1)
+const welderProcess = z.union([processSchema, z.enum(isoProcessIds)])
 
 export const procedureListQuerySchema = listQuerySchema(['number', 'title', 'process', 'status', 'updatedAt']).extend({
   status: z.enum(procedureStatuses).optional(),
@@ -28,7 +31,7 @@ export type PqrListQuery = z.infer<typeof pqrListQuerySchema>
 
 export const welderTestListQuerySchema = listQuerySchema(['testDate', 'welder', 'process', 'status']).extend({
   status: z.enum(welderTestStatuses).optional(),
-  process: processSchema.optional(),
+  process: welderProcess.optional(),
   welderId: id.optional(),
 })
 export type WelderTestListQuery = z.infer<typeof welderTestListQuerySchema>
@@ -47,7 +50,7 @@ export const continuityListQuerySchema = listQuerySchema(['weldedOn', 'welder', 
 export type ContinuityListQuery = z.infer<typeof continuityListQuerySchema>
 
 export const standingsQuerySchema = z.object({
-  process: processSchema.optional(),
+  process: welderProcess.optional(),
   standing: z.enum(['current', 'lapsing', 'lapsed']).optional(),
   q: z.string().trim().max(100, 'At most 100 characters').optional(),
   limit: z.coerce.number().int().min(1).max(2000).default(300),

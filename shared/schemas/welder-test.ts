@@ -1,7 +1,8 @@
 import { z } from 'zod'
 import { codeSchema, unitSchema } from '../rules/requests'
 import { getRuleSet } from '../rules'
-import { processSchema } from './list'
+import { processIds } from '../vocabulary/records'
+import { isoButtDetailIds, isoButtTestPositions, isoFilletTestPositions, isoFillerTypeIds, isoLayeringIds, isoPositions, isoProcessIds, isoRevalidationRouteIds, isoTestMethodIds, isoTransferProcesses, isIsoWelderCode } from '../vocabulary/iso'
 import { calendarDay } from './continuity-entry'
 
 const length = (what: string) => z.number({ invalid_type_error: `${what} must be a number` }).finite().positive(`${what} must be more than 0`).max(10_000, `${what} is too large`)
@@ -16,6 +17,9 @@ export const d13JointTypes = ['square-groove', 'flare-groove', 'fillet', 'plug',
 /** AWS D1.3 covers sheet steel of 3/16 in (4.8 mm) and less; thicker work is welded to AWS D1.1. */
 const d13ScopeMax = { in: 0.1875, mm: 4.8 } as const
 
+/** ASME/AWS process names, or ISO 4063 numbers when the code is ISO 9606-1 (checked per code below). */
+const testProcessIds = [...processIds, ...isoProcessIds] as const
+const anyTestPosition = [...testPositions, ...isoPositions] as const
 export const radiographicKinds = ['crack', 'incomplete-fusion', 'incomplete-penetration', 'slag', 'rounded'] as const
 
 export const bendSpecimenSchema = z.object({
@@ -42,13 +46,29 @@ export const macroRecordSchema = z.object({
 
 /** One process welded on the coupon with its own deposit (ASME IX QW-452.1(b): each process qualifies its own deposit). */
 export const testProcessSchema = z.object({
-  process: processSchema,
+  process: z.enum(testProcessIds, { errorMap: () => ({ message: 'Pick the process' }) }),
   transfer: z.preprocess(emptyIsNull, z.enum(['short-circuit', 'globular', 'spray', 'pulse']).nullish()).transform(v => v ?? null),
   depositThickness: optionalLength('Deposit thickness'),
   /** The F-No. of this process's filler when it differs from the coupon's (QW-433) */
   fNumber: z.string().trim().regex(/^\d{1,2}$/, 'A whole number such as 4').nullish().or(z.literal('')).transform(v => v || null),
 })
 export type TestProcess = z.infer<typeof testProcessSchema>
+
+/**
+ * What an ISO 9606-1 test records beyond the coupon (clauses 5.6, 5.9, 6, 9.3 and 10): filler type, weld details,
+ * the examiner or examining body, the methods of test, the welder's identification and the revalidation route.
+ */
+export const isoTestSchema = z.object({
+  fillerType: z.enum(isoFillerTypeIds as [string, ...string[]], { errorMap: () => ({ message: 'Pick the filler type (ISO 9606-1, 5.6)' }) }),
+  details: z.enum([...isoButtDetailIds, ...isoLayeringIds], { errorMap: () => ({ message: 'Pick the weld details (ss nb, ss mb, bs; sl or ml for a fillet)' }) }),
+  gouging: z.preprocess(emptyIsNull, z.enum(['gg', 'ng']).nullish()).transform(v => v ?? null),
+  examiner: z.string({ required_error: 'Name the examiner or examining body' }).trim().min(1, 'Name the examiner or examining body').max(120),
+  examiningBody: z.string().trim().max(120).nullish().transform(v => v || null),
+  testMethods: z.array(z.enum(isoTestMethodIds), { required_error: 'Pick the methods of test' }).min(1, 'Pick the methods of test').max(6),
+  welderIdentification: z.string().trim().max(120).nullish().transform(v => v || null),
+  route: z.enum(isoRevalidationRouteIds, { errorMap: () => ({ message: 'Pick the revalidation route of 9.3 (a, b or c)' }) }),
+})
+export type IsoTestInput = z.infer<typeof isoTestSchema>
 
 const variables = {
   welderId: z.number({ required_error: 'Pick the welder' }).int().positive('Pick the welder'),
@@ -69,7 +89,7 @@ const variables = {
   pNumber: z.string().trim().max(8).nullish().transform(v => v || null),
   fNumber: z.string().trim().regex(/^\d{1,2}$/, 'A whole number such as 4').nullish().or(z.literal('')).transform(v => v || null),
   backing: z.boolean().default(true),
-  positions: z.array(z.enum(testPositions), { required_error: 'Pick the test position' }).min(1, 'Pick the test position').max(4),
+  positions: z.array(z.enum(anyTestPosition), { required_error: 'Pick the test position' }).min(1, 'Pick the test position').max(4),
   jointType: z.preprocess(emptyIsNull, z.enum(d13JointTypes, { errorMap: () => ({ message: 'Pick the D1.3 joint type' }) }).nullish()).transform(v => v ?? null),
   progression: z.preprocess(emptyIsNull, z.enum(['uphill', 'downhill']).nullish()).transform(v => v ?? null),
   // null: not examined yet; visual examination is the gate before any mechanical test
@@ -79,9 +99,11 @@ const variables = {
   bends: z.array(bendSpecimenSchema).max(8, 'At most 8 specimens').default([]),
   radiography: radiographyRecordSchema.nullish().transform(v => v ?? null),
   macro: macroRecordSchema.nullish().transform(v => v ?? null),
+  /** ISO 9606-1 only: null for the other codes */
+  iso: z.preprocess(v => (v && typeof v === 'object' && Object.values(v).every(x => x === undefined) ? null : v), isoTestSchema.nullish()).transform(v => v ?? null),
 }
 
-type Draft = { code: z.infer<typeof codeSchema>, jointType?: string | null, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+type Draft = { code: z.infer<typeof codeSchema>, jointType?: string | null, iso?: { details?: string, gouging?: string | null } | null, fNumber?: string | null, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
 
 /** AWS D1.3: a joint type that fits the weld, sheet only, and the scope check that sends thicker work to D1.1. */
 function d13Consistent(v: Draft, issue: (path: string, message: string) => void) {
@@ -108,8 +130,15 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   if (v.unit !== undefined && !getRuleSet(v.code).units.includes(v.unit)) issue('unit', `This code prints its ranges in ${getRuleSet(v.code).units.join(' and ')}`)
   if (v.form === 'pipe' && !v.outsideDiameter) issue('outsideDiameter', 'A pipe coupon needs its outside diameter')
   d13Consistent(v, issue)
-  if (v.weld === 'groove' && v.positions?.some(p => p.endsWith('F'))) issue('positions', 'A groove test is welded in 1G to 6G')
-  if (v.weld === 'fillet' && v.positions?.some(p => p.includes('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
+  const iso = isIsoWelderCode(v.code)
+  if (iso) isoConsistent(v, ctx)
+  else {
+    if (v.iso) issue('iso', 'ISO 9606-1 details belong to an ISO 9606-1 test')
+    if (v.positions?.some(p => !(testPositions as readonly string[]).includes(p))) issue('positions', 'Positions 1G to 6G and 1F to 5F (ISO 6947 positions are for ISO 9606-1 tests)')
+    else if (v.weld === 'groove' && v.positions?.some(p => p.endsWith('F'))) issue('positions', 'A groove test is welded in 1G to 6G')
+    else if (v.weld === 'fillet' && v.positions?.some(p => p.includes('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')
+    v.processes?.forEach((p, i) => !(processIds as readonly string[]).includes(p.process) && ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'process'], message: 'ISO 4063 numbers are for ISO 9606-1 tests: pick the process by name' }))
+  }
   const results = (v.bends?.length ?? 0) > 0 || v.radiography || v.macro
   if (results && v.visualAccepted !== true) {
     issue('visualAccepted', 'Record an accepted visual examination before bend, radiographic or macro results')
@@ -122,7 +151,7 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   }
   const list = v.processes ?? []
   list.forEach((p, i) => {
-    if (p.transfer && p.process !== 'GMAW' && p.process !== 'FCAW') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'transfer'], message: 'A transfer mode is stated for GMAW and FCAW only' })
+    if (p.transfer && p.process !== 'GMAW' && p.process !== 'FCAW' && !(isoTransferProcesses as readonly string[]).includes(p.process)) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'transfer'], message: 'A transfer mode is stated for GMAW and FCAW (ISO 131, 135, 136, 138) only' })
     if (list.findIndex(q => q.process === p.process && q.transfer === p.transfer) !== i) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['processes', i, 'process'], message: 'Each process once on a coupon' })
   })
   if (list.length > 1 && list.some(p => p.depositThickness === null)) {
@@ -131,6 +160,23 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
   const total = list.reduce((sum, p) => sum + (p.depositThickness ?? 0), 0)
   if (v.couponThickness && total > v.couponThickness * (1 + 1e-9)) issue('processes', 'The deposits together cannot be thicker than the coupon')
   if (v.examination === 'radiography' && v.radiography && !v.couponThickness) issue('couponThickness', 'Radiographic acceptance needs the coupon thickness')
+}
+
+/** ISO 9606-1 tests: ISO 4063 processes, ISO 6947 positions of the weld type, the details of the weld type, FM1–FM6. */
+function isoConsistent(v: Draft, ctx: z.RefinementCtx) {
+  const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: z.ZodIssueCode.custom, path, message })
+  v.processes?.forEach((p, i) => !(isoProcessIds as readonly string[]).includes(p.process) && issue(['processes', i, 'process'], 'An ISO 9606-1 test names its process by ISO 4063 number (111, 135, 141…)'))
+  const allowed: readonly string[] = v.weld === 'fillet' ? isoFilletTestPositions : isoButtTestPositions
+  if (v.positions?.some(p => !allowed.includes(p))) issue(['positions'], `A ${v.weld === 'fillet' ? 'fillet' : 'butt'} test is welded in ${allowed.join(', ')} (ISO 6947; ISO 9606-1 Tables ${v.weld === 'fillet' ? '10' : '9'})`)
+  if (v.unit !== undefined && v.unit !== 'mm') issue(['unit'], 'ISO 9606-1 records are in millimetres')
+  if (v.fNumber && !/^[1-6]$/.test(v.fNumber)) issue(['fNumber'], 'Filler group FM1 to FM6 (ISO 9606-1, 5.5)')
+  if (!v.iso) {
+    issue(['iso'], 'An ISO 9606-1 test records its filler type, weld details, examiner, methods of test and 9.3 route')
+    return
+  }
+  const details: readonly string[] = v.weld === 'fillet' ? isoLayeringIds : isoButtDetailIds
+  if (v.iso.details && !details.includes(v.iso.details)) issue(['iso', 'details'], v.weld === 'fillet' ? 'A fillet weld is sl (single layer) or ml (multi-layer)' : 'A butt weld is ss nb, ss mb or bs')
+  if (v.iso.gouging && v.iso.details !== 'bs') issue(['iso', 'gouging'], 'Back gouging is stated for a weld from both sides (bs) only')
 }
 
 /**

@@ -17,6 +17,7 @@ const actions: Record<string, string> = {
   'bulk': 'Logged for several welders at once',
   'import': 'Imported from a CSV file',
   'import-undo': 'CSV import undone',
+  'iso-validity': 'ISO 9606-1 confirmation or production-weld record signed',
   'backup': 'Database backed up',
   'seed': 'Demo shop loaded',
   'requeue': 'Mail queued again',

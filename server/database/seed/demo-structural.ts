@@ -36,7 +36,7 @@ export async function seedStructuralDemo(db: Db, who: { supervisorId: number, in
     code: 'aws-d1.3', edition: '2018', unit: 'in', processes: [{ process: 'GMAW', transfer: 'short-circuit', depositThickness: null, fNumber: null }],
     form: 'plate', weld: 'fillet', jointType: 'fillet', couponThickness: 0.0747, layers: 1, outsideDiameter: null, pNumber: null, fNumber: null,
     backing: false, positions: ['2F'], progression: null, visualAccepted: true, visualNotes: 'two assemblies, even legs, no undercut',
-    examination: 'macro-fracture', bends: [], radiography: null, macro: { accepted: true, notes: 'macro-etch of both assemblies: fusion to the root' },
+    examination: 'macro-fracture', bends: [], radiography: null, macro: { accepted: true, notes: 'macro-etch of both assemblies: fusion to the root' }, iso: null,
   }
   const { values } = welderTestColumns(input)
   await db.insert(t.welderTests).values({ ...values, status: 'recorded', inspectorId: who.inspectorId })

@@ -10,6 +10,7 @@ import { pqrLayersOf } from '../pqr-columns'
 import { columnsOf as welderTestColumns } from '../welder-test-columns'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
+import { seedDemoIso } from './demo-iso'
 import {
   demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
@@ -101,7 +102,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         backing: w.backing, positions: [...w.positions], progression: w.positions.some(p => ['3G', '5G', '6G', '3F'].includes(p)) ? 'uphill' : null,
         visualAccepted: true, visualNotes: null, examination: w.bends.length ? 'bend' : 'macro-fracture',
         bends: w.bends.map(([type, size]) => ({ type, largestIndication: size, atCorner: false })), radiography: null,
-        macro: null, jointType: null,
+        macro: null, jointType: null, iso: null,
       }
       const { values, bends } = welderTestColumns(input)
       const [row] = await tx.insert(t.welderTests).values({
@@ -147,6 +148,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         meaning: s.meaning, sha256, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       })
     }
+    await seedDemoIso(tx as unknown as Db, { today, supervisor, inspector })
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true

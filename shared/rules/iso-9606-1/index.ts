@@ -5,6 +5,7 @@ import { arcEnergyClauses, heatInput } from '../heat-input'
 import { checkReadings } from '../readings'
 import { specimensByHand } from '../specimens-by-hand'
 import { tensileStrength } from '../tensile'
+import { bend } from './bend'
 import { covers } from './covers'
 import { welderRanges } from './welder-ranges'
 
@@ -20,6 +21,7 @@ export const iso96061: RuleSet = {
   units: ['mm'],
   welderRanges,
   covers,
+  bend,
   // 9.2: the employer confirms every six months that the welder has kept welding within the range.
   continuity: input => continuity(input, {
     clause: 'ISO 9606-1 9.2',

@@ -16,12 +16,15 @@ const butt: Record<string, string[]> = {
   'J-L045': ['PA', 'PC', 'PE', 'PG', 'PJ', 'J-L045'],
 }
 
-/** Table 10, fillet welds: PA and PB read on summary sheets; PD and PF from memory. */
+/** Table 10, fillet welds: PA and PB read on summary sheets; PD, PF, PG, PH and PJ from memory. */
 const fillet: Record<string, { positions: string[], fromMemory: boolean }> = {
   PA: { positions: ['PA'], fromMemory: false },
   PB: { positions: ['PA', 'PB'], fromMemory: false },
   PD: { positions: ['PA', 'PB', 'PC', 'PD', 'PE'], fromMemory: true },
   PF: { positions: ['PA', 'PB', 'PF'], fromMemory: true },
+  PG: { positions: ['PG'], fromMemory: true },
+  PH: { positions: ['PA', 'PB', 'PD', 'PF', 'PH'], fromMemory: true },
+  PJ: { positions: ['PA', 'PB', 'PD', 'PG', 'PJ'], fromMemory: true },
 }
 
 function ordered(set: Set<string>): string[] {
