@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { processSchema } from './list'
+import { listQuerySchema, processSchema } from './list'
 import {
   codeIdSchema, daySchema, editionSchema, optionalNumber, optionalText, pickedId, requiredNumber, requiredText, transferIdSchema,
   unitIdSchema, versionSchema,
@@ -108,3 +108,7 @@ export const beadParamsSchema = z.object({
   id: z.coerce.number().int().positive().max(2_147_483_647),
   beadId: z.coerce.number().int().positive().max(2_147_483_647),
 })
+
+/** The list of series: newest worked-on first by default. */
+export const trialListQuerySchema = listQuerySchema(['updatedAt', 'title']).extend({ dir: z.enum(['asc', 'desc']).default('desc') })
+export type TrialListQuery = z.infer<typeof trialListQuerySchema>

@@ -10,6 +10,7 @@ import { pqrLayersOf } from '../pqr-columns'
 import { columnsOf as welderTestColumns } from '../welder-test-columns'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
+import { seedDemoTrials } from './demo-trials'
 import {
   demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
@@ -144,6 +145,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         meaning: s.meaning, sha256, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       })
     }
+    await seedDemoTrials(tx as unknown as Db, { supervisor: supervisor.id, inspector: inspector.id }, { baseId: baseOf(['SA-1011', 'CS Type B']).id, fillerId: fillerOf(['SFA-5.18', 'ER70S-6']).id })
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true

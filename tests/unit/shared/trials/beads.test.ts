@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest'
-import convert from 'convert-units'
+import { createRequire } from 'node:module'
 import { beadHeatInput, beadTravelSpeed, beadVerdict } from '../../../../shared/trials/beads'
+
+// Conversions cross-checked with convert-units, not with the code under test.
+const convert = createRequire(import.meta.url)('convert-units') as (value: number) => { from: (unit: string) => { to: (unit: string) => number } }
 
 const none = { amps: null, travelSpeed: null, beadLength: null, arcTime: null, energy: null, power: null }
 const judged = { wetting: null, spatter: null, arcSound: null, porosity: false, undercut: false, meltThrough: false, lackOfFusion: false, backPenetration: null } as const

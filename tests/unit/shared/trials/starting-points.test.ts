@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest'
-import convert from 'convert-units'
+import { createRequire } from 'node:module'
 import { farOutside, firstBeadFrom, nearestStartingPoint, type StartingRow } from '../../../../shared/trials/starting-points'
+
+// Conversions cross-checked with convert-units, not with the code under test.
+const convert = createRequire(import.meta.url)('convert-units') as (value: number) => { from: (unit: string) => { to: (unit: string) => number } }
 
 // Invented rows for the test (not the demo's): only their relations matter.
 const row = (id: number, over: Partial<StartingRow>): StartingRow => ({
