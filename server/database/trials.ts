@@ -2,6 +2,7 @@ import { and, asc, count, desc, eq, ilike, inArray, max, or, sql } from 'drizzle
 import type { Db } from './client'
 import { accounts, attachments, pqrs, procedures, shopSettings, trialBeads, trialSeries, trialStartingPoints } from './schema'
 import { recordAudit } from './audit'
+import { readingsOf } from './procedures'
 import type { SessionUser } from '../utils/auth'
 import { containsPattern, orderOf, pageOf } from '../utils/list'
 import { conflict, forbidden, missing, stale, type Outcome } from '../../shared/types/outcome'
@@ -9,7 +10,7 @@ import type { StartingPoint, TrialBead, TrialListQuery, TrialSeries } from '../.
 import type { Unit } from '../../shared/rules/types'
 import { beadHeatInput, beadVerdict, type BeadHeatInput, type BeadVerdict } from '../../shared/trials/beads'
 import { farOutside, firstBeadFrom, nearestStartingPoint, type FarOutside, type StartingRow } from '../../shared/trials/starting-points'
-import { plotData, plotSvg, type PlotData } from '../../shared/trials/plot'
+import { plotData, plotSvg, type PlotData, type PlotReading } from '../../shared/trials/plot'
 import type { JudgedBead } from '../../shared/trials/proposals'
 
 // Trial runs at the machine: who may record them, the series and their beads, the shop's starting settings.
@@ -202,10 +203,10 @@ export interface SeriesPlots {
   svg: { wireFeed: string, ctwd: string }
 }
 
-export function seriesPlots(unit: Unit, beads: readonly JudgedBeadRow[]): SeriesPlots {
+export function seriesPlots(unit: Unit, beads: readonly JudgedBeadRow[], readings: readonly PlotReading[] = []): SeriesPlots {
   const points = beads.map(b => ({ number: b.number, volts: b.volts, wireFeed: b.wireFeed, ctwd: b.ctwd, verdict: b.verdict }))
-  const wireFeed = plotData(points, 'wire-feed', unit)
-  const ctwd = plotData(points, 'ctwd', unit)
+  const wireFeed = plotData(points, 'wire-feed', unit, readings)
+  const ctwd = plotData(points, 'ctwd', unit, readings)
   return { wireFeed, ctwd, svg: { wireFeed: plotSvg(wireFeed), ctwd: plotSvg(ctwd) } }
 }
 
@@ -219,11 +220,19 @@ export async function seriesDetail(db: Db, id: number) {
   const beads = await judgedBeads(db, row, nearest?.row ?? null)
   const [pqr] = row.pqrId ? await db.select({ id: pqrs.id, number: pqrs.number, status: pqrs.status }).from(pqrs).where(eq(pqrs.id, row.pqrId)) : []
   const [procedure] = row.procedureId ? await db.select({ id: procedures.id, number: procedures.number, revision: procedures.revision, status: procedures.status }).from(procedures).where(eq(procedures.id, row.procedureId)) : []
+  // Production readings on the WPS made from this series, drawn against the trials (in the WPS's unit: the series').
+  const taken = procedure ? await readingsOf(db, procedure.id, null) : []
+  const num = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null)
+  const readings: PlotReading[] = taken.map((r) => {
+    const v = (r.values ?? {}) as Record<string, unknown>
+    return { volts: num(v.volts), wireFeed: num(v.wireFeedSpeed), ctwd: num(v.ctwd) }
+  })
   const [author] = row.createdBy ? await db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, row.createdBy)) : []
   return {
     series: { id: row.id, version: row.version, createdAt: row.createdAt, updatedAt: row.updatedAt, createdBy: author?.name ?? null, ...header },
     beads: beads.map(({ values: _values, ...b }) => b),
-    plots: seriesPlots(header.unit, beads),
+    plots: seriesPlots(header.unit, beads, readings),
+    readings: readings.length,
     start: nearest ? { ...nearest, firstBead: firstBeadFrom(nearest.row, header.unit) } : null,
     pqr: pqr ?? null,
     procedure: procedure ?? null,

@@ -20,9 +20,16 @@ export interface PlotAxis {
   ticks: number[]
 }
 
+/** A production reading taken later on the WPS made from the trials, shown against the trial plot. */
+export interface PlotReading {
+  volts: number | null
+  wireFeed: number | null
+  ctwd: number | null
+}
+
 export interface PlotMark extends PlanePoint {
   label: string
-  verdict: BeadVerdict['kind']
+  verdict: BeadVerdict['kind'] | 'reading'
 }
 
 export interface PlotData {
@@ -53,6 +60,12 @@ function axis(values: number[], label: string): PlotAxis {
     lo -= pad
     hi += pad
   }
+  else {
+    // A little room so no mark sits on the frame.
+    const pad = (hi - lo) * 0.04
+    lo -= pad
+    hi += pad
+  }
   const step = niceStep(hi - lo)
   const min = Math.floor(lo / step) * step
   const max = Math.ceil(hi / step) * step
@@ -62,10 +75,12 @@ function axis(values: number[], label: string): PlotAxis {
 }
 
 /** The plot of a series in one plane: volts across, wire feed speed (or CTWD) up, each bead marked by its verdict. */
-export function plotData(beads: readonly PlotBead[], view: PlotView, unit: Unit): PlotData {
-  const yOf = (b: PlotBead) => (view === 'wire-feed' ? b.wireFeed : b.ctwd)
+export function plotData(beads: readonly PlotBead[], view: PlotView, unit: Unit, readings: readonly PlotReading[] = []): PlotData {
+  const yOf = (b: Pick<PlotBead, 'wireFeed' | 'ctwd'> | PlotReading) => (view === 'wire-feed' ? b.wireFeed : b.ctwd)
   const shown = beads.filter(b => yOf(b) !== null)
-  const marks = shown.map(b => ({ x: b.volts, y: yOf(b)!, label: String(b.number), verdict: b.verdict }))
+  const marks: PlotMark[] = shown.map(b => ({ x: b.volts, y: yOf(b)!, label: String(b.number), verdict: b.verdict }))
+  // Readings are not beads: they are drawn (a diamond, "R"), never part of the accepted region.
+  for (const r of readings) if (r.volts !== null && yOf(r) !== null) marks.push({ x: r.volts, y: yOf(r)!, label: 'R', verdict: 'reading' })
   return {
     view,
     x: axis(marks.map(m => m.x), 'Voltage, V'),
@@ -80,10 +95,11 @@ const escapeXml = (text: string) => text.replace(/&/g, '&amp;').replace(/</g, '&
 const fixed = (v: number) => Number(v.toFixed(2)).toString()
 
 /** Colours for the marks; the shape and the word in the legend carry the meaning too (never colour alone). */
-const ink = { accepted: '#2f6b3a', rejected: '#a3322a', notJudged: '#545d63', region: '#dcebf1', regionEdge: '#1f5f7a', rule: '#a9a59a', text: '#1d2327' }
+const ink = { reading: '#1f5f7a', accepted: '#2f6b3a', rejected: '#a3322a', notJudged: '#545d63', region: '#dcebf1', regionEdge: '#1f5f7a', rule: '#a9a59a', text: '#1d2327' }
 
-/** One mark: accepted a filled circle, rejected a cross, not judged an open square. */
+/** One mark: accepted a filled circle, rejected a cross, not judged an open square, a production reading a diamond. */
 function markSvg(verdict: PlotMark['verdict'], x: number, y: number): string {
+  if (verdict === 'reading') return `<path d="M${fixed(x)} ${fixed(y - 5)}L${fixed(x + 5)} ${fixed(y)}L${fixed(x)} ${fixed(y + 5)}L${fixed(x - 5)} ${fixed(y)}Z" fill="#ffffff" stroke="${ink.reading}" stroke-width="1.5"/>`
   if (verdict === 'accepted') return `<circle cx="${fixed(x)}" cy="${fixed(y)}" r="4.5" fill="${ink.accepted}" stroke="${ink.accepted}"/>`
   if (verdict === 'rejected') {
     return `<path d="M${fixed(x - 4.5)} ${fixed(y - 4.5)}L${fixed(x + 4.5)} ${fixed(y + 4.5)}M${fixed(x - 4.5)} ${fixed(y + 4.5)}L${fixed(x + 4.5)} ${fixed(y - 4.5)}" stroke="${ink.rejected}" stroke-width="2.2" fill="none"/>`
@@ -124,12 +140,18 @@ export function plotSvg(data: PlotData, size: { width: number, height: number } 
     const [a, b] = data.region as [PlanePoint, PlanePoint]
     parts.push(`<line x1="${fixed(sx(a.x))}" y1="${fixed(sy(a.y))}" x2="${fixed(sx(b.x))}" y2="${fixed(sy(b.y))}" stroke="${ink.regionEdge}" stroke-width="6" stroke-opacity="0.35"/>`)
   }
-  for (const mark of data.marks) {
-    parts.push(markSvg(mark.verdict, sx(mark.x), sy(mark.y)))
-    parts.push(`<text x="${fixed(sx(mark.x) + 6)}" y="${fixed(sy(mark.y) - 5)}" fill="${ink.text}" font-size="10">${escapeXml(mark.label)}</text>`)
+  // Beads at the same settings share one place: every mark is drawn, their numbers once, together ("1, 8, 9").
+  const places = new Map<string, PlotMark[]>()
+  for (const mark of data.marks) places.set(`${mark.x}|${mark.y}`, [...(places.get(`${mark.x}|${mark.y}`) ?? []), mark])
+  for (const group of places.values()) {
+    const { x, y } = group[0]!
+    for (const mark of group) parts.push(markSvg(mark.verdict, sx(x), sy(y)))
+    const nearRight = sx(x) > m.left + w * 0.85
+    parts.push(`<text x="${fixed(sx(x) + (nearRight ? -6 : 6))}" y="${fixed(sy(y) - 5)}" text-anchor="${nearRight ? 'end' : 'start'}" fill="${ink.text}" font-size="10">${escapeXml(group.map(g => g.label).join(', '))}</text>`)
   }
   // Legend: each shape with its word.
   const legend: [PlotMark['verdict'], string][] = [['accepted', 'accepted'], ['rejected', 'rejected'], ['not-judged', 'not judged']]
+  if (data.marks.some(mark => mark.verdict === 'reading')) legend.push(['reading', 'reading'])
   let lx = m.left
   for (const [verdict, word] of legend) {
     parts.push(markSvg(verdict, lx + 5, 16))

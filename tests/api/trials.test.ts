@@ -167,8 +167,16 @@ describe('a series and its beads', () => {
     expect(wps.body.support.violations).toEqual([])
     expect(wps.body.support.supported).toBe(true)
     // The WPS page runs the same support check
-    const page = await supervisor.json<{ support: { supported: boolean } }>(`/api/procedures/${wps.body.procedure.id}`)
+    const page = await supervisor.json<{ support: { supported: boolean }, procedure: { version: number } }>(`/api/procedures/${wps.body.procedure.id}`)
     expect(page.body.support.supported).toBe(true)
+
+    // Approved, its production readings show against the trial plot as readings, outside the accepted region's hull.
+    expect((await send(supervisor, 'POST', `/api/procedures/${wps.body.procedure.id}/approve`, { version: page.body.procedure.version })).status).toBe(200)
+    expect((await send(supervisor, 'POST', `/api/procedures/${wps.body.procedure.id}/readings`, { welderId: null, volts: 19, wireFeedSpeed: 300 })).status).toBe(201)
+    const after = (await inspector.json<Detail & { readings: number }>(`/api/trials/${id}`)).body
+    expect(after.readings).toBe(1)
+    expect(after.plots.wireFeed.marks.filter(m => m.verdict === 'reading')).toHaveLength(1)
+    expect(after.plots.wireFeed.region).toHaveLength(4)
   })
 })
 

@@ -68,6 +68,26 @@ describe('plot data', () => {
     expect(svg).toContain('accepted region')
     expect(svg).toContain('not judged')
   })
+  it('beads at the same settings are all marked and numbered once together; no mark sits on the frame', () => {
+    const data = plotData([
+      { number: 1, volts: 17, wireFeed: 220, ctwd: 0.375, verdict: 'accepted' },
+      { number: 8, volts: 17, wireFeed: 220, ctwd: 0.625, verdict: 'rejected' },
+      { number: 2, volts: 18, wireFeed: 260, ctwd: 0.375, verdict: 'accepted' },
+    ], 'wire-feed', 'in')
+    const svg = plotSvg(data)
+    expect(svg).toContain('>1, 8</text>')
+    expect(svg.match(/<circle/g)).toHaveLength(3) // two accepted beads and the legend's circle
+    expect(data.x.min).toBeLessThan(17)
+    expect(data.x.max).toBeGreaterThan(18)
+  })
+  it('production readings are drawn as diamonds and never widen the accepted region', () => {
+    const beadsOnly = plotData([{ number: 1, volts: 17, wireFeed: 220, ctwd: 0.375, verdict: 'accepted' }, { number: 2, volts: 18, wireFeed: 260, ctwd: 0.375, verdict: 'accepted' }, { number: 3, volts: 17, wireFeed: 260, ctwd: 0.375, verdict: 'accepted' }], 'wire-feed', 'in')
+    const withReading = plotData([{ number: 1, volts: 17, wireFeed: 220, ctwd: 0.375, verdict: 'accepted' }, { number: 2, volts: 18, wireFeed: 260, ctwd: 0.375, verdict: 'accepted' }, { number: 3, volts: 17, wireFeed: 260, ctwd: 0.375, verdict: 'accepted' }], 'wire-feed', 'in', [{ volts: 19, wireFeed: 300, ctwd: null }])
+    expect(withReading.region).toEqual(beadsOnly.region)
+    expect(withReading.marks.at(-1)).toMatchObject({ verdict: 'reading', label: 'R' })
+    expect(plotSvg(withReading)).toContain('>reading</text>')
+    expect(plotData([], 'ctwd', 'in', [{ volts: 19, wireFeed: 300, ctwd: null }]).marks).toEqual([])
+  })
   it('the CTWD view leaves out beads without CTWD and names them', () => {
     const data = plotData([{ number: 1, volts: 17, wireFeed: 200, ctwd: null, verdict: 'accepted' }, { number: 2, volts: 18, wireFeed: 220, ctwd: 0.5, verdict: 'rejected' }], 'ctwd', 'in')
     expect(data.leftOff).toEqual([1])
