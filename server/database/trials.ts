@@ -224,7 +224,7 @@ export async function seriesDetail(db: Db, id: number) {
   const taken = procedure ? await readingsOf(db, procedure.id, null) : []
   const num = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null)
   const readings: PlotReading[] = taken.map((r) => {
-    const v = (r.values ?? {}) as Record<string, unknown>
+    const v = ((r.values ?? {}) as { readings?: Record<string, unknown> }).readings ?? {}
     return { volts: num(v.volts), wireFeed: num(v.wireFeedSpeed), ctwd: num(v.ctwd) }
   })
   const [author] = row.createdBy ? await db.select({ name: accounts.name }).from(accounts).where(eq(accounts.id, row.createdBy)) : []
