@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import fc from 'fast-check'
 import { createRequire } from 'node:module'
 import { beadHeatInput, beadTravelSpeed, beadVerdict } from '../../../../shared/trials/beads'
 
@@ -47,6 +48,15 @@ describe('bead verdict (Rootface rule for trials)', () => {
   it('porosity or a poor scale rejects, naming why', () => {
     expect(beadVerdict({ ...judged, wetting: 'good', porosity: true })).toEqual({ kind: 'rejected', because: ['porosity'] })
     expect(beadVerdict({ ...judged, wetting: 'good', spatter: 'poor' })).toEqual({ kind: 'rejected', because: ['spatter poor'] })
+  })
+  it('a ticked discontinuity or a poor scale never leaves "accepted" (property; Rootface rule for trials)', () => {
+    const scale = fc.constantFrom('good', 'fair', 'poor', null)
+    const bead = fc.record({ wetting: scale, spatter: scale, arcSound: scale, porosity: fc.boolean(), undercut: fc.boolean(), meltThrough: fc.boolean(), lackOfFusion: fc.boolean(), backPenetration: fc.constantFrom('full', 'partial', 'none', null) })
+    const flaw = fc.constantFrom('porosity', 'undercut', 'meltThrough', 'lackOfFusion', 'wetting', 'spatter', 'arcSound')
+    fc.assert(fc.property(bead, flaw, fc.boolean(), (b, f, back) => {
+      const spoiled = { ...b, [f]: f === 'wetting' || f === 'spatter' || f === 'arcSound' ? 'poor' : true }
+      expect(beadVerdict(spoiled as Parameters<typeof beadVerdict>[0], back).kind).toBe('rejected')
+    }))
   })
   it('where full back penetration is needed, partial rejects and unrecorded is not judged', () => {
     expect(beadVerdict({ ...judged, wetting: 'good', backPenetration: 'partial' }, true).kind).toBe('rejected')
