@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signedIn, startServer, type Client, type TestServer } from './harness'
+import { samplePng, upload } from './support/files'
 
 // The trial runs at the machine through their routes: roles and the shop's welder setting, beads and their heat
 // input, the plot data, and the way from accepted beads to a draft PQR and, once it is certified, to a draft WPS
@@ -126,6 +127,21 @@ describe('a series and its beads', () => {
     expect(res.status).toBe(200)
     expect(res.headers.get('content-type')).toBe('application/pdf')
     expect(Buffer.from(await res.arrayBuffer()).subarray(0, 5).toString()).toBe('%PDF-')
+  })
+
+  it('a bead takes a photo through the file upload, with a thumbnail; those who may not use trials do not see it', async () => {
+    const bead = (await inspector.json<Detail>(`/api/trials/${id}`)).body.beads[0]!
+    const photo = await upload(inspector, { recordType: 'trial-bead', recordId: bead.id, kind: 'bead-photo' }, { name: 'bead1.png', type: 'image/png', bytes: samplePng })
+    expect(photo.status).toBe(201)
+    const files = await inspector.json<{ items: { id: number, kind: string }[] }>(`/api/attachments?recordType=trial-bead&recordId=${bead.id}`)
+    expect(files.body.items.map(f => f.kind)).toEqual(['bead-photo'])
+    expect((await inspector.fetch(`/api/attachments/${files.body.items[0]!.id}/thumbnail`)).status).toBe(200)
+    expect((await auditor.json(`/api/attachments?recordType=trial-bead&recordId=${bead.id}`)).status).toBe(404)
+    expect((await welder.json(`/api/attachments?recordType=trial-bead&recordId=${bead.id}`)).status).toBe(404)
+    const detail = (await inspector.json<Detail & { beads: { photos: { id: number }[] }[] }>(`/api/trials/${id}`)).body
+    expect(detail.beads[0]!.photos).toHaveLength(1)
+    // A bead with a photo keeps it: remove the photo first
+    expect((await send(inspector, 'DELETE', `/api/trials/${id}/beads/${bead.id}`)).status).toBe(409)
   })
 
   it('a wrong bead can be removed; an unknown one is a 404', async () => {
