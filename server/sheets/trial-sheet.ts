@@ -4,6 +4,7 @@ import { shopName } from '../database/sheet-records'
 import { documentBase, pageFooter, pageHeader } from './layout'
 import { isFailure } from '#shared/types/outcome'
 import { trialJointWords } from '#shared/vocabulary/trial-joints'
+import { wireSize } from '#shared/trials/words'
 
 // The sheet of a trial series: header, both plots (the same SVG the page shows), the bead table and the caution.
 // It is a working record, not signed: no hash or verification code.
@@ -17,7 +18,7 @@ export function trialSheetDefinition(detail: Detail, shop: string) {
   const u = s.unit
   const fields: [string, string][] = [
     ['Process', `${s.process}${s.transfer ? `, ${s.transfer}` : ''}`],
-    ['Wire', `${s.wireClass} × ${s.wireDiameter} ${u}`],
+    ['Wire', `${s.wireClass} × ${wireSize(s.wireDiameter, u)}`],
     ['Gas and flow', `${dash(s.gas)} · ${dash(s.gasFlow, u === 'in' ? 'ft³/h' : 'L/min')}`],
     ['Base metal', `${s.baseMetal}, ${s.thickness} ${u}${s.gauge ? ` (${s.gauge})` : ''}`],
     ['Joint', `${trialJointWords[s.joint]}${s.rootGap !== null ? `, gap ${s.rootGap} ${u}` : ''}`],

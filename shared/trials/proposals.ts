@@ -3,6 +3,7 @@ import type { TrialBead, TrialSeries } from '../schemas/trials'
 import type { BeadHeatInput, BeadVerdict } from './beads'
 import { beadTravelSpeed } from './beads'
 import { convexHull, hullCentre } from './hull'
+import { wireSize } from './words'
 
 /** A bead as the proposals read it: its number, values, verdict and heat input. */
 export type JudgedBead = Pick<TrialBead, 'volts' | 'wireFeed' | 'amps' | 'ctwd' | 'travelSpeed' | 'beadLength' | 'arcTime' | 'gasFlow'> & {
@@ -65,7 +66,7 @@ export function proposePqr(series: Pick<TrialSeries, 'unit' | 'wireDiameter' | '
     { field: 'heatInput', label: 'Heat input', value: heat, unit: u === 'in' ? 'J/in' : 'J/mm', source: bead.heat.kind === 'value' ? `${from}, ${bead.heat.reasons[0]?.clause ?? 'QW-409.1'}` : `cannot tell: ${bead.heat.because}` },
     { field: 'gasFlow', label: 'Gas flow', value: gasFlow, unit: u === 'in' ? 'ft³/h' : 'L/min', source: bead.gasFlow !== null ? from : 'the series header' },
     { field: 'gas', label: 'Gas', value: series.gas, unit: '', source: 'the series header' },
-    { field: 'filler', label: 'Wire', value: `${series.wireClass} × ${series.wireDiameter}`, unit: u, source: 'the series header' },
+    { field: 'filler', label: 'Wire', value: `${series.wireClass} × ${wireSize(series.wireDiameter, u)}`, unit: '', source: 'the series header' },
     { field: 'couponThickness', label: 'Coupon thickness', value: series.thickness, unit: u, source: 'the series header (the sheet the trials were run on)' },
     { field: 'position', label: 'Position', value: series.position, unit: '', source: 'the series header' },
   ]

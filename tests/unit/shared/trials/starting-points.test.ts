@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { createRequire } from 'node:module'
 import { farOutside, firstBeadFrom, nearestStartingPoint, type StartingRow } from '../../../../shared/trials/starting-points'
+import { wireSize } from '../../../../shared/trials/words'
 
 // Conversions cross-checked with convert-units, not with the code under test.
 const convert = createRequire(import.meta.url)('convert-units') as (value: number) => { from: (unit: string) => { to: (unit: string) => number } }
@@ -48,5 +49,12 @@ describe('far outside', () => {
     expect(farOutside({ volts: 19.5, wireFeed: 250, amps: null }, series, start).map(f => f.field)).toEqual(['volts'])
     expect(farOutside({ volts: 17, wireFeed: 400, amps: null }, series, start).map(f => f.field)).toEqual(['wireFeed'])
     expect(farOutside({ volts: 18.9, wireFeed: 340, amps: null }, series, start)).toEqual([])
+  })
+})
+
+describe('wire size words', () => {
+  it('an inch wire with three decimals as the trade writes it (0.030 in, common practice); a millimetre wire as given', () => {
+    expect(wireSize(0.03, 'in')).toBe('0.030 in')
+    expect(wireSize(0.8, 'mm')).toBe('0.8 mm')
   })
 })
