@@ -52,6 +52,7 @@ describe('who may record trials', () => {
     expect((await inspector.json('/api/trials')).status).toBe(200)
     expect((await auditor.json('/api/trials')).status).toBe(403)
     expect((await welder.json('/api/trials')).status).toBe(403)
+    expect((await welder.json<{ welderRecordsTrials: boolean }>('/api/trials/settings')).body).toEqual({ welderRecordsTrials: false })
     expect((await send(inspector, 'PATCH', '/api/trials/settings', { welderRecordsTrials: true })).status).toBe(403)
     expect((await send(supervisor, 'PATCH', '/api/trials/settings', { welderRecordsTrials: true })).status).toBe(200)
     expect((await welder.json('/api/trials')).status).toBe(200)

@@ -20,7 +20,7 @@ export const entries: MatrixEntries = {
   'POST /api/trials/[id]/propose-pqr': { url: at('/propose-pqr'), expect: [401, 400, 403, 403, 403] },
   'POST /api/trials/[id]/propose-wps': { url: at('/propose-wps'), expect: [401, 400, 403, 403, 403] },
   'GET /api/trials/[id]/sheet': { url: at('/sheet'), expect: [401, 200, 200, 403, 403] },
-  'GET /api/trials/settings': { expect: [401, 200, 200, 403, 403] },
+  'GET /api/trials/settings': { expect: [401, 200, 200, 200, 403] },
   'PATCH /api/trials/settings': { expect: [401, 400, 403, 403, 403] },
   'GET /api/trials/starting-points': { expect: [401, 200, 200, 403, 403] },
   'POST /api/trials/starting-points': { expect: [401, 400, 403, 403, 403] },
