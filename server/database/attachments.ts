@@ -5,6 +5,7 @@ import { accounts, attachments, baseMetals, signatures } from './schema'
 import { mayReadProcedure } from './procedures'
 import { mayReadPqr } from './pqrs'
 import { mayReadWelderTest } from './welder-tests'
+import { mayReadTrialBead } from './trials'
 import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
 import { makeThumbnail, thumbnailKey } from '../utils/attachments'
@@ -24,6 +25,8 @@ export const uploaders: Record<AttachmentRecordType, readonly Role[]> = {
   'welder-test': ['supervisor', 'inspector'],
   'procedure': ['supervisor'],
   'base-metal': ['supervisor'],
+  // A welder reaches a bead only when the shop lets welders record trials (mayReadTrialBead).
+  'trial-bead': ['supervisor', 'inspector', 'welder'],
 }
 
 /** A catalogue entry is staff's; its files go into packets only through the PQRs and WPSs that use it. */
@@ -40,12 +43,13 @@ export function mayReadRecord(db: Db, user: SessionUser, type: AttachmentRecordT
     case 'pqr': return mayReadPqr(db, user, id)
     case 'welder-test': return mayReadWelderTest(db, user, id)
     case 'base-metal': return mayReadBaseMetal(db, user, id)
+    case 'trial-bead': return mayReadTrialBead(db, user, id)
   }
 }
 
 /** The time of the record's latest signature, or null while it is unsigned (base metals are never signed). */
 async function lastSignedAt(db: Db, type: AttachmentRecordType, id: number): Promise<Date | null> {
-  if (type === 'base-metal') return null
+  if (type === 'base-metal' || type === 'trial-bead') return null
   const [row] = await db.select({ at: signatures.signedAt }).from(signatures)
     .where(and(eq(signatures.recordType, type), eq(signatures.recordId, id))).orderBy(desc(signatures.signedAt)).limit(1)
   return row?.at ?? null

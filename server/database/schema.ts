@@ -382,6 +382,8 @@ export const shopSettings = pgTable('shop_settings', {
   name: text('name').notNull(),
   // Whether welders may log their own continuity (DESIGN.md: "only if the shop allows it")
   welderLogsOwnContinuity: boolean('welder_logs_own_continuity').notNull().default(false),
+  // Whether welders may record trial runs at the machine (issue 23: supervisor and inspector always may)
+  welderRecordsTrials: boolean('welder_records_trials').notNull().default(false),
   updatedAt: updated(),
 }, t => [check('shop_settings_single_row_check', sql`${t.id} = 1`)])
 
@@ -532,3 +534,92 @@ export const isoValidityRecords = pgTable('iso_validity_records', {
   check('iso_validity_records_confirmer_check', sql`${t.confirmer} in ('coordinator', 'examiner')`),
 ])
 // ---- end iso ----
+// ---- trials ----
+// Trial runs at the machine: a series (what is welded with what) and its beads (settings tried, how each came out).
+// Lengths and speeds in the series' unit (in: in, in/min, ft³/h; mm: mm, mm/min, L/min).
+export const trialSeries = pgTable('trial_series', {
+  id: serial('id').primaryKey(),
+  title: text('title').notNull(),
+  unit: unit(),
+  process: text('process').notNull(),
+  transfer: text('transfer'),
+  wireClass: text('wire_class').notNull(),
+  wireDiameter: doublePrecision('wire_diameter').notNull(),
+  fillerMetalId: integer('filler_metal_id').references(() => fillerMetals.id),
+  gas: text('gas'),
+  gasFlow: doublePrecision('gas_flow'),
+  baseMetal: text('base_metal').notNull(),
+  baseMetalId: integer('base_metal_id').references(() => baseMetals.id),
+  thickness: doublePrecision('thickness').notNull(),
+  gauge: text('gauge'),
+  joint: text('joint').notNull(),
+  rootGap: doublePrecision('root_gap'),
+  position: text('position').notNull(),
+  progression: text('progression'),
+  notes: text('notes'),
+  // The PQR proposed from the accepted beads, and the WPS proposed once it was certified
+  pqrId: integer('pqr_id').references(() => pqrs.id),
+  procedureId: integer('procedure_id').references(() => procedures.id),
+  createdBy: integer('created_by').references(() => accounts.id),
+  version: integer('version').notNull().default(1),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  index('trial_series_updated_idx').on(t.updatedAt),
+  check('trial_series_sizes_check', sql`${t.wireDiameter} > 0 and ${t.thickness} > 0`),
+  unitCheck('trial_series_unit_check', t.unit),
+])
+
+export const trialBeads = pgTable('trial_beads', {
+  id: serial('id').primaryKey(),
+  seriesId: integer('series_id').notNull().references(() => trialSeries.id, { onDelete: 'cascade' }),
+  number: integer('number').notNull(),
+  volts: doublePrecision('volts').notNull(),
+  wireFeed: doublePrecision('wire_feed').notNull(),
+  amps: doublePrecision('amps'),
+  ctwd: doublePrecision('ctwd'),
+  travelSpeed: doublePrecision('travel_speed'),
+  beadLength: doublePrecision('bead_length'),
+  arcTime: doublePrecision('arc_time'),
+  energy: doublePrecision('energy'),
+  power: doublePrecision('power'),
+  gasFlow: doublePrecision('gas_flow'),
+  wetting: text('wetting'),
+  spatter: text('spatter'),
+  arcSound: text('arc_sound'),
+  porosity: boolean('porosity').notNull().default(false),
+  undercut: boolean('undercut').notNull().default(false),
+  meltThrough: boolean('melt_through').notNull().default(false),
+  lackOfFusion: boolean('lack_of_fusion').notNull().default(false),
+  backPenetration: text('back_penetration'),
+  notes: text('notes'),
+  recordedBy: integer('recorded_by').references(() => accounts.id),
+  createdAt: created(),
+}, t => [
+  uniqueIndex('trial_beads_series_number_key').on(t.seriesId, t.number),
+  check('trial_beads_settings_check', sql`${t.volts} > 0 and ${t.wireFeed} > 0`),
+])
+
+// The shop's table of starting settings per process, wire diameter, thickness or gauge and gas; `source` says where
+// each row comes from (common practice, a public source, the shop's own trials).
+export const trialStartingPoints = pgTable('trial_starting_points', {
+  id: serial('id').primaryKey(),
+  unit: unit(),
+  process: text('process').notNull(),
+  transfer: text('transfer'),
+  wireDiameter: doublePrecision('wire_diameter').notNull(),
+  thickness: doublePrecision('thickness').notNull(),
+  gauge: text('gauge'),
+  gas: text('gas'),
+  volts: doublePrecision('volts').notNull(),
+  wireFeed: doublePrecision('wire_feed').notNull(),
+  amps: doublePrecision('amps'),
+  ctwd: doublePrecision('ctwd'),
+  travelSpeed: doublePrecision('travel_speed'),
+  source: text('source').notNull(),
+  createdAt: created(),
+}, t => [
+  index('trial_starting_points_process_idx').on(t.process),
+  unitCheck('trial_starting_points_unit_check', t.unit),
+])
+// ---- end trials ----

@@ -6,6 +6,7 @@ export const attachmentKinds = {
   'welder-test': ['radiography-report', 'coupon-photo', 'other'],
   'procedure': ['joint-sketch', 'other'],
   'base-metal': ['mill-test-report', 'other'],
+  'trial-bead': ['bead-photo', 'other'],
 } as const
 export type AttachmentRecordType = keyof typeof attachmentKinds
 export const attachmentRecordTypes = Object.keys(attachmentKinds) as [AttachmentRecordType, ...AttachmentRecordType[]]
@@ -16,6 +17,7 @@ export const attachmentKindWords: Record<string, string> = {
   'coupon-photo': 'Coupon photo',
   'joint-sketch': 'Joint sketch',
   'mill-test-report': 'Mill test report',
+  'bead-photo': 'Bead photo',
   'other': 'Other document',
 }
 

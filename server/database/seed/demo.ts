@@ -11,6 +11,7 @@ import { columnsOf as welderTestColumns } from '../welder-test-columns'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
 import { seedDemoIso } from './demo-iso'
+import { seedDemoTrials } from './demo-trials'
 import {
   demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
@@ -149,6 +150,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
       })
     }
     await seedDemoIso(tx as unknown as Db, { today, supervisor, inspector })
+    await seedDemoTrials(tx as unknown as Db, { supervisor: supervisor.id, inspector: inspector.id }, { baseId: baseOf(['SA-1011', 'CS Type B']).id, fillerId: fillerOf(['SFA-5.18', 'ER70S-6']).id })
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true
