@@ -117,6 +117,19 @@ describe('ISO 9606-1 welder tests', () => {
     expect(sheet.caution).toMatch(/final word/)
   })
 
+  it('the demo ISO certificate (route b) is extended by its production-weld record and kept by its confirmations (9.2, 9.3 b)', async () => {
+    const list = (await supervisor.json<{ items: { id: number, code: string, welderStamp: string }[] }>('/api/tests?process=135&pageSize=50')).body.items
+    const demo = list.find(t => t.code === 'iso-9606-1' && t.welderStamp !== welderStamp)!
+    const v = (await supervisor.json<Validity & { testDate: string, records: { kind: string, on: string }[] }>(`/api/tests/${demo.id}/iso-validity`)).body
+    expect(v.route).toBe('b')
+    const end = dayjs(v.testDate).add(2, 'year')
+    const welds = v.records.filter(r => r.kind === 'production-welds' && !dayjs(r.on).isBefore(end.subtract(6, 'month')) && dayjs(r.on).isBefore(end))
+    expect(welds.length, 'a production-weld record in the last six months').toBeGreaterThan(0)
+    expect(v.validity?.expiresOn).toBe(end.add(2, 'year').format('YYYY-MM-DD'))
+    const last = v.records.filter(r => r.kind === 'confirmation').map(r => r.on).sort().at(-1)!
+    expect(v.validity?.confirmationDue).toBe(dayjs(last).add(6, 'month').format('YYYY-MM-DD'))
+  })
+
   it('an ASME test is not an ISO certificate: its iso-validity is a 404', async () => {
     const list = (await supervisor.json<{ items: { id: number, code: string }[] }>('/api/tests?pageSize=50')).body.items
     const asme = list.find(t => t.code === 'asme-ix')!
