@@ -34,7 +34,7 @@ const coupon = (extra: Record<string, unknown> = {}) => ({
   bends: [{ type: 'face', largestIndication: 0 }, { type: 'root', largestIndication: 1 }], iso: isoBlock, ...extra,
 })
 interface Test { id: number, version: number, status: string, designation: string, evaluation: { outcome: string, ranges: { thickness: unknown, positions: { groove: string[] }, fillerGroups: string[] } | null }, signatures: { verifyCode: string }[] }
-interface Validity { designation: string, route: string, validity: { lapsesOn: string, confirmationDue: string, expiresOn: string, lapsedBy: string } | null, records: { kind: string, signerName: string, sha256: string }[] }
+interface Validity { designation: string, route: string, validity: { lapsesOn: string, confirmationDue: string, expiresOn: string, lapsedBy: string } | null, records: { kind: string, on: string, signerName: string, sha256: string }[] }
 
 describe('ISO 9606-1 welder tests', () => {
   it('refuses ASME words on an ISO test and ISO words on an ASME test (400 with field messages)', async () => {
@@ -115,6 +115,19 @@ describe('ISO 9606-1 welder tests', () => {
     expect(cert.fields?.find(f => f.label === 'Revalidation')?.value).toMatch(/^9\.3 b\)/)
     expect(sheet.blocks.find(b => b.heading.startsWith('Validity'))?.table?.rows).toHaveLength(1)
     expect(sheet.caution).toMatch(/final word/)
+  })
+
+  it('the demo ISO certificate (route b) is extended by its production-weld record and kept by its confirmations (9.2, 9.3 b)', async () => {
+    const list = (await supervisor.json<{ items: { id: number, code: string, welderStamp: string }[] }>('/api/tests?process=135&pageSize=50')).body.items
+    const demo = list.find(t => t.code === 'iso-9606-1' && t.welderStamp !== welderStamp)!
+    const v = (await supervisor.json<Validity & { testDate: string }>(`/api/tests/${demo.id}/iso-validity`)).body
+    expect(v.route).toBe('b')
+    const end = dayjs(v.testDate).add(2, 'year')
+    const welds = v.records.filter(r => r.kind === 'production-welds' && !dayjs(r.on).isBefore(end.subtract(6, 'month')) && dayjs(r.on).isBefore(end))
+    expect(welds.length, 'a production-weld record in the last six months').toBeGreaterThan(0)
+    expect(v.validity?.expiresOn).toBe(end.add(2, 'year').format('YYYY-MM-DD'))
+    const last = v.records.filter(r => r.kind === 'confirmation').map(r => r.on).sort().at(-1)!
+    expect(v.validity?.confirmationDue).toBe(dayjs(last).add(6, 'month').format('YYYY-MM-DD'))
   })
 
   it('an ASME test is not an ISO certificate: its iso-validity is a 404', async () => {

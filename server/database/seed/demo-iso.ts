@@ -15,7 +15,7 @@ const iso = (d: Date) => format(d, 'yyyy-MM-dd')
 export async function seedDemoIso(tx: Db, ctx: { today: Date, supervisor: { id: number, name: string }, inspector: { id: number, name: string } }) {
   const { today, supervisor, inspector } = ctx
   await seedDemoIsoWpqr(tx, today)
-  const [welder] = await tx.insert(t.welders).values({ name: 'Ines Varga', stamp: 'IV-21', employeeNumber: 'E-2107', status: 'active' }).returning()
+  const [welder] = await tx.insert(t.welders).values({ name: 'Oda Varga', stamp: 'KB-13', employeeNumber: 'E-2107', status: 'active' }).returning()
   const tested = subMonths(today, 22)
   const input: WelderTestInput = {
     welderId: welder!.id, procedureId: null, pqrId: null, testDate: iso(tested), code: 'iso-9606-1', edition: '2017', unit: 'mm',
