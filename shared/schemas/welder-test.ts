@@ -3,6 +3,8 @@ import { codeSchema, unitSchema } from '../rules/requests'
 import { getRuleSet } from '../rules'
 import { processSchema } from './list'
 import { calendarDay } from './continuity'
+import { operatorVariablesSchema } from './operator'
+import { qualifiedAsValues } from '../vocabulary/qualified-as'
 
 const length = (what: string) => z.number({ invalid_type_error: `${what} must be a number` }).finite().positive(`${what} must be more than 0`).max(10_000, `${what} is too large`)
 // Form inputs send '' for an empty number box; it means "not given".
@@ -73,9 +75,13 @@ const variables = {
   bends: z.array(bendSpecimenSchema).max(8, 'At most 8 specimens').default([]),
   radiography: radiographyRecordSchema.nullish().transform(v => v ?? null),
   macro: macroRecordSchema.nullish().transform(v => v ?? null),
+  // A welder (manual, semi-automatic) or a welding operator (machine, automatic) with their own variables (QW-360)
+  // (optional: a record without them is a welder's test)
+  qualifiedAs: z.enum(qualifiedAsValues, { errorMap: () => ({ message: 'Welder or welding operator' }) }).optional(),
+  operator: operatorVariablesSchema.nullish(),
 }
 
-type Draft = { code: z.infer<typeof codeSchema>, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+type Draft = { qualifiedAs?: string, operator?: unknown, code: z.infer<typeof codeSchema>, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
 
 /** Cross-field rules a record must keep whatever the code. */
 function consistent(v: Draft, ctx: z.RefinementCtx) {
@@ -84,6 +90,8 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
     issue('edition', `Editions carried for this code: ${getRuleSet(v.code).editions.join(', ')}`)
   }
   if (v.unit !== undefined && !getRuleSet(v.code).units.includes(v.unit)) issue('unit', `This code prints its ranges in ${getRuleSet(v.code).units.join(' and ')}`)
+  if (v.qualifiedAs === 'welding-operator' && !v.operator) issue('operator', 'Record the welding operator\'s variables (QW-361)')
+  if (v.qualifiedAs !== 'welding-operator' && v.operator) issue('operator', 'Operator variables belong to a welding operator\'s test')
   if (v.form === 'pipe' && !v.outsideDiameter) issue('outsideDiameter', 'A pipe coupon needs its outside diameter')
   if (v.weld === 'groove' && v.positions?.some(p => p.endsWith('F'))) issue('positions', 'A groove test is welded in 1G to 6G')
   if (v.weld === 'fillet' && v.positions?.some(p => p.endsWith('G'))) issue('positions', 'A fillet test is welded in 1F to 5F')

@@ -8,6 +8,7 @@ import type { WelderTestInput } from '../../../shared/schemas/welder-test'
 import { columnsOf, draftOf, type ProcedureRow } from '../procedure-columns'
 import { pqrLayersOf } from '../pqr-columns'
 import { columnsOf as welderTestColumns } from '../welder-test-columns'
+import { seedDemoQualityA } from './demo-quality-a'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
 import {
@@ -144,6 +145,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         meaning: s.meaning, sha256, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       })
     }
+    await seedDemoQualityA(tx as unknown as Db, today, inspector)
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true
