@@ -50,7 +50,9 @@ export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: strin
   while (day <= period.to && guard++ < 10_000) {
     const standing = standingOn(tests, uses, process, day, revocations)
     if (standing && standing.standing !== 'lapsed') {
-      day = standing.lapsesOn // current until the day it lapses
+      // current until the day it lapses, or until a revocation made before then (QW-322.1(b))
+      const revoked = revocations.filter(r => r.process === process && r.revokedOn > day).map(r => r.revokedOn).sort()[0]
+      day = revoked && revoked < standing.lapsesOn ? revoked : standing.lapsesOn
       continue
     }
     // Not current from `day` until the next certified test of the process.

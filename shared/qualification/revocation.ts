@@ -22,7 +22,7 @@ export const revocationClause: Record<CodeId, { revoke: string, restore: string 
   'asme-ix': { revoke: 'ASME IX QW-322.1(b)', restore: 'ASME IX QW-322.2(b): requalify by a new test' },
   'aws-d1.1': { revoke: 'AWS D1.1 6.2.3 (specific reason to question)', restore: 'AWS D1.1 6.2.3: requalify by a new test' },
   'aws-d1.3': { revoke: 'AWS D1.3 (specific reason to question; check the edition)', restore: 'AWS D1.3: requalify by a new test' },
-  'iso-9606-1': { revoke: 'ISO 9606-1 9.3 (reason to question the welder\'s skill)', restore: 'ISO 9606-1: a new qualification test' },
+  'iso-9606-1': { revoke: 'ISO 9606-1 clause 9 (specific reason to question the welder\'s skill; check the edition)', restore: 'ISO 9606-1: a new qualification test' },
 }
 
 /**
