@@ -168,6 +168,14 @@ describe('welding operators (QW-360, QW-361)', () => {
     const verified = await supervisor.json<{ state: string }>(`/api/verify/${test.signatures[0]!.verifyCode}`)
     expect(verified.body.state).toBe('unchanged')
 
+    // The WPQ sheet prints the operator's variables and what they qualify (QW-361.2(b): remote visual control only)
+    const sheet = await supervisor.json<{ blocks: { heading: string, fields?: { label: string, value: string }[], table?: { rows: string[][] } }[] }>(`/api/sheets/tests/${testId}?format=json`)
+    expect(sheet.status).toBe(200)
+    const operatorBlock = sheet.body.blocks.find(b => b.heading.startsWith('Welding operator'))
+    expect(operatorBlock?.fields?.find(f => f.label === 'Visual control')?.value).toBe('Remote')
+    const qualified = sheet.body.blocks.find(b => b.heading === 'Qualified as a welding operator')
+    expect(qualified?.table?.rows.map(r => r[0])).toContain('QW-361.2(b)')
+
     const page = (await supervisor.json<WelderPage>(`/api/welders/${id}`)).body
     expect(page.standings.map(s => s.process)).toEqual(['SMAW (welding operator)'])
     const joint = 'process=SMAW&unit=mm&pNumber=1&thickness=6&form=plate&weld=groove&position=V&fNumber=4&backing=true&progression=uphill'
