@@ -25,8 +25,8 @@ const coupon = (welderId: number, testDate: string, extra: Record<string, unknow
   visualAccepted: true, examination: 'bend', bends: [{ type: 'face', largestIndication: 0 }, { type: 'root', largestIndication: 0 }], ...extra,
 })
 
-async function newWelder(stamp: string) {
-  const res = await send(supervisor, '/api/welders', { name: `Invented ${stamp}`, stamp })
+async function newWelder(stamp: string, email?: string) {
+  const res = await send(supervisor, '/api/welders', { name: `Invented ${stamp}`, stamp, ...(email ? { email } : {}) })
   expect(res.status).toBe(201)
   return res.body.id as number
 }
@@ -141,6 +141,22 @@ describe('revocation and requalification (QW-322.1(b), QW-322.2(b))', () => {
     expect(after.renewal).toBeNull()
     expect((await welder.json<Revocations>(`/api/welders/${ownId}/revocations`)).status).toBe(200)
     expect((await welder.json<Revocations>(`/api/welders/${id}/revocations`)).status).toBe(404)
+  })
+})
+
+describe('reminders after a revocation', () => {
+  it('a revoked process gets no lapse reminder; the same qualification unrevoked does', async () => {
+    // Tested six months less 20 days ago: lapses in 20 days (QW-322.1(a)), inside the 30-day reminder step
+    const testDate = dayjs(today).subtract(6, 'month').add(20, 'day').format('YYYY-MM-DD')
+    const revoked = await newWelder('QA-M1', 'qa-m1@invented.test')
+    const kept = await newWelder('QA-M2', 'qa-m2@invented.test')
+    await certifiedTest(coupon(revoked, testDate))
+    await certifiedTest(coupon(kept, testDate))
+    expect((await send(inspector, `/api/welders/${revoked}/revocations`, { process: 'SMAW', reason: 'Undercut beyond limits on four fillets' })).status).toBe(201)
+    expect((await send(supervisor, '/api/mail/run-reminders', {})).status).toBe(200)
+    const to = async (address: string) => (await supervisor.json<{ items: { to: string }[] }>(`/api/mail?q=${encodeURIComponent(address)}&pageSize=50`)).body.items.filter(m => m.to === address)
+    expect(await to('qa-m2@invented.test')).toHaveLength(1)
+    expect(await to('qa-m1@invented.test')).toHaveLength(0)
   })
 })
 
