@@ -36,7 +36,8 @@ export function standingOn(tests: CertifiedTest[], uses: Use[], process: string,
 
 // 'no-test': not yet qualified on those days (the first certified test came later); 'never-held': no certified test of
 // the process at all up to the end of the period, which the summary lists once, not as a lapse.
-export interface Gap { process: string, from: string, to: string, why: 'lapsed' | 'no-test' | 'never-held' }
+// 'revoked': a revocation held (QW-322.1(b)); `reason` is the inspector's.
+export interface Gap { process: string, from: string, to: string, why: 'lapsed' | 'revoked' | 'no-test' | 'never-held', reason?: string }
 
 /**
  * The spans of a period on which a welder was not current for a process. processStanding is the rule; this only
@@ -58,7 +59,9 @@ export function gapsInPeriod(tests: CertifiedTest[], uses: Use[], process: strin
     // Not current from `day` until the next certified test of the process.
     const next = tests.filter(t => holds(t, process) && t.testDate > day).map(t => t.testDate).sort()[0]
     const until = next && next <= period.to ? format(addDays(parseISO(next), -1), 'yyyy-MM-dd') : period.to
-    gaps.push({ process, from: day, to: until, why: standing ? 'lapsed' : 'no-test' })
+    gaps.push(standing?.revoked
+      ? { process, from: day, to: until, why: 'revoked', reason: standing.revoked.reason }
+      : { process, from: day, to: until, why: standing ? 'lapsed' : 'no-test' })
     if (!next) break
     day = next
   }

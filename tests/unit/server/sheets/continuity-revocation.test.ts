@@ -17,12 +17,12 @@ describe('gapsInPeriod with a revocation', () => {
 
   it('a revocation opens a gap from its day; uses after it do not close it', () => {
     expect(gapsInPeriod([test(1, '2025-12-15')], uses, 'SMAW', period, [revocation]))
-      .toEqual([{ process: 'SMAW', from: '2026-06-10', to: '2026-12-31', why: 'lapsed' }])
+      .toEqual([{ process: 'SMAW', from: '2026-06-10', to: '2026-12-31', why: 'revoked', reason: 'Slag lines in two joints' }])
   })
 
   it('a new certified test after the revocation closes the gap the day before it (QW-322.2(b))', () => {
     const gaps = gapsInPeriod([test(1, '2025-12-15'), test(2, '2026-07-20')], uses, 'SMAW', period, [revocation])
-    expect(gaps).toEqual([{ process: 'SMAW', from: '2026-06-10', to: dayBefore('2026-07-20'), why: 'lapsed' }])
+    expect(gaps).toEqual([{ process: 'SMAW', from: '2026-06-10', to: dayBefore('2026-07-20'), why: 'revoked', reason: 'Slag lines in two joints' }])
   })
 
   it('a welding operator\'s test never holds a welder\'s process', () => {
