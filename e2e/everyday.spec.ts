@@ -153,7 +153,8 @@ test('picking the WPS on a new welder test fills the code, edition, unit, proces
   const wps = (await (await page.request.get(`/api/procedures/${id}`)).json()) as { procedure: { code: string, edition: string, unit: string }, draft: { baseMetals: { a: { pNumber: string } }, layers: { process: string }[] } }
   await page.goto('/tests/new')
   await expect(page.getByRole('button', { name: 'Save test' })).toBeEnabled()
-  await page.getByRole('combobox', { name: 'WPS followed', exact: true }).selectOption({ value: String(id) })
+  await page.getByRole('combobox', { name: 'WPS followed', exact: true }).fill('KB-W05')
+  await page.getByRole('option', { name: /^KB-W05 rev\./ }).first().click()
   await expect(page.getByRole('combobox', { name: 'Code', exact: true })).toHaveValue(wps.procedure.code)
   await expect(page.getByRole('combobox', { name: 'Edition', exact: true })).toHaveValue(wps.procedure.edition)
   await expect(page.getByRole('combobox', { name: 'Unit of this record', exact: true })).toHaveValue(wps.procedure.unit)
@@ -190,6 +191,8 @@ test('the sheet gauge picker clears when the thickness is typed by hand', async 
   await expect(page).toHaveURL(/\/dashboard$/)
   await page.goto('/procedures/new')
   await expect(page.getByRole('button', { name: 'Save draft' })).toBeEnabled()
+  await page.getByRole('combobox', { name: 'Add a supporting PQR' }).fill('PQR-K')
+  await page.getByRole('option').first().click()
   await page.getByRole('button', { name: /^Fill from PQR-/ }).first().click()
   const gauge = page.getByLabel('Sheet gauge, thickest')
   await gauge.selectOption('10')

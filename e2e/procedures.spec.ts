@@ -7,6 +7,8 @@ test('the supervisor drafts a short-circuit GMAW sheet WPS from PQR-K101, fixes 
   await page.goto('/procedures')
   await page.getByRole('link', { name: 'New procedure' }).click()
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('New procedure (WPS)')
+  await page.getByRole('combobox', { name: 'Add a supporting PQR' }).fill('PQR-K101')
+  await page.getByRole('option', { name: /^PQR-K101 / }).click()
   await expect(page.getByRole('button', { name: 'Fill from PQR-K101' })).toBeVisible()
 
   await page.getByLabel('WPS number').fill('KB-W07')

@@ -73,7 +73,7 @@ export async function myQualifications(db: Db, welderId: number, today: string) 
     ...own, today, logsOwnContinuity: await welderLogsOwnContinuity(db),
     // Fewest days left first: a lapsed process at the top, then the one that lapses next.
     standings: [...standings].sort((a, b) => a.daysLeft - b.daysLeft || a.process.localeCompare(b.process))
-      .map(s => ({ ...s, renewal: s.standing === 'lapsed' ? renewalOf[s.code] : null })),
+      .map(s => ({ ...s, renewal: s.standing === 'lapsed' && !s.revoked ? renewalOf[s.code] : null })),
   }
 }
 

@@ -216,6 +216,10 @@ export const welderTests = pgTable('welder_tests', {
   jointType: text('joint_type'),
   // ISO 9606-1 only: filler type, weld details, examiner, methods of test, identification, 9.3 route (shared/schemas/welder-test.ts)
   iso: jsonb('iso'),
+  // Who the test qualifies: a welder (manual, semi-automatic) or a welding operator (machine, automatic; ASME IX QW-360).
+  qualifiedAs: text('qualified_as').notNull().default('welder'),
+  // A welding operator's essential variables as tested (shared/schemas/operator.ts); null for a welder.
+  operator: jsonb('operator'),
   status: text('status').notNull().default('recorded'),
   inspectorId: integer('inspector_id').references(() => accounts.id),
   certifiedAt: timestamp('certified_at', { withTimezone: true }),
@@ -226,6 +230,7 @@ export const welderTests = pgTable('welder_tests', {
   index('welder_tests_welder_idx').on(t.welderId, t.process),
   index('welder_tests_status_idx').on(t.status, t.testDate),
   check('welder_tests_status_check', sql`${t.status} in ('recorded', 'certified', 'failed')`),
+  check('welder_tests_qualified_as_check', sql`${t.qualifiedAs} in ('welder', 'welding-operator')`),
   check('welder_tests_deposits_check', sql`jsonb_typeof(${t.deposits}) = 'array'`),
   check('welder_tests_form_check', sql`${t.form} in ('plate', 'pipe')`),
   check('welder_tests_weld_check', sql`${t.weld} in ('groove', 'fillet')`),
@@ -479,6 +484,10 @@ export const processStandings = pgTable('process_standings', {
   lastUse: date('last_use', { mode: 'string' }).notNull(),
   lapsesOn: date('lapses_on', { mode: 'string' }).notNull(),
   rule: text('rule').notNull(),
+  // Set while a revocation holds (qualification_revocations): lapses_on is then the revocation day.
+  revokedOn: date('revoked_on', { mode: 'string' }),
+  revokedReason: text('revoked_reason'),
+  revokedBy: text('revoked_by'),
 }, t => [
   primaryKey({ columns: [t.welderId, t.process] }),
   index('process_standings_lapses_idx').on(t.lapsesOn),
@@ -623,3 +632,21 @@ export const trialStartingPoints = pgTable('trial_starting_points', {
   unitCheck('trial_starting_points_unit_check', t.unit),
 ])
 // ---- end trials ----
+// ---- quality-a ----
+// A welder × process qualification revoked for a specific reason (ASME IX QW-322.1(b)). Its own record: the certified
+// tests stay as signed; a trigger marks the welder × process in standing_refresh, and a new certified test dated on
+// or after the revocation day restores it (QW-322.2(b), shared/qualification/revocation.ts).
+export const qualificationRevocations = pgTable('qualification_revocations', {
+  id: serial('id').primaryKey(),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  process: text('process').notNull(),
+  revokedOn: date('revoked_on', { mode: 'string' }).notNull(),
+  reason: text('reason').notNull(),
+  revokedBy: integer('revoked_by').notNull().references(() => accounts.id),
+  basisTestId: integer('basis_test_id').references(() => welderTests.id),
+  createdAt: created(),
+}, t => [
+  index('qualification_revocations_welder_idx').on(t.welderId, t.process),
+  check('qualification_revocations_reason_check', sql`length(trim(${t.reason})) > 0`),
+])
+// ---- end quality-a ----

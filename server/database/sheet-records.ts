@@ -2,7 +2,7 @@ import { and, asc, desc, eq, inArray, lte, or } from 'drizzle-orm'
 import type { Db } from './client'
 import {
   accounts, attachments, baseMetals, continuityEntries, customers, fillerMetals, isoValidityRecords, issuedSheets, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs,
-  procedures, projectProcedures, projects, projectWelders, shopSettings, signatures, welders, welderTestBends, welderTests,
+  procedures, projectProcedures, projects, projectWelders, qualificationRevocations, shopSettings, signatures, welders, welderTestBends, welderTests,
 } from './schema'
 import { contentFormatOf, contentHash, newVerifyCode, type SignedRecordType } from './signing'
 import { pqrLayersOf, supportPqrs } from './pqrs'
@@ -113,11 +113,11 @@ export async function pqrIdsOf(db: Db, procedureIds: number[]) {
 }
 
 /** A certified test as continuity reads it; `processes` lists every process of a combination coupon (each counts). */
-export interface CertifiedTest { id: number, process: string, processes?: string[] | null, code: string, edition: string, testDate: string, procedure: string | null }
+export interface CertifiedTest { id: number, process: string, processes?: string[] | null, qualifiedAs?: string, code: string, edition: string, testDate: string, procedure: string | null }
 
 export async function loadCertifiedTests(db: Db, welderId: number, upTo: string): Promise<CertifiedTest[]> {
   const rows = await db.select({
-    id: welderTests.id, process: welderTests.process, processes: welderTests.processes, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate,
+    id: welderTests.id, process: welderTests.process, processes: welderTests.processes, qualifiedAs: welderTests.qualifiedAs, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate,
     number: procedures.number, revision: procedures.revision,
   }).from(welderTests).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
     .where(and(eq(welderTests.welderId, welderId), eq(welderTests.status, 'certified'), lte(welderTests.testDate, upTo)))
@@ -133,6 +133,15 @@ export async function loadUses(db: Db, welderId: number, upTo: string) {
   }).from(continuityEntries).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))
     .where(and(eq(continuityEntries.welderId, welderId), lte(continuityEntries.weldedOn, upTo)))
     .orderBy(asc(continuityEntries.weldedOn), asc(continuityEntries.id))
+}
+
+/** A welder's revocations made up to the end of a period (QW-322.1(b)), with the name of who revoked each. */
+export async function loadRevocations(db: Db, welderId: number, upTo: string) {
+  return db.select({
+    id: qualificationRevocations.id, process: qualificationRevocations.process, revokedOn: qualificationRevocations.revokedOn,
+    reason: qualificationRevocations.reason, revokedBy: accounts.name, basisTestId: qualificationRevocations.basisTestId,
+  }).from(qualificationRevocations).innerJoin(accounts, eq(accounts.id, qualificationRevocations.revokedBy))
+    .where(and(eq(qualificationRevocations.welderId, welderId), lte(qualificationRevocations.revokedOn, upTo)))
 }
 
 export async function welderOf(db: Db, welderId: number) {

@@ -86,7 +86,10 @@ export async function signedContent(db: Db, type: SignedRecordType, id: number, 
   const [row] = await db.select().from(welderTests).where(eq(welderTests.id, id))
   if (!row) return null
   const bends = await db.select().from(welderTestBends).where(eq(welderTestBends.testId, id)).orderBy(asc(welderTestBends.id))
-  return { ...pick(row, keys), bends: bends.map(s => omit(s, ['id', 'testId'])) }
+  // A welding operator's test also signs who it qualifies and the operator's variables; a welder's test signs what it
+  // always did, so signatures made before these columns keep verifying.
+  const operator = row.qualifiedAs === 'welding-operator' ? { qualifiedAs: row.qualifiedAs, operator: row.operator } : {}
+  return { ...pick(row, keys), ...operator, bends: bends.map(s => omit(s, ['id', 'testId'])) }
 }
 
 /** The hash of a record's content in a given format (the current one for a new signature). */

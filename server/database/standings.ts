@@ -1,6 +1,6 @@
 import { and, asc, between, desc, eq, ilike, inArray, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
-import { continuityEntries, isoValidityRecords, procedures, processStandings, standingRefresh, welders, welderTests } from './schema'
+import { accounts, continuityEntries, isoValidityRecords, procedures, processStandings, qualificationRevocations, standingRefresh, welders, welderTests } from './schema'
 import { allOf, containsPattern } from '../utils/list'
 import { lapseWeeks } from '../../shared/qualification/lapse-weeks'
 import { renewalOf } from '../../shared/qualification/renewal'
@@ -9,6 +9,8 @@ import { continuityChain, standingOn, type Chain, type ProcessStanding } from '.
 import type { CodeId } from '../../shared/rules/types'
 import { isoChain, sameFamily } from '../../shared/qualification/iso-standing'
 import type { IsoRoute, IsoValidityRecord } from '../../shared/rules/iso-9606-1/validity'
+import { revocationClause, revocationInForce, revokedChain, type Revocation } from '../../shared/qualification/revocation'
+import { isOperatorKey, processOfKey, standingKey } from '../../shared/vocabulary/qualified-as'
 
 const chunked = <T>(list: T[], size: number) => Array.from({ length: Math.ceil(list.length / size) }, (_, i) => list.slice(i * size, (i + 1) * size))
 
@@ -33,26 +35,39 @@ export async function refreshStandings(db: Db) {
   }
 }
 
-async function recompute(tx: Db, part: { welderId: number, process: string }[]) {
-  const ids = [...new Set(part.map(d => d.welderId))]
+async function recompute(tx: Db, marked: { welderId: number, process: string }[]) {
+  const ids = [...new Set(marked.map(d => d.welderId))]
   // One after the other: PGlite cannot run two statements of one transaction at once.
-  const certified = await tx.select({ id: welderTests.id, welderId: welderTests.welderId, process: welderTests.process, processes: welderTests.processes, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate, iso: welderTests.iso })
+  const certified = await tx.select({ id: welderTests.id, welderId: welderTests.welderId, process: welderTests.process, processes: welderTests.processes, qualifiedAs: welderTests.qualifiedAs, code: welderTests.code, edition: welderTests.edition, testDate: welderTests.testDate, iso: welderTests.iso })
     .from(welderTests).where(and(inArray(welderTests.welderId, ids), eq(welderTests.status, 'certified')))
     .orderBy(desc(welderTests.testDate), desc(welderTests.id))
   // A combination coupon counts for each of its processes (ASME IX QW-452.1(b)); older tests list none and count for their one.
+  // A welding operator's test is kept under its own key (standingKey), apart from the same person's manual qualification.
   // A test counts only for processes of its own code family (ISO 4063 numbers for ISO 9606-1, names otherwise).
-  const tests = certified.flatMap(({ processes, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process })))
-    .filter(t => sameFamily(t.code, t.process))
+  const tests = certified.flatMap(({ processes, qualifiedAs, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process: standingKey(process, qualifiedAs) })))
+    .filter(t => sameFamily(t.code, processOfKey(t.process)))
   const isoIds = [...new Set(tests.filter(t => t.code === 'iso-9606-1').map(t => t.id))]
   const isoRecords = isoIds.length
     ? await tx.select({ testId: isoValidityRecords.testId, kind: isoValidityRecords.kind, on: isoValidityRecords.on }).from(isoValidityRecords).where(inArray(isoValidityRecords.testId, isoIds))
     : []
   const recordsOf = (testId: number) => isoRecords.filter(r => r.testId === testId).map(r => ({ kind: r.kind, on: r.on }) as IsoValidityRecord)
+  const key = (welderId: number, process: string) => `${welderId}|${process}`
+  // A marked process also marks its welding-operator key when the welder holds one (continuity is logged per process).
+  const held = new Set([...tests, ...marked].map(t => key(t.welderId, t.process)))
+  const part = [...new Map(marked.flatMap(d => [d, { welderId: d.welderId, process: standingKey(d.process, 'welding-operator') }])
+    .filter(d => !isOperatorKey(d.process) || held.has(key(d.welderId, d.process)))
+    .map(d => [key(d.welderId, d.process), d])).values()]
   const uses = await tx.select({ welderId: continuityEntries.welderId, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn })
     .from(continuityEntries).where(inArray(continuityEntries.welderId, ids))
-  const key = (welderId: number, process: string) => `${welderId}|${process}`
+  const revocations = await tx.select({ id: qualificationRevocations.id, welderId: qualificationRevocations.welderId, process: qualificationRevocations.process, revokedOn: qualificationRevocations.revokedOn, reason: qualificationRevocations.reason, revokedBy: accounts.name, basisTestId: qualificationRevocations.basisTestId })
+    .from(qualificationRevocations).innerJoin(accounts, eq(accounts.id, qualificationRevocations.revokedBy))
+    .where(inArray(qualificationRevocations.welderId, ids))
   const newest = new Map<string, typeof tests[number]>()
-  for (const t of tests) if (!newest.has(key(t.welderId, t.process))) newest.set(key(t.welderId, t.process), t)
+  const testsOf = new Map<string, typeof tests>()
+  for (const t of tests) {
+    if (!newest.has(key(t.welderId, t.process))) newest.set(key(t.welderId, t.process), t)
+    testsOf.set(key(t.welderId, t.process), [...testsOf.get(key(t.welderId, t.process)) ?? [], t])
+  }
   const usesOf = new Map<string, string[]>()
   for (const u of uses) {
     const k = key(u.welderId, u.process)
@@ -60,14 +75,22 @@ async function recompute(tx: Db, part: { welderId: number, process: string }[]) 
     if (list) list.push(u.weldedOn)
     else usesOf.set(k, [u.weldedOn])
   }
+  const revocationsOf = new Map<string, Revocation[]>()
+  for (const r of revocations) revocationsOf.set(key(r.welderId, r.process), [...revocationsOf.get(key(r.welderId, r.process)) ?? [], r])
   const rows = part.flatMap((d) => {
-    const test = newest.get(key(d.welderId, d.process))
+    const k = key(d.welderId, d.process)
+    const test = newest.get(k)
     if (!test) return []
+    // A revocation in force cuts the chain on its day (QW-322.1(b)); a later certified test lifts it (QW-322.2(b)).
+    const revocation = revocationInForce(revocationsOf.get(k) ?? [], testsOf.get(k) ?? [])
+    const logged = usesOf.get(key(d.welderId, processOfKey(d.process))) ?? []
+    // An ISO 9606-1 certificate is kept by its 9.2 confirmations and ended by its 9.3 route, not by continuity entries.
     const route = (test.iso as { route?: IsoRoute } | null)?.route
-    const chain = test.code === 'iso-9606-1' && route
+    const kept = test.code === 'iso-9606-1' && route
       ? isoChain({ ...test, code: 'iso-9606-1', route }, recordsOf(test.id))
-      : continuityChain({ ...test, code: test.code as CodeId, uses: usesOf.get(key(d.welderId, d.process)) ?? [] })
-    return [{ welderId: d.welderId, process: chain.process, code: chain.code, edition: chain.edition, testDate: chain.testDate, lastUse: chain.lastUse, lapsesOn: chain.lapsesOn, rule: chain.rule }]
+      : continuityChain({ ...test, code: test.code as CodeId, uses: revocation ? logged.filter(u => u < revocation.revokedOn) : logged })
+    const chain = revocation ? revokedChain(kept, revocation) : kept
+    return [{ welderId: d.welderId, process: chain.process, code: chain.code, edition: chain.edition, testDate: chain.testDate, lastUse: chain.lastUse, lapsesOn: chain.lapsesOn, rule: chain.rule, revokedOn: chain.revoked?.on ?? null, revokedReason: chain.revoked?.reason ?? null, revokedBy: chain.revoked?.by ?? null }]
   })
   // A process left with no certified test (rare) loses its row; the rest are upserted.
   for (const d of part.filter(d => !newest.has(key(d.welderId, d.process)))) {
@@ -76,12 +99,17 @@ async function recompute(tx: Db, part: { welderId: number, process: string }[]) 
   for (const batch of chunked(rows, 250)) {
     await tx.insert(processStandings).values(batch).onConflictDoUpdate({
       target: [processStandings.welderId, processStandings.process],
-      set: { code: sql`excluded.code`, edition: sql`excluded.edition`, testDate: sql`excluded.test_date`, lastUse: sql`excluded.last_use`, lapsesOn: sql`excluded.lapses_on`, rule: sql`excluded.rule` },
+      set: { code: sql`excluded.code`, edition: sql`excluded.edition`, testDate: sql`excluded.test_date`, lastUse: sql`excluded.last_use`, lapsesOn: sql`excluded.lapses_on`, rule: sql`excluded.rule`, revokedOn: sql`excluded.revoked_on`, revokedReason: sql`excluded.revoked_reason`, revokedBy: sql`excluded.revoked_by` },
     })
   }
 }
 
-const chainOf = (row: typeof processStandings.$inferSelect): Chain => ({ ...row, code: row.code as CodeId })
+/** A kept row as a chain; a revoked row carries who revoked it, when and why. */
+export function chainOf(row: typeof processStandings.$inferSelect): Chain {
+  const { revokedOn, revokedReason, revokedBy, ...chain } = row
+  const code = row.code as CodeId
+  return { ...chain, code, revoked: revokedOn ? { on: revokedOn, reason: revokedReason ?? '', by: revokedBy ?? '', clause: revocationClause[code]?.revoke ?? 'QW-322.1(b)' } : null }
+}
 
 /** Per welder, per process: where each stands on `today`. */
 export async function standingsOf(db: Db, welderIds: number[], today: string): Promise<Map<number, ProcessStanding[]>> {
@@ -130,7 +158,7 @@ async function activeRosterStandings(db: Db, today: string, q?: string) {
 /** The continuity board: each active welder × process, soonest lapse first (the first `limit`, with the total). */
 export async function standingsBoard(db: Db, query: StandingsQuery, today: string) {
   const rows = (await activeRosterStandings(db, today, query.q))
-    .map(r => ({ ...r, renewal: r.standing === 'lapsed' ? renewalOf[r.code] : null }))
+    .map(r => ({ ...r, renewal: r.standing === 'lapsed' && !r.revoked ? renewalOf[r.code] : null }))
     .filter(r => (!query.process || r.process === query.process) && (!query.standing || r.standing === query.standing))
   return { today, rows: rows.slice(0, query.limit), total: rows.length }
 }
@@ -155,7 +183,7 @@ export async function dashboard(db: Db, today: string) {
   const upcoming = rows.filter(r => r.daysLeft > 0 && r.daysLeft <= 90)
   return {
     today,
-    lapsed: lapsed.slice(0, listLimit).map(r => ({ ...r, renewal: renewalOf[r.code] })),
+    lapsed: lapsed.slice(0, listLimit).map(r => ({ ...r, renewal: r.revoked ? null : renewalOf[r.code] })),
     lapsedCount: lapsed.length,
     upcoming: upcoming.slice(0, listLimit),
     upcomingCounts: { 30: upcoming.filter(r => r.daysLeft <= 30).length, 60: upcoming.filter(r => r.daysLeft <= 60).length, 90: upcoming.length },

@@ -94,6 +94,7 @@ export function columnsOf(input: WelderTestInput) {
   return {
     values: {
       ...variables, ...combined, processes: [...new Set(processes.map(p => p.process))], deposits,
+      qualifiedAs: variables.qualifiedAs ?? 'welder', operator: variables.qualifiedAs === 'welding-operator' ? variables.operator ?? null : null,
       radiography: examRecordOf(input), ranges: outcome.ranges ?? (outcome.rangesError ? { error: outcome.rangesError } : null),
     },
     bends: bends.map((b, i) => ({ ...b, accepted: verdicts[i]?.accepted ?? false })),

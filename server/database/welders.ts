@@ -66,6 +66,7 @@ export async function welderHistory(db: Db, id: number) {
       id: welderTests.id, testDate: welderTests.testDate, process: welderTests.process, transfer: welderTests.transfer, form: welderTests.form,
       weld: welderTests.weld, positions: welderTests.positions, status: welderTests.status, unit: welderTests.unit,
       couponThickness: welderTests.couponThickness, outsideDiameter: welderTests.outsideDiameter, code: welderTests.code,
+      qualifiedAs: welderTests.qualifiedAs,
     }).from(welderTests).where(eq(welderTests.welderId, id)).orderBy(desc(welderTests.testDate), desc(welderTests.id)),
     db.select({ id: continuityEntries.id, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn, reference: continuityEntries.reference, recordedBy: accounts.name })
       .from(continuityEntries).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))

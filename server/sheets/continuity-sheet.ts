@@ -36,7 +36,7 @@ export function continuitySheet(log: ContinuityLog, shop: string, issue: Issue):
           s.standing?.lastUse ?? '—',
           s.standing?.lapsesOn ?? '—',
           s.standing ? standingWords[s.standing.standing] : 'no certified test',
-          s.gaps.length ? s.gaps.map(g => `${g.from} to ${g.to}${g.why === 'no-test' ? ' (no test yet)' : g.why === 'never-held' ? ' (never tested in this process)' : ''}`).join('; ') : 'none',
+          s.gaps.length ? s.gaps.map(g => `${g.from} to ${g.to}${g.why === 'no-test' ? ' (no test yet)' : g.why === 'never-held' ? ' (never tested in this process)' : g.why === 'revoked' ? ` (revoked: ${g.reason ?? ''})` : ''}`).join('; ') : 'none',
         ]),
         widths: [48, 60, 60, 70, '*'],
       },

@@ -127,7 +127,7 @@ function gapContent(plan: PacketPlan, all: WelderGap[]) {
   const rows = gaps.map(g => [
     { text: `${g.welder} (${g.stamp})`, style: 'cell' }, { text: g.process, style: 'cell' },
     { text: g.from, style: 'cell' }, { text: g.to, style: 'cell' },
-    { text: g.why === 'no-test' ? 'no certified test of this process on record yet' : 'qualification lapsed (no use within six months, or not renewed)', style: 'cell' },
+    { text: g.why === 'no-test' ? 'no certified test of this process on record yet' : g.why === 'revoked' ? `qualification revoked (QW-322.1(b)): ${g.reason ?? ''}` : 'qualification lapsed (no use within six months, or not renewed)', style: 'cell' },
   ])
   return [
     { text: 'SUMMARY', style: 'kind', margin: [0, 0, 0, 2] },

@@ -1,7 +1,7 @@
 import type { Db } from '../database/client'
 import { shopName, type PacketPlan } from '../database/sheet-records'
 import type { SessionUser } from '../utils/auth'
-import { gapsInPeriod, loadCertifiedTests, loadUses, type Gap } from './continuity-log'
+import { gapsInPeriod, loadCertifiedTests, loadRevocations, loadUses, type Gap } from './continuity-log'
 import type { SheetModel } from './model'
 import type { PacketDocumentInput, PacketEntry } from './packet-document'
 import { renderPacket } from './packet-render'
@@ -20,9 +20,9 @@ export interface WelderGap extends Gap { welder: string, stamp: string }
 export async function gapsOfProject(db: Db, plan: PacketPlan): Promise<WelderGap[]> {
   const found: WelderGap[] = []
   for (const w of plan.welders) {
-    const [tests, uses] = await Promise.all([loadCertifiedTests(db, w.id, plan.period.to), loadUses(db, w.id, plan.period.to)])
+    const [tests, uses, revocations] = await Promise.all([loadCertifiedTests(db, w.id, plan.period.to), loadUses(db, w.id, plan.period.to), loadRevocations(db, w.id, plan.period.to)])
     for (const process of plan.processes) {
-      for (const gap of gapsInPeriod(tests, uses, process, plan.period)) found.push({ ...gap, welder: w.name, stamp: w.stamp })
+      for (const gap of gapsInPeriod(tests, uses, process, plan.period, revocations)) found.push({ ...gap, welder: w.name, stamp: w.stamp })
     }
   }
   return found

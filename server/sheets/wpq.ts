@@ -3,6 +3,7 @@ import { qualifiedRangesOf } from '#shared/qualification/test-ranges'
 import type { Reason, Unit, WelderRangesResult } from '#shared/rules'
 import type { SheetBlock, SheetField, SheetModel } from './model'
 import type { WelderTestRecord } from '../database/sheet-records'
+import { operatorBlocks } from './operator-block'
 import { caution, certification, codeLine, reasonsBlock, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, yesNo } from './format'
 import { isoCertificateBlocks } from './iso-certificate'
@@ -38,6 +39,7 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
         { label: 'Code', value: codeLine(t.code, t.edition) },
       ],
     },
+    ...operatorBlocks(t),
     {
       heading: 'Test coupon as welded', clause: asme ? 'QW-350' : undefined,
       fields: [

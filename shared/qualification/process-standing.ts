@@ -2,6 +2,7 @@ import { differenceInCalendarDays } from 'date-fns'
 import { parseDay } from '../rules/continuity-lapse'
 import { getRuleSet } from '../rules'
 import type { CodeId } from '../rules/types'
+import type { Revoked } from './revocation'
 
 export type Standing = 'current' | 'lapsing' | 'lapsed'
 
@@ -15,6 +16,8 @@ export interface ProcessStanding {
   daysLeft: number
   standing: Standing
   rule: string
+  /** Set while a revocation holds (QW-322.1(b)): the standing is then 'lapsed' from the revocation day. */
+  revoked?: Revoked | null
 }
 
 export const lapsingSoonDays = 30
@@ -35,6 +38,7 @@ export interface Chain {
   lastUse: string
   lapsesOn: string
   rule: string
+  revoked?: Revoked | null
 }
 
 /**

@@ -4,6 +4,8 @@ import { getRuleSet } from '../rules'
 import { processIds } from '../vocabulary/records'
 import { isoButtDetailIds, isoButtTestPositions, isoFilletTestPositions, isoFillerTypeIds, isoLayeringIds, isoPositions, isoProcessIds, isoRevalidationRouteIds, isoTestMethodIds, isoTransferProcesses, isIsoWelderCode } from '../vocabulary/iso'
 import { calendarDay } from './continuity-entry'
+import { operatorVariablesSchema } from './operator'
+import { qualifiedAsValues } from '../vocabulary/qualified-as'
 
 const length = (what: string) => z.number({ invalid_type_error: `${what} must be a number` }).finite().positive(`${what} must be more than 0`).max(10_000, `${what} is too large`)
 // Form inputs send '' for an empty number box; it means "not given".
@@ -101,9 +103,13 @@ const variables = {
   macro: macroRecordSchema.nullish().transform(v => v ?? null),
   /** ISO 9606-1 only: null for the other codes */
   iso: z.preprocess(v => (v && typeof v === 'object' && Object.values(v).every(x => x === undefined) ? null : v), isoTestSchema.nullish()).transform(v => v ?? null),
+  // A welder (manual, semi-automatic) or a welding operator (machine, automatic) with their own variables (QW-360)
+  // (optional: a record without them is a welder's test)
+  qualifiedAs: z.enum(qualifiedAsValues, { errorMap: () => ({ message: 'Welder or welding operator' }) }).optional(),
+  operator: operatorVariablesSchema.nullish(),
 }
 
-type Draft = { code: z.infer<typeof codeSchema>, jointType?: string | null, iso?: { details?: string, gouging?: string | null } | null, fNumber?: string | null, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
+type Draft = { qualifiedAs?: string, operator?: unknown, code: z.infer<typeof codeSchema>, jointType?: string | null, iso?: { details?: string, gouging?: string | null } | null, fNumber?: string | null, edition?: string, unit?: 'in' | 'mm', processes?: { process: string, transfer: string | null, depositThickness: number | null }[], form?: string, outsideDiameter?: number | null, couponThickness?: number | null, weld?: string, positions?: string[], visualAccepted?: boolean | null, bends?: unknown[], radiography?: unknown, macro?: unknown, examination?: string }
 
 /** AWS D1.3: a joint type that fits the weld, sheet only, and the scope check that sends thicker work to D1.1. */
 function d13Consistent(v: Draft, issue: (path: string, message: string) => void) {
@@ -128,6 +134,8 @@ function consistent(v: Draft, ctx: z.RefinementCtx) {
     issue('edition', `Editions carried for this code: ${getRuleSet(v.code).editions.join(', ')}`)
   }
   if (v.unit !== undefined && !getRuleSet(v.code).units.includes(v.unit)) issue('unit', `This code prints its ranges in ${getRuleSet(v.code).units.join(' and ')}`)
+  if (v.qualifiedAs === 'welding-operator' && !v.operator) issue('operator', 'Record the welding operator\'s variables (QW-361)')
+  if (v.qualifiedAs !== 'welding-operator' && v.operator) issue('operator', 'Operator variables belong to a welding operator\'s test')
   if (v.form === 'pipe' && !v.outsideDiameter) issue('outsideDiameter', 'A pipe coupon needs its outside diameter')
   d13Consistent(v, issue)
   const iso = isIsoWelderCode(v.code)

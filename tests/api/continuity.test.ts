@@ -93,12 +93,15 @@ describe('continuity', () => {
   })
 
   it('standings show last use, lapse date, days left, and for a lapsed process how to renew it', async () => {
-    const res = await inspector.json<{ rows: { standing: string, daysLeft: number, lapsesOn: string, renewal: { clause: string } | null }[] }>('/api/continuity/standings')
+    const res = await inspector.json<{ rows: { standing: string, daysLeft: number, lapsesOn: string, renewal: { clause: string } | null, revoked?: unknown }[] }>('/api/continuity/standings')
     expect(res.status).toBe(200)
     const lapsed = res.body.rows.filter(r => r.standing === 'lapsed')
     expect(lapsed.length).toBeGreaterThan(0)
-    expect(lapsed.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
-    expect(lapsed.every(r => r.daysLeft <= 0 && r.renewal?.clause === 'ASME IX QW-322.2(a)')).toBe(true)
+    // A lapse is renewed by one coupon (QW-322.2(a)); a revoked process is not (QW-322.2(b): a new test), so it offers none
+    const lapsedOnly = lapsed.filter(r => !r.revoked)
+    expect(lapsedOnly.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
+    expect(lapsedOnly.every(r => r.daysLeft <= 0 && r.renewal?.clause === 'ASME IX QW-322.2(a)')).toBe(true)
+    expect(lapsed.filter(r => r.revoked).every(r => r.daysLeft <= 0 && r.renewal === null)).toBe(true)
     expect(res.body.rows.filter(r => r.standing !== 'lapsed').length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
     expect(res.body.rows.filter(r => r.standing !== 'lapsed').every(r => r.renewal === null)).toBe(true)
     const filtered = await inspector.json<{ rows: { standing: string }[] }>('/api/continuity/standings?standing=lapsed')

@@ -8,6 +8,7 @@ import type { WelderTestInput } from '../../../shared/schemas/welder-test'
 import { columnsOf, draftOf, type ProcedureRow } from '../procedure-columns'
 import { pqrLayersOf } from '../pqr-columns'
 import { columnsOf as welderTestColumns } from '../welder-test-columns'
+import { seedDemoQualityA } from './demo-quality-a'
 import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
 import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
 import { seedDemoIso } from './demo-iso'
@@ -151,6 +152,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
     }
     await seedDemoIso(tx as unknown as Db, { today, supervisor, inspector })
     await seedDemoTrials(tx as unknown as Db, { supervisor: supervisor.id, inspector: inspector.id }, { baseId: baseOf(['SA-1011', 'CS Type B']).id, fillerId: fillerOf(['SFA-5.18', 'ER70S-6']).id })
+    await seedDemoQualityA(tx as unknown as Db, today, inspector)
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true
