@@ -6,6 +6,8 @@ export const attachmentKinds = {
   'welder-test': ['radiography-report', 'coupon-photo', 'other'],
   'procedure': ['joint-sketch', 'other'],
   'base-metal': ['mill-test-report', 'other'],
+  'equipment': ['calibration-certificate', 'other'],
+  'welder': ['photo'],
 } as const
 export type AttachmentRecordType = keyof typeof attachmentKinds
 export const attachmentRecordTypes = Object.keys(attachmentKinds) as [AttachmentRecordType, ...AttachmentRecordType[]]
@@ -16,6 +18,8 @@ export const attachmentKindWords: Record<string, string> = {
   'coupon-photo': 'Coupon photo',
   'joint-sketch': 'Joint sketch',
   'mill-test-report': 'Mill test report',
+  'calibration-certificate': 'Calibration certificate',
+  'photo': 'Photo for the ID card',
   'other': 'Other document',
 }
 

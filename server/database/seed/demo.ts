@@ -14,6 +14,7 @@ import {
   demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
 } from './demo-data'
+import { seedQualityB } from './demo-quality-b'
 
 const day = (today: Date, daysAgo: number) => format(subDays(today, daysAgo), 'yyyy-MM-dd')
 
@@ -144,6 +145,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         meaning: s.meaning, sha256, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
       })
     }
+    await seedQualityB(tx as unknown as Db, today)
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true

@@ -1,0 +1,34 @@
+CREATE TABLE "equipment" (
+	"id" serial PRIMARY KEY NOT NULL,
+	"kind" text NOT NULL,
+	"tag" text NOT NULL,
+	"description" text,
+	"serial_number" text,
+	"state" text DEFAULT 'in-service' NOT NULL,
+	"calibrated_on" date,
+	"interval_months" integer,
+	"notes" text,
+	"version" integer DEFAULT 1 NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	"updated_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "equipment_kind_check" CHECK ("equipment"."kind" in ('welding-machine', 'ammeter', 'voltmeter', 'wire-feed-speed-meter', 'gas-flow-meter', 'temperature-indicator')),
+	CONSTRAINT "equipment_state_check" CHECK ("equipment"."state" in ('in-service', 'out-of-service')),
+	CONSTRAINT "equipment_interval_check" CHECK ("equipment"."interval_months" is null or "equipment"."interval_months" between 1 and 120)
+);
+--> statement-breakpoint
+CREATE TABLE "reading_equipment" (
+	"reading_id" integer NOT NULL,
+	"equipment_id" integer NOT NULL,
+	"calibration_state" text NOT NULL,
+	"due_on" date,
+	CONSTRAINT "reading_equipment_reading_id_equipment_id_pk" PRIMARY KEY("reading_id","equipment_id")
+);
+--> statement-breakpoint
+ALTER TABLE "readings" ADD COLUMN "calibration_flag" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+ALTER TABLE "welders" ADD COLUMN "card_token" text;--> statement-breakpoint
+ALTER TABLE "welders" ADD COLUMN "card_public" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+ALTER TABLE "reading_equipment" ADD CONSTRAINT "reading_equipment_reading_id_readings_id_fk" FOREIGN KEY ("reading_id") REFERENCES "public"."readings"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "reading_equipment" ADD CONSTRAINT "reading_equipment_equipment_id_equipment_id_fk" FOREIGN KEY ("equipment_id") REFERENCES "public"."equipment"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
+CREATE UNIQUE INDEX "equipment_tag_key" ON "equipment" USING btree ("tag");--> statement-breakpoint
+CREATE INDEX "reading_equipment_equipment_idx" ON "reading_equipment" USING btree ("equipment_id");--> statement-breakpoint
+CREATE UNIQUE INDEX "welders_card_token_key" ON "welders" USING btree ("card_token");
