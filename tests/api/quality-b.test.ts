@@ -1,0 +1,187 @@
+import dayjs from 'dayjs'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs'
+import { Client, signedIn, startServer, type TestServer } from './harness'
+import { pdfPages, squeeze } from './pdf-text'
+import { samplePdf, upload } from './support/files'
+
+let server: TestServer
+let supervisor: Client
+let inspector: Client
+let welder: Client
+let auditor: Client
+
+beforeAll(async () => {
+  server = await startServer()
+  supervisor = await signedIn(server.url, 'supervisor')
+  inspector = await signedIn(server.url, 'inspector')
+  welder = await signedIn(server.url, 'welder')
+  auditor = await signedIn(server.url, 'auditor')
+})
+afterAll(async () => server?.stop())
+
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers of many shapes, read field by field
+type Body = Record<string, any> & { data?: { fieldErrors: Record<string, string[]> } }
+const send = (client: Client, method: string, path: string, body?: unknown) =>
+  client.json<Body>(path, { method, ...(body === undefined ? {} : { body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }) })
+const today = dayjs().format('YYYY-MM-DD')
+
+async function approvedProcedure() {
+  const list = await supervisor.json<{ items: { id: number, number: string, revision: number, status: string }[] }>('/api/procedures?q=KB-W01&pageSize=50')
+  const row = list.body.items.find(p => p.number === 'KB-W01' && p.status === 'approved')
+  if (!row) throw new Error('no approved KB-W01')
+  return row.id
+}
+
+describe('equipment register and calibration', () => {
+  let overdue: number
+  let fresh: number
+
+  it('staff register a meter; the due date is the calibration date plus the interval (dayjs cross-check)', async () => {
+    const calibratedOn = dayjs().subtract(13, 'month').format('YYYY-MM-DD')
+    const created = await send(inspector, 'POST', '/api/equipment', { kind: 'ammeter', tag: 'T-AM-1', calibratedOn, intervalMonths: 12, description: 'test clamp meter' })
+    expect(created.status).toBe(201)
+    overdue = created.body.id
+    const page = await send(supervisor, 'GET', `/api/equipment/${overdue}`)
+    expect(page.status).toBe(200)
+    // due = calibration + 12 months, 13 months ago: one month past due (common practice, shop's interval)
+    expect(page.body.calibration).toMatchObject({ state: 'out-of-calibration', dueOn: dayjs(calibratedOn).add(12, 'month').format('YYYY-MM-DD') })
+    const other = await send(supervisor, 'POST', '/api/equipment', { kind: 'voltmeter', tag: 'T-VM-1', calibratedOn: today, intervalMonths: 6 })
+    expect(other.status).toBe(201)
+    fresh = other.body.id
+    expect((await send(welder, 'GET', `/api/equipment/${fresh}`)).body.calibration.state).toBe('in-calibration')
+  })
+
+  it('bad input is 400 per field; a second tag 400; a stale version 409; an unknown id 404', async () => {
+    const bad = await send(supervisor, 'POST', '/api/equipment', { kind: 'hammer', tag: '', intervalMonths: 0, calibratedOn: '2026-02-30' })
+    expect(bad.status).toBe(400)
+    expect(Object.keys(bad.body.data!.fieldErrors).sort()).toEqual(['calibratedOn', 'intervalMonths', 'kind', 'tag'])
+    const dup = await send(supervisor, 'POST', '/api/equipment', { kind: 'voltmeter', tag: 'T-AM-1' })
+    expect(dup.status).toBe(400)
+    expect(dup.body.data!.fieldErrors.tag).toBeDefined()
+    const stale = await send(supervisor, 'PATCH', `/api/equipment/${fresh}`, { kind: 'voltmeter', tag: 'T-VM-1', version: 9 })
+    expect(stale.status).toBe(409)
+    expect((await send(supervisor, 'GET', '/api/equipment/999999')).status).toBe(404)
+    expect((await send(supervisor, 'PATCH', '/api/equipment/999999', { kind: 'voltmeter', tag: 'X', version: 1 })).status).toBe(404)
+  })
+
+  it('a new calibration date brings the meter back in calibration', async () => {
+    const before = await send(supervisor, 'GET', `/api/equipment/${overdue}`)
+    const saved = await send(supervisor, 'PATCH', `/api/equipment/${overdue}`, { kind: 'ammeter', tag: 'T-AM-1', calibratedOn: today, intervalMonths: 12, version: before.body.version })
+    expect(saved.status).toBe(200)
+    expect((await send(supervisor, 'GET', `/api/equipment/${overdue}`)).body.calibration.state).toBe('in-calibration')
+    // and back to the old date for the next tests
+    const again = await send(supervisor, 'PATCH', `/api/equipment/${overdue}`, { kind: 'ammeter', tag: 'T-AM-1', calibratedOn: before.body.calibratedOn, intervalMonths: 12, version: saved.body.version })
+    expect(again.status).toBe(200)
+  })
+
+  it('a reading taken with a meter out of calibration that day is flagged; the same meter on a day inside its interval is not', async () => {
+    const wps = await approvedProcedure()
+    const flagged = await send(inspector, 'POST', `/api/procedures/${wps}/readings`, { volts: 18, amps: 120, equipmentIds: [overdue, fresh] })
+    expect(flagged.status).toBe(201)
+    expect(flagged.body.calibrationFlag).toBe(true)
+    expect(flagged.body.equipment.map((e: { equipmentId: number, flagged: boolean }) => [e.equipmentId, e.flagged])).toEqual([[overdue, true], [fresh, false]])
+    const inside = dayjs().subtract(12, 'month').format('YYYY-MM-DD')
+    const earlier = await send(inspector, 'POST', `/api/procedures/${wps}/readings`, { volts: 18, amps: 120, takenAt: `${inside}T10:00:00Z`, equipmentIds: [overdue] })
+    expect(earlier.status).toBe(201)
+    expect(earlier.body.calibrationFlag).toBe(false)
+    const plain = await send(inspector, 'POST', `/api/procedures/${wps}/readings`, { volts: 18, amps: 120 })
+    expect(plain.body.calibrationFlag).toBe(false)
+    const unknown = await send(inspector, 'POST', `/api/procedures/${wps}/readings`, { volts: 18, equipmentIds: [999999] })
+    expect(unknown.status).toBe(400)
+    expect(unknown.body.data!.fieldErrors.equipmentIds).toBeDefined()
+    const list = await send(supervisor, 'GET', `/api/procedures/${wps}/readings`)
+    const row = list.body.items.find((r: { id: number }) => r.id === flagged.body.id)
+    expect(row.calibrationFlag).toBe(true)
+    expect(row.equipment.map((e: { tag: string }) => e.tag).sort()).toEqual(['T-AM-1', 'T-VM-1'])
+    expect((await send(supervisor, 'GET', `/api/equipment/${overdue}`)).body.readings.length).toBe(2)
+  })
+
+  it('the due list names the overdue meter and not the fresh one; the weekly digest names it too', async () => {
+    const due = await send(inspector, 'GET', '/api/equipment/due')
+    const ids = due.body.map((d: { id: number }) => d.id)
+    expect(ids).toContain(overdue)
+    expect(ids).not.toContain(fresh)
+    const run = await send(supervisor, 'POST', '/api/mail/run-reminders', {})
+    expect(run.status).toBe(200)
+    const mail = await send(supervisor, 'GET', '/api/mail?kind=weekly-digest&pageSize=5')
+    expect(mail.body.items.length).toBeGreaterThan(0)
+    expect(mail.body.items[0].text).toContain('T-AM-1')
+    expect(mail.body.items[0].text).not.toContain('T-VM-1')
+  })
+
+  it('a calibration certificate attaches to the entry; an auditor cannot see it', async () => {
+    const up = await upload(supervisor, { recordType: 'equipment', recordId: overdue, kind: 'calibration-certificate' }, { name: 'cert.pdf', type: 'application/pdf', bytes: samplePdf })
+    expect(up.status).toBe(201)
+    expect((await supervisor.fetch(`/api/attachments/${up.body.id}`)).status).toBe(200)
+    expect((await auditor.fetch(`/api/attachments/${up.body.id}`)).status).toBe(404)
+    const byWelder = await upload(welder, { recordType: 'equipment', recordId: overdue, kind: 'calibration-certificate' }, { name: 'cert.pdf', type: 'application/pdf', bytes: samplePdf })
+    expect(byWelder.status).toBe(403)
+  })
+})
+
+/** The first active welder current in at least one process today (read from the roster, not from the demo data). */
+async function currentWelder() {
+  const roster = await send(supervisor, 'GET', '/api/welders?pageSize=200&status=active')
+  const found = roster.body.items.find((w: { standings: { standing: string }[] }) => w.standings.some(s => s.standing !== 'lapsed'))
+  if (!found) throw new Error('no welder current in any process')
+  return found.id as number
+}
+
+describe('welder ID card', () => {
+  it('prints two credit-card pages (85.6 × 54 mm) with the stamp, each current process and the caution', async () => {
+    const id = await currentWelder()
+    const card = await send(supervisor, 'GET', `/api/welders/${id}/card?format=json`)
+    expect(card.status).toBe(200)
+    const page = await send(supervisor, 'GET', `/api/welders/${id}`)
+    const current = page.body.standings.filter((s: { standing: string }) => s.standing !== 'lapsed').map((s: { process: string }) => s.process).sort()
+    expect(current.length, 'a card with no process proves little').toBeGreaterThan(0)
+    expect(card.body.lines.map((l: { process: string }) => l.process).sort()).toEqual(current)
+    const res = await supervisor.fetch(`/api/welders/${id}/card`)
+    expect(res.status).toBe(200)
+    expect(res.headers.get('content-type')).toBe('application/pdf')
+    const bytes = new Uint8Array(await res.arrayBuffer())
+    const doc = await getDocument({ data: bytes.slice(), disableFontFace: true, verbosity: 0 }).promise
+    expect(doc.numPages).toBe(2)
+    const view = (await doc.getPage(1)).getViewport({ scale: 1 })
+    // ISO/IEC 7810 ID-1: 85.6 × 54 mm = 242.65 × 153.07 pt (1 in = 25.4 mm = 72 pt)
+    expect(view.width).toBeCloseTo((85.6 / 25.4) * 72, 1)
+    expect(view.height).toBeCloseTo((54 / 25.4) * 72, 1)
+    await doc.destroy()
+    const [front, back] = await pdfPages(bytes)
+    expect(squeeze(front!)).toContain(squeeze(page.body.welder.stamp))
+    for (const p of current) expect(back).toContain(p)
+    expect(squeeze(back!)).toContain(squeeze('the inspector have the final word'))
+  })
+
+  it('the public page answers only while on, under its token; a renewal revokes the old token', async () => {
+    const on = await send(supervisor, 'POST', '/api/welders/1/card-page', { action: 'on' })
+    expect(on.status).toBe(200)
+    expect(on.body.token).toMatch(/^[\w-]{32}$/)
+    const anyone = new Client(server.url)
+    const seen = await anyone.json<Body>(`/api/cards/${on.body.token}`)
+    expect(seen.status).toBe(200)
+    // name, stamp, processes, positions, thickness, lapse dates: nothing else
+    expect(Object.keys(seen.body).sort()).toEqual(['asOf', 'name', 'qualifications', 'stamp'])
+    for (const q of seen.body.qualifications) expect(Object.keys(q).sort()).toEqual(['lapsesOn', 'positions', 'process', 'thickness'])
+    const pdf = await pdfPages(new Uint8Array(await (await supervisor.fetch('/api/welders/1/card')).arrayBuffer()))
+    expect(pdf[1]).toContain('Scan')
+    const renewed = await send(supervisor, 'POST', '/api/welders/1/card-page', { action: 'renew' })
+    expect(renewed.body.token).not.toBe(on.body.token)
+    expect((await anyone.fetch(`/api/cards/${on.body.token}`)).status).toBe(404)
+    expect((await anyone.fetch(`/api/cards/${renewed.body.token}`)).status).toBe(200)
+    const off = await send(supervisor, 'POST', '/api/welders/1/card-page', { action: 'off' })
+    expect(off.body).toEqual({ public: false, token: null })
+    expect((await anyone.fetch(`/api/cards/${renewed.body.token}`)).status).toBe(404)
+    expect((await send(supervisor, 'POST', '/api/welders/1/card-page', { action: 'maybe' })).status).toBe(400)
+    expect((await send(supervisor, 'POST', '/api/welders/999999/card-page', { action: 'on' })).status).toBe(404)
+  })
+
+  it('a welder downloads their own card; the welder page does not hand out the token', async () => {
+    const me = await send(welder, 'GET', '/api/me/qualifications')
+    expect((await welder.fetch(`/api/welders/${me.body.welder.id}/card`)).status).toBe(200)
+    const page = await send(auditor, 'GET', '/api/welders/1')
+    if (page.status === 200) expect(page.body.welder.cardToken).toBeUndefined()
+    expect((await send(supervisor, 'GET', '/api/welders/1')).body.welder.cardToken).toBeUndefined()
+  })
+})
