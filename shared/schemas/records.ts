@@ -10,8 +10,8 @@ export const importKinds = ['roster', 'continuity'] as const
 export type ImportKind = typeof importKinds[number]
 export const importKindParamSchema = z.object({ kind: z.enum(importKinds, { errorMap: () => ({ message: 'Unknown kind of import' }) }) })
 
-/** 1.5 MB of CSV, or an XLSX file of up to 1.5 MB as base64. */
-export const maxImportChars = 2_100_000
+/** CSV text, or an XLSX file as base64, under the request size limit (2 MB). */
+export const maxImportChars = 1_900_000
 
 /**
  * A file to bring in: CSV text, or an XLSX file as base64; `mapping` names, per Rootface field, the column of the file
@@ -19,9 +19,43 @@ export const maxImportChars = 2_100_000
  */
 export const recordsImportSchema = z.object({
   format: z.enum(['csv', 'xlsx'], { errorMap: () => ({ message: 'Choose csv or xlsx' }) }),
-  content: z.string({ required_error: 'Choose a file' }).min(1, 'The file is empty').max(maxImportChars, 'The file is larger than 1.5 MB; split it')
+  content: z.string({ required_error: 'Choose a file' }).min(1, 'The file is empty').max(maxImportChars, 'The file is too large (CSV at most 1.8 MB, XLSX at most 1.4 MB); split it')
     .refine(v => !hasLoneSurrogate(v), brokenCharacterMessage('The file')),
   mapping: z.record(z.string().max(64), z.string().max(200)).optional(),
   commit: z.boolean().default(false),
 }).strict()
 export type RecordsImport = z.infer<typeof recordsImportSchema>
+
+/** A wrong line of an imported file: `field` for programs, `column` (as headed in the file) and `value` (as typed) for people. */
+export interface ImportRowError { line: number, field: string, message: string, column?: string, value?: string }
+
+/** One field Rootface reads from an imported sheet: its label on the mapping screen and the headers it is guessed from. */
+export interface ImportField { key: string, label: string, required: boolean, headers: string[] }
+
+export const importFields: Record<ImportKind, ImportField[]> = {
+  roster: [
+    { key: 'stamp', label: 'Stamp', required: true, headers: ['stamp', 'welder stamp', 'id stamp', 'symbol', 'welder id'] },
+    { key: 'name', label: 'Name', required: true, headers: ['name', 'welder', 'welder name', 'full name'] },
+    { key: 'employeeNumber', label: 'Employee no.', required: false, headers: ['employee number', 'employee no', 'employee no.', 'badge', 'payroll number'] },
+    { key: 'email', label: 'E-mail', required: false, headers: ['email', 'e-mail', 'mail'] },
+    { key: 'status', label: 'Status (active or inactive)', required: false, headers: ['status', 'state'] },
+  ],
+  continuity: [
+    { key: 'stamp', label: 'Welder stamp', required: true, headers: ['stamp', 'welder stamp', 'welder'] },
+    { key: 'process', label: 'Process', required: true, headers: ['process'] },
+    { key: 'weldedOn', label: 'Date welded', required: true, headers: ['date', 'welded on', 'weldedon', 'welded'] },
+    { key: 'reference', label: 'Job or weld reference', required: true, headers: ['reference', 'job', 'ref'] },
+  ],
+}
+
+const squash = (h: string) => h.trim().toLowerCase().replace(/[_\s]+/g, ' ')
+
+/** The column of the file guessed for each field from its header (case, spaces and underscores ignored). */
+export function guessMapping(kind: ImportKind, headers: readonly string[]): Record<string, string> {
+  const mapping: Record<string, string> = {}
+  for (const field of importFields[kind]) {
+    const found = headers.find(h => field.headers.includes(squash(h)) || squash(h) === field.key.toLowerCase())
+    if (found) mapping[field.key] = found
+  }
+  return mapping
+}

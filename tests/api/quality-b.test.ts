@@ -1,5 +1,6 @@
 import dayjs from 'dayjs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import ExcelJS from 'exceljs'
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs'
 import { Client, signedIn, startServer, type TestServer } from './harness'
 import { pdfPages, squeeze } from './pdf-text'
@@ -183,5 +184,62 @@ describe('welder ID card', () => {
     const page = await send(auditor, 'GET', '/api/welders/1')
     if (page.status === 200) expect(page.body.welder.cardToken).toBeUndefined()
     expect((await send(supervisor, 'GET', '/api/welders/1')).body.welder.cardToken).toBeUndefined()
+  })
+})
+
+describe('bringing records in', () => {
+  const rosterCsv = (rows: string[]) => ['Stamp,Name,Employee no,E-mail', ...rows].join('\r\n')
+  // 500 invented welders; line n of the file is welder n - 1
+  const invented = Array.from({ length: 500 }, (_, i) => `IM-${String(i + 1).padStart(3, '0')},Imported Welder ${i + 1},E-${9000 + i},im${i + 1}@example.test`)
+
+  it('a roster of 500 with two bad lines: the dry run names them, the commit stores nothing; fixed, all 500 go in', async () => {
+    const bad = [...invented]
+    bad[41] = 'IM-042,,E-9041,im42@example.test' // no name: line 43
+    bad[299] = 'IM-300,Imported Welder 300,E-9299,not-an-address' // line 301
+    const dry = await send(supervisor, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(bad) })
+    expect(dry.status).toBe(200)
+    expect(dry.body.mapping).toEqual({ stamp: 'Stamp', name: 'Name', employeeNumber: 'Employee no', email: 'E-mail' })
+    expect(dry.body.total).toBe(498)
+    expect(dry.body.errors.map((e: { line: number, field: string }) => [e.line, e.field])).toEqual([[43, 'name'], [301, 'email']])
+    expect(dry.body.stored).toBe(0)
+    const before = (await send(supervisor, 'GET', '/api/welders?pageSize=1')).body.total
+    const refused = await send(supervisor, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(bad), commit: true })
+    expect(refused.status).toBe(400)
+    expect(refused.body.data.rowErrors).toHaveLength(2)
+    expect((await send(supervisor, 'GET', '/api/welders?pageSize=1')).body.total).toBe(before)
+    const done = await send(supervisor, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(invented), commit: true })
+    expect(done.status).toBe(200)
+    expect(done.body.stored).toBe(500)
+    expect((await send(supervisor, 'GET', '/api/welders?pageSize=1')).body.total).toBe(before + 500)
+    // the same file again: every stamp is on the roster now
+    const again = await send(supervisor, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(invented.slice(0, 3)) })
+    expect(again.body.errors.map((e: { message: string }) => e.message)).toEqual(['Stamp IM-001 is already on the roster', 'Stamp IM-002 is already on the roster', 'Stamp IM-003 is already on the roster'])
+  }, 120_000)
+
+  it('an XLSX with the shop\'s own headers, mapped by hand; a mapping to a missing column is a line-1 error', async () => {
+    const book = new ExcelJS.Workbook()
+    const sheet = book.addWorksheet('Uses')
+    sheet.addRow(['Welder symbol', 'Proc.', 'Day', 'Job'])
+    sheet.addRow(['IM-001', 'SMAW', new Date(Date.UTC(2026, 0, 5)), 'J-1'])
+    sheet.addRow(['IM-002', 'GTAW', '2026-01-06', 'J-2'])
+    sheet.addRow(['ZZ-999', 'GTAW', '2026-01-06', 'J-3'])
+    const content = Buffer.from(await book.xlsx.writeBuffer()).toString('base64')
+    const mapping = { stamp: 'Welder symbol', process: 'Proc.', weldedOn: 'Day', reference: 'Job' }
+    const dry = await send(inspector, 'POST', '/api/import/continuity', { format: 'xlsx', content, mapping })
+    expect(dry.status).toBe(200)
+    expect(dry.body.headers).toEqual(['Welder symbol', 'Proc.', 'Day', 'Job'])
+    expect(dry.body.preview.map((r: { weldedOn: string }) => r.weldedOn)).toEqual(['2026-01-05', '2026-01-06'])
+    expect(dry.body.errors).toEqual([{ line: 4, field: 'stamp', message: 'No welder with stamp ZZ-999 on the roster', column: 'Welder symbol', value: 'ZZ-999' }])
+    const wrong = await send(inspector, 'POST', '/api/import/continuity', { format: 'xlsx', content, mapping: { ...mapping, reference: 'Nope' } })
+    expect(wrong.body.errors[0]).toMatchObject({ line: 1, field: 'mapping' })
+    const unread = await send(inspector, 'POST', '/api/import/continuity', { format: 'xlsx', content: Buffer.from('not a workbook').toString('base64') })
+    expect(unread.status).toBe(400)
+  })
+
+  it('only the quality manager imports a roster; a welder imports nothing; an unknown kind is 400', async () => {
+    expect((await send(inspector, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(['X-1,X']) })).status).toBe(403)
+    expect((await send(welder, 'POST', '/api/import/continuity', { format: 'csv', content: 'a' })).status).toBe(403)
+    expect((await send(supervisor, 'POST', '/api/import/nothing', { format: 'csv', content: 'a' })).status).toBe(400)
+    expect((await send(supervisor, 'POST', '/api/import/roster', { format: 'ods', content: 'a' })).status).toBe(400)
   })
 })
