@@ -14,7 +14,7 @@ export const archiveFormat = 'rootface-records'
 export const archiveFormatVersion = 1
 
 type AnyTable = PgTable
-const tables: AnyTable[] = Object.values(schema).filter((v): v is AnyTable => is(v, PgTable))
+const tables: AnyTable[] = (Object.values(schema) as unknown[]).filter((v): v is AnyTable => is(v, PgTable))
 const nameOf = (t: AnyTable) => getTableConfig(t).name
 
 /** Every exported table, parents before children (foreign keys), so rows load in this order. */

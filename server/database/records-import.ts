@@ -8,6 +8,8 @@ import { readSheet, type ReadSheet } from '../utils/spreadsheets'
 import { guessMapping, importFields, type ImportKind, type ImportRowError, type RecordsImport } from '../../shared/schemas/records'
 import { welderSchema, type WelderInput } from '../../shared/schemas/welder'
 import { continuityImportRowSchema } from '../../shared/schemas/continuity'
+import { importedTestRowSchema, type ImportedTestRow } from '../../shared/schemas/imported-test'
+import { storeImportedTests } from './imported-tests'
 import { invalid } from '../../shared/types/outcome'
 
 // Bringing a shop's records in from its own spreadsheets (CSV or XLSX): the columns mapped to Rootface's fields (guessed
@@ -56,6 +58,36 @@ async function checkRoster(db: Db, sheet: ReadSheet, mapping: Record<string, str
     }
     seen.set(key, line)
     out.rows.push({ line, value: w, shown: { stamp: w.stamp, name: w.name, employeeNumber: w.employeeNumber ?? '', email: w.email ?? '', status: w.status } })
+  }
+  return out
+}
+
+type TestRow = Omit<ImportedTestRow, 'stamp'> & { welderId: number }
+
+async function checkTests(db: Db, sheet: ReadSheet, mapping: Record<string, string>, today: string): Promise<Checked<TestRow>> {
+  const roster = new Map((await db.select({ id: welders.id, stamp: welders.stamp }).from(welders)).map(w => [w.stamp.toLowerCase(), w]))
+  const out: Checked<TestRow> = { rows: [], errors: [] }
+  const keys = ['stamp', 'process', 'code', 'edition', 'testDate', 'positions', 'thickness', 'diameter', 'otherRanges', 'reference']
+  for (const { line, cells } of sheet.rows) {
+    const parsed = importedTestRowSchema.safeParse(Object.fromEntries(keys.map(k => [k, pick(mapping, cells, k)])))
+    if (!parsed.success) {
+      out.errors.push(...fieldErrors(line, parsed.error, mapping, cells))
+      continue
+    }
+    const { stamp, ...r } = parsed.data
+    const welder = roster.get(stamp.toLowerCase())
+    if (!welder) {
+      out.errors.push({ line, field: 'stamp', message: `No welder with stamp ${stamp} on the roster`, column: mapping.stamp, value: stamp })
+      continue
+    }
+    if (r.testDate > today) {
+      out.errors.push({ line, field: 'testDate', message: `${r.testDate} is after today`, column: mapping.testDate, value: r.testDate })
+      continue
+    }
+    out.rows.push({
+      line, value: { ...r, welderId: welder.id },
+      shown: { stamp: welder.stamp, process: r.process, code: r.code, edition: r.edition ?? '', testDate: r.testDate, positions: r.positions ?? '', thickness: r.thickness ?? '', diameter: r.diameter ?? '', otherRanges: r.otherRanges ?? '', reference: r.reference ?? '' },
+    })
   }
   return out
 }
@@ -127,7 +159,9 @@ export async function importRecords(db: Db, user: SessionUser, kind: ImportKind,
   }
   for (const f of fields) if (f.required && !mapping[f.key]) errors.push({ line: 1, field: 'mapping', message: `Choose the column that holds ${f.label.toLowerCase()}` })
   if (!sheet.rows.length) errors.push({ line: 1, field: 'file', message: 'The file has no rows under its header line' })
-  const checked = errors.length ? { rows: [], errors: [] } : kind === 'roster' ? await checkRoster(db, sheet, mapping) : await checkContinuity(db, sheet, mapping, today)
+  const checked = errors.length
+    ? { rows: [], errors: [] }
+    : kind === 'roster' ? await checkRoster(db, sheet, mapping) : kind === 'tests' ? await checkTests(db, sheet, mapping, today) : await checkContinuity(db, sheet, mapping, today)
   errors.push(...checked.errors)
   errors.sort((a, b) => a.line - b.line)
   const summary = {
@@ -138,6 +172,8 @@ export async function importRecords(db: Db, user: SessionUser, kind: ImportKind,
   if (errors.length) return invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors)
   const stored = kind === 'roster'
     ? await storeRoster(db, (checked as Checked<WelderInput>).rows.map(r => r.value), user)
-    : await insertEntries(db, (checked as Checked<ContinuityRow>).rows.map(r => r.value), user.id, 'import')
+    : kind === 'tests'
+      ? await storeImportedTests(db, (checked as Checked<TestRow>).rows.map(r => r.value), user)
+      : await insertEntries(db, (checked as Checked<ContinuityRow>).rows.map(r => r.value), user.id, 'import')
   return { ...summary, preview: [], stored }
 }

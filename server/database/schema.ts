@@ -532,4 +532,29 @@ export const readingEquipment = pgTable('reading_equipment', {
   primaryKey({ columns: [t.readingId, t.equipmentId] }),
   index('reading_equipment_equipment_idx').on(t.equipmentId),
 ])
+
+// Welder test history brought in from a shop's own records: the ranges exactly as recorded there, kept "imported, not
+// recomputed" (no rule has looked at them) until an inspector confirms them against the original. They do not feed
+// standings or coverage: those stay with the tests recorded in Rootface.
+export const importedTests = pgTable('imported_tests', {
+  id: serial('id').primaryKey(),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  code: text('code').notNull(),
+  edition: text('edition'),
+  process: text('process').notNull(),
+  testDate: date('test_date', { mode: 'string' }).notNull(),
+  positions: text('positions'),
+  thickness: text('thickness'),
+  diameter: text('diameter'),
+  otherRanges: text('other_ranges'),
+  reference: text('reference'),
+  state: text('state').notNull().default('imported'),
+  importedBy: integer('imported_by').references(() => accounts.id),
+  importedAt: timestamp('imported_at', { withTimezone: true }).notNull().defaultNow(),
+  confirmedBy: integer('confirmed_by').references(() => accounts.id),
+  confirmedAt: timestamp('confirmed_at', { withTimezone: true }),
+}, t => [
+  index('imported_tests_welder_idx').on(t.welderId, t.testDate),
+  check('imported_tests_state_check', sql`${t.state} in ('imported', 'confirmed')`),
+])
 // ---- end quality-b ----

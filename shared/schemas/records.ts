@@ -6,7 +6,7 @@ export const exportTableParamSchema = z.object({ name: z.string().regex(/^[a-z_]
 export const exportTableQuerySchema = z.object({ format: z.enum(['csv', 'xlsx'], { errorMap: () => ({ message: 'Choose csv or xlsx' }) }).default('csv') })
 
 /** What can be brought in from a shop's own spreadsheets. */
-export const importKinds = ['roster', 'continuity'] as const
+export const importKinds = ['roster', 'tests', 'continuity'] as const
 export type ImportKind = typeof importKinds[number]
 export const importKindParamSchema = z.object({ kind: z.enum(importKinds, { errorMap: () => ({ message: 'Unknown kind of import' }) }) })
 
@@ -39,6 +39,18 @@ export const importFields: Record<ImportKind, ImportField[]> = {
     { key: 'employeeNumber', label: 'Employee no.', required: false, headers: ['employee number', 'employee no', 'employee no.', 'badge', 'payroll number'] },
     { key: 'email', label: 'E-mail', required: false, headers: ['email', 'e-mail', 'mail'] },
     { key: 'status', label: 'Status (active or inactive)', required: false, headers: ['status', 'state'] },
+  ],
+  tests: [
+    { key: 'stamp', label: 'Welder stamp', required: true, headers: ['stamp', 'welder stamp', 'welder'] },
+    { key: 'process', label: 'Process', required: true, headers: ['process'] },
+    { key: 'code', label: 'Code', required: true, headers: ['code', 'standard'] },
+    { key: 'edition', label: 'Edition', required: false, headers: ['edition', 'year'] },
+    { key: 'testDate', label: 'Test date', required: true, headers: ['test date', 'date', 'tested on'] },
+    { key: 'positions', label: 'Positions qualified', required: false, headers: ['positions', 'position', 'positions qualified'] },
+    { key: 'thickness', label: 'Thickness range', required: false, headers: ['thickness', 'thickness range', 'thickness qualified'] },
+    { key: 'diameter', label: 'Diameter range', required: false, headers: ['diameter', 'diameter range', 'od', 'diameter qualified'] },
+    { key: 'otherRanges', label: 'Other ranges', required: false, headers: ['other', 'other ranges', 'notes', 'remarks'] },
+    { key: 'reference', label: 'Certificate or record no.', required: false, headers: ['reference', 'certificate', 'certificate no', 'record', 'wpq'] },
   ],
   continuity: [
     { key: 'stamp', label: 'Welder stamp', required: true, headers: ['stamp', 'welder stamp', 'welder'] },

@@ -22,7 +22,7 @@ beforeAll(async () => {
 afterAll(async () => server?.stop())
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- answers of many shapes, read field by field
-type Body = Record<string, any> & { data?: { fieldErrors: Record<string, string[]> } }
+type Body = Record<string, any> & { data?: { fieldErrors: Record<string, string[]>, rowErrors?: unknown[] } }
 const send = (client: Client, method: string, path: string, body?: unknown) =>
   client.json<Body>(path, { method, ...(body === undefined ? {} : { body: JSON.stringify(body), headers: { 'content-type': 'application/json' } }) })
 const today = dayjs().format('YYYY-MM-DD')
@@ -205,7 +205,7 @@ describe('bringing records in', () => {
     const before = (await send(supervisor, 'GET', '/api/welders?pageSize=1')).body.total
     const refused = await send(supervisor, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(bad), commit: true })
     expect(refused.status).toBe(400)
-    expect(refused.body.data.rowErrors).toHaveLength(2)
+    expect(refused.body.data?.rowErrors).toHaveLength(2)
     expect((await send(supervisor, 'GET', '/api/welders?pageSize=1')).body.total).toBe(before)
     const done = await send(supervisor, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(invented), commit: true })
     expect(done.status).toBe(200)
@@ -234,6 +234,33 @@ describe('bringing records in', () => {
     expect(wrong.body.errors[0]).toMatchObject({ line: 1, field: 'mapping' })
     const unread = await send(inspector, 'POST', '/api/import/continuity', { format: 'xlsx', content: Buffer.from('not a workbook').toString('base64') })
     expect(unread.status).toBe(400)
+  })
+
+  it('test history comes in as recorded, "imported", until an inspector confirms it; nothing is recomputed', async () => {
+    const csv = [
+      'Stamp,Process,Code,Edition,Test date,Positions,Thickness,Diameter,Certificate',
+      'IM-010,smaw,ASME IX,2019,2025-03-04,"1G, 2G and 3G","1/16 to 3/4 in","2 7/8 in OD and over",C-77',
+      'IM-010,GTAW,ISO 9606-1,2017,2025-13-01,PA PC,3-12 mm,,C-78',
+      'IM-010,FCAW,Company standard,,2025-03-04,,,,C-79',
+    ].join('\n')
+    const dry = await send(supervisor, 'POST', '/api/import/tests', { format: 'csv', content: csv })
+    expect(dry.body.errors.map((e: { line: number, field: string }) => [e.line, e.field])).toEqual([[3, 'testDate'], [4, 'code']])
+    const ok = csv.split('\n').slice(0, 2).join('\n')
+    const stored = await send(supervisor, 'POST', '/api/import/tests', { format: 'csv', content: ok, commit: true })
+    expect(stored.body.stored).toBe(1)
+    const roster = await send(supervisor, 'GET', '/api/welders?q=IM-010&pageSize=5')
+    const id = roster.body.items.find((w: { stamp: string }) => w.stamp === 'IM-010').id
+    const history = await send(inspector, 'GET', `/api/welders/${id}/imported-tests`)
+    // the ranges exactly as the file states them
+    expect(history.body).toEqual([expect.objectContaining({ process: 'SMAW', code: 'asme-ix', edition: '2019', positions: '1G, 2G and 3G', thickness: '1/16 to 3/4 in', diameter: '2 7/8 in OD and over', reference: 'C-77', state: 'imported', confirmedBy: null })])
+    // not in the standings: nothing was recomputed from it
+    expect((await send(supervisor, 'GET', `/api/welders/${id}`)).body.standings).toEqual([])
+    expect((await send(supervisor, 'POST', `/api/imported-tests/${history.body[0].id}/confirm`)).status).toBe(403)
+    const confirmed = await send(inspector, 'POST', `/api/imported-tests/${history.body[0].id}/confirm`)
+    expect(confirmed.status).toBe(200)
+    expect(confirmed.body.state).toBe('confirmed')
+    expect((await send(inspector, 'POST', `/api/imported-tests/${history.body[0].id}/confirm`)).status).toBe(409)
+    expect((await send(inspector, 'GET', `/api/welders/${id}/imported-tests`)).body[0].confirmedBy).toBeTruthy()
   })
 
   it('only the quality manager imports a roster; a welder imports nothing; an unknown kind is 400', async () => {
