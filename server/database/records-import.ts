@@ -10,24 +10,25 @@ import { welderSchema, type WelderInput } from '../../shared/schemas/welder'
 import { continuityImportRowSchema } from '../../shared/schemas/continuity'
 import { importedTestRowSchema, type ImportedTestRow } from '../../shared/schemas/imported-test'
 import { storeImportedTests } from './imported-tests'
+import { checkDocuments, storeImportedDocuments, type DocumentRow } from './imported-documents'
 import { invalid } from '../../shared/types/outcome'
 
 // Bringing a shop's records in from its own spreadsheets (CSV or XLSX): the columns mapped to Rootface's fields (guessed
 // from the headers, changed on the mapping screen), every row checked, a dry run that shows what will be created and
 // every row error, and a commit that stores every row in one transaction or nothing at all.
 
-interface Checked<T> { rows: { line: number, value: T, shown: Record<string, string> }[], errors: ImportRowError[] }
+export interface Checked<T> { rows: { line: number, value: T, shown: Record<string, string> }[], errors: ImportRowError[] }
 
 const PREVIEW_ROWS = 200
 
-function fieldErrors(line: number, error: { flatten: () => { fieldErrors: Record<string, string[] | undefined> } }, mapping: Record<string, string>, cells: Record<string, string>): ImportRowError[] {
+export function fieldErrors(line: number, error: { flatten: () => { fieldErrors: Record<string, string[] | undefined> } }, mapping: Record<string, string>, cells: Record<string, string>): ImportRowError[] {
   return Object.entries(error.flatten().fieldErrors).map(([field, messages]) => {
     const column = mapping[field]
     return { line, field, message: messages?.[0] ?? 'Invalid', column, value: column === undefined ? undefined : cells[column] ?? '' }
   })
 }
 
-const pick = (mapping: Record<string, string>, cells: Record<string, string>, key: string) => {
+export const pick = (mapping: Record<string, string>, cells: Record<string, string>, key: string) => {
   const column = mapping[key]
   const value = column === undefined ? undefined : cells[column]
   return value === '' ? undefined : value
@@ -161,7 +162,11 @@ export async function importRecords(db: Db, user: SessionUser, kind: ImportKind,
   if (!sheet.rows.length) errors.push({ line: 1, field: 'file', message: 'The file has no rows under its header line' })
   const checked = errors.length
     ? { rows: [], errors: [] }
-    : kind === 'roster' ? await checkRoster(db, sheet, mapping) : kind === 'tests' ? await checkTests(db, sheet, mapping, today) : await checkContinuity(db, sheet, mapping, today)
+    : kind === 'roster'
+      ? await checkRoster(db, sheet, mapping)
+      : kind === 'tests'
+        ? await checkTests(db, sheet, mapping, today)
+        : kind === 'continuity' ? await checkContinuity(db, sheet, mapping, today) : await checkDocuments(db, kind === 'wps-headers' ? 'wps' : 'pqr', sheet, mapping)
   errors.push(...checked.errors)
   errors.sort((a, b) => a.line - b.line)
   const summary = {
@@ -174,6 +179,8 @@ export async function importRecords(db: Db, user: SessionUser, kind: ImportKind,
     ? await storeRoster(db, (checked as Checked<WelderInput>).rows.map(r => r.value), user)
     : kind === 'tests'
       ? await storeImportedTests(db, (checked as Checked<TestRow>).rows.map(r => r.value), user)
-      : await insertEntries(db, (checked as Checked<ContinuityRow>).rows.map(r => r.value), user.id, 'import')
+      : kind !== 'continuity'
+        ? await storeImportedDocuments(db, kind === 'wps-headers' ? 'wps' : 'pqr', (checked as Checked<DocumentRow>).rows.map(r => r.value), user)
+        : await insertEntries(db, (checked as Checked<ContinuityRow>).rows.map(r => r.value), user.id, 'import')
   return { ...summary, preview: [], stored }
 }

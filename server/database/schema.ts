@@ -557,4 +557,24 @@ export const importedTests = pgTable('imported_tests', {
   index('imported_tests_welder_idx').on(t.welderId, t.testDate),
   check('imported_tests_state_check', sql`${t.state} in ('imported', 'confirmed')`),
 ])
+
+// The headers of a shop's existing WPSs and PQRs brought in from its register (number, revision, title, code, processes),
+// as recorded: a list of what exists on paper until each is entered in full. Nothing is checked against the code.
+export const importedDocuments = pgTable('imported_documents', {
+  id: serial('id').primaryKey(),
+  kind: text('kind').notNull(),
+  number: text('number').notNull(),
+  revision: text('revision').notNull().default(''),
+  title: text('title'),
+  code: text('code').notNull(),
+  edition: text('edition'),
+  processes: text('processes'),
+  documentDate: date('document_date', { mode: 'string' }),
+  status: text('status'),
+  importedBy: integer('imported_by').references(() => accounts.id),
+  importedAt: timestamp('imported_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [
+  uniqueIndex('imported_documents_number_key').on(t.kind, t.number, t.revision),
+  check('imported_documents_kind_check', sql`${t.kind} in ('wps', 'pqr')`),
+])
 // ---- end quality-b ----

@@ -6,7 +6,7 @@ export const exportTableParamSchema = z.object({ name: z.string().regex(/^[a-z_]
 export const exportTableQuerySchema = z.object({ format: z.enum(['csv', 'xlsx'], { errorMap: () => ({ message: 'Choose csv or xlsx' }) }).default('csv') })
 
 /** What can be brought in from a shop's own spreadsheets. */
-export const importKinds = ['roster', 'tests', 'continuity'] as const
+export const importKinds = ['roster', 'tests', 'continuity', 'wps-headers', 'pqr-headers'] as const
 export type ImportKind = typeof importKinds[number]
 export const importKindParamSchema = z.object({ kind: z.enum(importKinds, { errorMap: () => ({ message: 'Unknown kind of import' }) }) })
 
@@ -33,14 +33,14 @@ export interface ImportRowError { line: number, field: string, message: string, 
 export interface ImportField { key: string, label: string, required: boolean, headers: string[] }
 
 export const importFields: Record<ImportKind, ImportField[]> = {
-  roster: [
+  'roster': [
     { key: 'stamp', label: 'Stamp', required: true, headers: ['stamp', 'welder stamp', 'id stamp', 'symbol', 'welder id'] },
     { key: 'name', label: 'Name', required: true, headers: ['name', 'welder', 'welder name', 'full name'] },
     { key: 'employeeNumber', label: 'Employee no.', required: false, headers: ['employee number', 'employee no', 'employee no.', 'badge', 'payroll number'] },
     { key: 'email', label: 'E-mail', required: false, headers: ['email', 'e-mail', 'mail'] },
     { key: 'status', label: 'Status (active or inactive)', required: false, headers: ['status', 'state'] },
   ],
-  tests: [
+  'tests': [
     { key: 'stamp', label: 'Welder stamp', required: true, headers: ['stamp', 'welder stamp', 'welder'] },
     { key: 'process', label: 'Process', required: true, headers: ['process'] },
     { key: 'code', label: 'Code', required: true, headers: ['code', 'standard'] },
@@ -52,7 +52,27 @@ export const importFields: Record<ImportKind, ImportField[]> = {
     { key: 'otherRanges', label: 'Other ranges', required: false, headers: ['other', 'other ranges', 'notes', 'remarks'] },
     { key: 'reference', label: 'Certificate or record no.', required: false, headers: ['reference', 'certificate', 'certificate no', 'record', 'wpq'] },
   ],
-  continuity: [
+  'wps-headers': [
+    { key: 'number', label: 'Number', required: true, headers: ['number', 'no', 'no.', 'wps', 'pqr', 'wps no', 'pqr no', 'document'] },
+    { key: 'revision', label: 'Revision', required: false, headers: ['revision', 'rev', 'rev.'] },
+    { key: 'title', label: 'Title', required: false, headers: ['title', 'description', 'scope'] },
+    { key: 'code', label: 'Code', required: true, headers: ['code', 'standard'] },
+    { key: 'edition', label: 'Edition', required: false, headers: ['edition', 'year'] },
+    { key: 'processes', label: 'Processes', required: false, headers: ['process', 'processes'] },
+    { key: 'documentDate', label: 'Date', required: false, headers: ['date', 'issued', 'approved on'] },
+    { key: 'status', label: 'Status', required: false, headers: ['status', 'state'] },
+  ],
+  'pqr-headers': [
+    { key: 'number', label: 'Number', required: true, headers: ['number', 'no', 'no.', 'wps', 'pqr', 'wps no', 'pqr no', 'document'] },
+    { key: 'revision', label: 'Revision', required: false, headers: ['revision', 'rev', 'rev.'] },
+    { key: 'title', label: 'Title', required: false, headers: ['title', 'description', 'scope'] },
+    { key: 'code', label: 'Code', required: true, headers: ['code', 'standard'] },
+    { key: 'edition', label: 'Edition', required: false, headers: ['edition', 'year'] },
+    { key: 'processes', label: 'Processes', required: false, headers: ['process', 'processes'] },
+    { key: 'documentDate', label: 'Date', required: false, headers: ['date', 'issued', 'approved on'] },
+    { key: 'status', label: 'Status', required: false, headers: ['status', 'state'] },
+  ],
+  'continuity': [
     { key: 'stamp', label: 'Welder stamp', required: true, headers: ['stamp', 'welder stamp', 'welder'] },
     { key: 'process', label: 'Process', required: true, headers: ['process'] },
     { key: 'weldedOn', label: 'Date welded', required: true, headers: ['date', 'welded on', 'weldedon', 'welded'] },
@@ -71,3 +91,5 @@ export function guessMapping(kind: ImportKind, headers: readonly string[]): Reco
   }
   return mapping
 }
+
+export const importedDocumentsQuerySchema = z.object({ kind: z.enum(['wps', 'pqr'], { errorMap: () => ({ message: 'Choose wps or pqr' }) }) })

@@ -263,6 +263,29 @@ describe('bringing records in', () => {
     expect((await send(inspector, 'GET', `/api/welders/${id}/imported-tests`)).body[0].confirmedBy).toBeTruthy()
   })
 
+  it('WPS and PQR registers come in by header, as recorded; a number already entered or imported is a row error', async () => {
+    const wps = await supervisor.json<{ items: { number: string, revision: number }[] }>('/api/procedures?pageSize=1')
+    const entered = wps.body.items[0]!
+    const csv = [
+      'WPS No,Rev,Title,Code,Edition,Process,Date,Status',
+      `IMP-W-1,2,Old shop WPS,AWS D1.1,2015,FCAW,2018-04-02,approved`,
+      `${entered.number},${entered.revision},Already here,ASME IX,2019,SMAW,,`,
+      'IMP-W-1,2,Twice,AWS D1.1,2015,FCAW,,',
+    ].join('\n')
+    const dry = await send(inspector, 'POST', '/api/import/wps-headers', { format: 'csv', content: csv })
+    expect(dry.body.mapping).toMatchObject({ number: 'WPS No', revision: 'Rev', code: 'Code', processes: 'Process', documentDate: 'Date' })
+    expect(dry.body.errors.map((e: { line: number, message: string }) => [e.line, e.message])).toEqual([
+      [3, `${entered.number} rev. ${entered.revision} is entered in Rootface already`], [4, 'IMP-W-1 rev. 2 is on line 2 too'],
+    ])
+    const ok = await send(inspector, 'POST', '/api/import/wps-headers', { format: 'csv', content: csv.split('\n').slice(0, 2).join('\n'), commit: true })
+    expect(ok.body.stored).toBe(1)
+    const list = await send(welder, 'GET', '/api/imported-documents?kind=wps')
+    expect(list.status).toBe(403)
+    const seen = await send(supervisor, 'GET', '/api/imported-documents?kind=wps')
+    expect(seen.body).toEqual([expect.objectContaining({ number: 'IMP-W-1', revision: '2', code: 'aws-d1.1', edition: '2015', processes: 'FCAW', documentDate: '2018-04-02', status: 'approved' })])
+    expect((await send(supervisor, 'GET', '/api/imported-documents?kind=pqr')).body).toEqual([])
+  })
+
   it('only the quality manager imports a roster; a welder imports nothing; an unknown kind is 400', async () => {
     expect((await send(inspector, 'POST', '/api/import/roster', { format: 'csv', content: rosterCsv(['X-1,X']) })).status).toBe(403)
     expect((await send(welder, 'POST', '/api/import/continuity', { format: 'csv', content: 'a' })).status).toBe(403)

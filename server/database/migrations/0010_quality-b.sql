@@ -16,6 +16,22 @@ CREATE TABLE "equipment" (
 	CONSTRAINT "equipment_interval_check" CHECK ("equipment"."interval_months" is null or "equipment"."interval_months" between 1 and 120)
 );
 --> statement-breakpoint
+CREATE TABLE "imported_documents" (
+	"id" serial PRIMARY KEY NOT NULL,
+	"kind" text NOT NULL,
+	"number" text NOT NULL,
+	"revision" text DEFAULT '' NOT NULL,
+	"title" text,
+	"code" text NOT NULL,
+	"edition" text,
+	"processes" text,
+	"document_date" date,
+	"status" text,
+	"imported_by" integer,
+	"imported_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "imported_documents_kind_check" CHECK ("imported_documents"."kind" in ('wps', 'pqr'))
+);
+--> statement-breakpoint
 CREATE TABLE "imported_tests" (
 	"id" serial PRIMARY KEY NOT NULL,
 	"welder_id" integer NOT NULL,
@@ -47,12 +63,14 @@ CREATE TABLE "reading_equipment" (
 ALTER TABLE "readings" ADD COLUMN "calibration_flag" boolean DEFAULT false NOT NULL;--> statement-breakpoint
 ALTER TABLE "welders" ADD COLUMN "card_token" text;--> statement-breakpoint
 ALTER TABLE "welders" ADD COLUMN "card_public" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+ALTER TABLE "imported_documents" ADD CONSTRAINT "imported_documents_imported_by_accounts_id_fk" FOREIGN KEY ("imported_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "imported_tests" ADD CONSTRAINT "imported_tests_welder_id_welders_id_fk" FOREIGN KEY ("welder_id") REFERENCES "public"."welders"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "imported_tests" ADD CONSTRAINT "imported_tests_imported_by_accounts_id_fk" FOREIGN KEY ("imported_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "imported_tests" ADD CONSTRAINT "imported_tests_confirmed_by_accounts_id_fk" FOREIGN KEY ("confirmed_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "reading_equipment" ADD CONSTRAINT "reading_equipment_reading_id_readings_id_fk" FOREIGN KEY ("reading_id") REFERENCES "public"."readings"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "reading_equipment" ADD CONSTRAINT "reading_equipment_equipment_id_equipment_id_fk" FOREIGN KEY ("equipment_id") REFERENCES "public"."equipment"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "equipment_tag_key" ON "equipment" USING btree ("tag");--> statement-breakpoint
+CREATE UNIQUE INDEX "imported_documents_number_key" ON "imported_documents" USING btree ("kind","number","revision");--> statement-breakpoint
 CREATE INDEX "imported_tests_welder_idx" ON "imported_tests" USING btree ("welder_id","test_date");--> statement-breakpoint
 CREATE INDEX "reading_equipment_equipment_idx" ON "reading_equipment" USING btree ("equipment_id");--> statement-breakpoint
 CREATE UNIQUE INDEX "welders_card_token_key" ON "welders" USING btree ("card_token");

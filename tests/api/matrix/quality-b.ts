@@ -16,6 +16,7 @@ export const entries: MatrixEntries = {
   'POST /api/import/[kind]': { url: '/api/import/roster', expect: [401, 400, 403, 403, 403] },
   'GET /api/welders/[id]/imported-tests': { url: '/api/welders/1/imported-tests', expect: [401, 200, 200, 404, 403] },
   'POST /api/imported-tests/[id]/confirm': { url: '/api/imported-tests/999999/confirm', expect: [401, 403, 404, 403, 403] },
+  'GET /api/imported-documents': { url: '/api/imported-documents?kind=wps', expect: [401, 200, 200, 403, 403] },
   // Public by design: the secret in the address is the key; an unknown one is a 404 for everyone.
   'GET /api/cards/[token]': { url: '/api/cards/not-a-real-card-token-0000000000', expect: [404, 404, 404, 404, 404] },
 }
