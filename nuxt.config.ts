@@ -55,6 +55,8 @@ export default defineNuxtConfig({
     // Static assets are served pre-compressed (gzip and brotli) to browsers that accept it.
     compressPublicAssets: { gzip: true, brotli: true },
     experimental: { tasks: true },
+    // exceljs's dependency chain requires these through the "module-sync" export condition, which the tracer does not follow.
+    externals: { traceInclude: ['async-function', 'generator-function', 'async-generator-function'].map(p => join(rootDir, 'node_modules', p, 'require.mjs')) },
     // Before every other plugin: a production server without a strong AUTH_SECRET or without AUTH_ORIGIN stops here.
     plugins: [join(rootDir, 'server/startup/production-check.ts')],
     // Lapse reminders and the weekly digest once a day at 06:00; the outbox retries queued mail every minute.

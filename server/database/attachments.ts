@@ -1,12 +1,14 @@
 import { createHash, randomUUID } from 'node:crypto'
 import { and, asc, desc, eq } from 'drizzle-orm'
 import type { Db } from './client'
-import { accounts, attachments, baseMetals, signatures } from './schema'
+import { accounts, attachments, baseMetals, signatures, welders } from './schema'
 import { mayReadProcedure } from './procedures'
 import { mayReadPqr } from './pqrs'
 import { mayReadWelderTest } from './welder-tests'
 import { mayReadTrialBead } from './trials'
 import { recordAudit } from './audit'
+import { mayReadEquipment } from './equipment'
+import { mayReadWelder } from './welders'
 import type { SessionUser } from '../utils/auth'
 import { makeThumbnail, thumbnailKey } from '../utils/attachments'
 import { putStoredFile, readStoredFile, removeStoredFile } from '../utils/storage'
@@ -27,12 +29,21 @@ export const uploaders: Record<AttachmentRecordType, readonly Role[]> = {
   'base-metal': ['supervisor'],
   // A welder reaches a bead only when the shop lets welders record trials (mayReadTrialBead).
   'trial-bead': ['supervisor', 'inspector', 'welder'],
+  'equipment': ['supervisor', 'inspector'],
+  'welder': ['supervisor'],
 }
 
 /** A catalogue entry is staff's; its files go into packets only through the PQRs and WPSs that use it. */
 async function mayReadBaseMetal(db: Db, user: SessionUser, id: number) {
   if (user.role !== 'supervisor' && user.role !== 'inspector') return false
   const [row] = await db.select({ id: baseMetals.id }).from(baseMetals).where(eq(baseMetals.id, id)).limit(1)
+  return !!row
+}
+
+/** A welder's photo is seen by whoever may read the welder. */
+async function welderExists(db: Db, user: SessionUser, id: number) {
+  if (!await mayReadWelder(db, user, id)) return false
+  const [row] = await db.select({ id: welders.id }).from(welders).where(eq(welders.id, id)).limit(1)
   return !!row
 }
 
@@ -44,12 +55,14 @@ export function mayReadRecord(db: Db, user: SessionUser, type: AttachmentRecordT
     case 'welder-test': return mayReadWelderTest(db, user, id)
     case 'base-metal': return mayReadBaseMetal(db, user, id)
     case 'trial-bead': return mayReadTrialBead(db, user, id)
+    case 'equipment': return mayReadEquipment(db, user, id)
+    case 'welder': return welderExists(db, user, id)
   }
 }
 
 /** The time of the record's latest signature, or null while it is unsigned (base metals are never signed). */
 async function lastSignedAt(db: Db, type: AttachmentRecordType, id: number): Promise<Date | null> {
-  if (type === 'base-metal' || type === 'trial-bead') return null
+  if (type === 'base-metal' || type === 'trial-bead' || type === 'equipment' || type === 'welder') return null
   const [row] = await db.select({ at: signatures.signedAt }).from(signatures)
     .where(and(eq(signatures.recordType, type), eq(signatures.recordId, id))).orderBy(desc(signatures.signedAt)).limit(1)
   return row?.at ?? null

@@ -4,6 +4,8 @@ import { pqrs, procedurePqrs, procedures, projectProcedures, readings, signature
 import { contentHash, currentContentFormat, newVerifyCode } from './signing'
 import { columnsOf, draftOf, findProcedure, layersOf, prequalifiedOf, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
 import { recordAudit } from './audit'
+import { checkReadingEquipment, keepReadingEquipment } from './equipment'
+import { todayIso } from '../utils/today'
 import { isForeignKeyViolation, isUniqueViolation, settle } from '../utils/outcome'
 import { conflict, fieldFailure, frozen, invalid, missing, refused, stale } from '../../shared/types/outcome'
 import type { SessionUser } from '../utils/auth'
@@ -216,13 +218,17 @@ async function recordReadingOn(db: Db, id: number, input: Reading, user: Session
     }
   }
   const outOfWindow = !result.within || (heat !== null && !heat.within)
+  // The machine and meters named, each with where its calibration stood on the day the reading was taken.
+  const equipmentChecks = await checkReadingEquipment(db, input.equipmentIds ?? [], input.takenAt ? input.takenAt.slice(0, 10) : todayIso())
+  const calibrationFlag = equipmentChecks.some(c => c.flagged)
   return db.transaction(async (tx) => {
     const [saved] = await tx.insert(readings).values({
       procedureId: row.id, welderId, takenAt: input.takenAt ? new Date(input.takenAt) : new Date(),
-      values: { readings: values, checks: result.checks, heatInput: heat, reference: input.reference ?? null, layer: layerIndex, layerName: layers[layerIndex]!.name, process: layers[layerIndex]!.process }, outOfWindow, recordedBy: user.id,
+      values: { readings: values, checks: result.checks, heatInput: heat, reference: input.reference ?? null, layer: layerIndex, layerName: layers[layerIndex]!.name, process: layers[layerIndex]!.process }, outOfWindow, calibrationFlag, recordedBy: user.id,
     }).returning()
-    await recordAudit(tx, { accountId: user.id, action: 'reading.record', recordType: 'procedure', recordId: row.id, after: { reading: saved!.id, outOfWindow } })
-    return { ...saved!, within: !outOfWindow, checks: result.checks, heatInput: heat }
+    await keepReadingEquipment(tx as unknown as Db, saved!.id, equipmentChecks)
+    await recordAudit(tx, { accountId: user.id, action: 'reading.record', recordType: 'procedure', recordId: row.id, after: { reading: saved!.id, outOfWindow, calibrationFlag } })
+    return { ...saved!, within: !outOfWindow, checks: result.checks, heatInput: heat, equipment: equipmentChecks }
   })
 }
 

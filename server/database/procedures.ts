@@ -3,6 +3,7 @@ import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import type { ProcedureListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { accounts, baseMetals, procedurePqrs, procedures, readings, signatures, welders } from './schema'
+import { equipmentOfReadings } from './equipment'
 import { supportPqrs } from './pqrs'
 import { auditorMayReadProcedure } from './projects'
 import type { SessionUser } from '../utils/auth'
@@ -73,11 +74,13 @@ export async function procedureDetail(db: Db, row: ProcedureRow) {
 
 export async function readingsOf(db: Db, procedureId: number, welderId: number | null) {
   const where = welderId === null ? eq(readings.procedureId, procedureId) : and(eq(readings.procedureId, procedureId), eq(readings.welderId, welderId))
-  return db.select({
-    id: readings.id, takenAt: readings.takenAt, values: readings.values, outOfWindow: readings.outOfWindow,
+  const rows = await db.select({
+    id: readings.id, takenAt: readings.takenAt, values: readings.values, outOfWindow: readings.outOfWindow, calibrationFlag: readings.calibrationFlag,
     welderId: readings.welderId, welderStamp: welders.stamp, welderName: welders.name, recordedBy: accounts.name,
   }).from(readings).leftJoin(welders, eq(welders.id, readings.welderId)).leftJoin(accounts, eq(accounts.id, readings.recordedBy))
     .where(where).orderBy(desc(readings.takenAt)).limit(200)
+  const used = await equipmentOfReadings(db, rows.map(r => r.id))
+  return rows.map(r => ({ ...r, equipment: used.get(r.id) ?? [] }))
 }
 
 /**

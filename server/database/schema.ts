@@ -19,12 +19,17 @@ export const welders = pgTable('welders', {
   email: text('email'),
   // Secret of the welder's subscribable calendar feed of lapse dates; null until the welder asks for one.
   calendarToken: text('calendar_token'),
+  // Secret of the welder's public ID-card page (the QR on the card); null until the shop issues one. A new one revokes the old.
+  cardToken: text('card_token'),
+  // Whether the public ID-card page answers; the shop turns it off per welder.
+  cardPublic: boolean('card_public').notNull().default(false),
   version: integer('version').notNull().default(1),
   createdAt: created(),
   updatedAt: updated(),
 }, t => [
   uniqueIndex('welders_stamp_key').on(t.stamp),
   uniqueIndex('welders_calendar_token_key').on(t.calendarToken),
+  uniqueIndex('welders_card_token_key').on(t.cardToken),
   index('welders_name_idx').on(t.name),
   check('welders_status_check', sql`${t.status} in ('active', 'inactive')`),
 ])
@@ -368,6 +373,8 @@ export const readings = pgTable('readings', {
   takenAt: timestamp('taken_at', { withTimezone: true }).notNull().defaultNow(),
   values: jsonb('values').notNull(),
   outOfWindow: boolean('out_of_window').notNull(),
+  // Taken with a machine or meter out of calibration that day, or whose calibration Rootface cannot tell (reading_equipment).
+  calibrationFlag: boolean('calibration_flag').notNull().default(false),
   recordedBy: integer('recorded_by').references(() => accounts.id),
 }, t => [index('readings_procedure_idx').on(t.procedureId, t.takenAt)])
 
@@ -650,3 +657,84 @@ export const qualificationRevocations = pgTable('qualification_revocations', {
   check('qualification_revocations_reason_check', sql`length(trim(${t.reason})) > 0`),
 ])
 // ---- end quality-a ----
+
+// ---- quality-b ----
+// Welding machines and the meters used to set and check them, each with its calibration (date, interval, certificate
+// as an attachment of record type 'equipment').
+export const equipment = pgTable('equipment', {
+  id: serial('id').primaryKey(),
+  kind: text('kind').notNull(),
+  // The shop's own tag for it (asset number), unique.
+  tag: text('tag').notNull(),
+  description: text('description'),
+  serialNumber: text('serial_number'),
+  state: text('state').notNull().default('in-service'),
+  calibratedOn: date('calibrated_on', { mode: 'string' }),
+  intervalMonths: integer('interval_months'),
+  notes: text('notes'),
+  version: integer('version').notNull().default(1),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  uniqueIndex('equipment_tag_key').on(t.tag),
+  check('equipment_kind_check', sql`${t.kind} in ('welding-machine', 'ammeter', 'voltmeter', 'wire-feed-speed-meter', 'gas-flow-meter', 'temperature-indicator')`),
+  check('equipment_state_check', sql`${t.state} in ('in-service', 'out-of-service')`),
+  check('equipment_interval_check', sql`${t.intervalMonths} is null or ${t.intervalMonths} between 1 and 120`),
+])
+
+// The machine and meters a production reading was taken with, and where each one's calibration stood that day.
+export const readingEquipment = pgTable('reading_equipment', {
+  readingId: integer('reading_id').notNull().references(() => readings.id, { onDelete: 'cascade' }),
+  equipmentId: integer('equipment_id').notNull().references(() => equipment.id),
+  calibrationState: text('calibration_state').notNull(),
+  dueOn: date('due_on', { mode: 'string' }),
+}, t => [
+  primaryKey({ columns: [t.readingId, t.equipmentId] }),
+  index('reading_equipment_equipment_idx').on(t.equipmentId),
+])
+
+// Welder test history brought in from a shop's own records: the ranges exactly as recorded there, kept "imported, not
+// recomputed" (no rule has looked at them) until an inspector confirms them against the original. They do not feed
+// standings or coverage: those stay with the tests recorded in Rootface.
+export const importedTests = pgTable('imported_tests', {
+  id: serial('id').primaryKey(),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  code: text('code').notNull(),
+  edition: text('edition'),
+  process: text('process').notNull(),
+  testDate: date('test_date', { mode: 'string' }).notNull(),
+  positions: text('positions'),
+  thickness: text('thickness'),
+  diameter: text('diameter'),
+  otherRanges: text('other_ranges'),
+  reference: text('reference'),
+  state: text('state').notNull().default('imported'),
+  importedBy: integer('imported_by').references(() => accounts.id),
+  importedAt: timestamp('imported_at', { withTimezone: true }).notNull().defaultNow(),
+  confirmedBy: integer('confirmed_by').references(() => accounts.id),
+  confirmedAt: timestamp('confirmed_at', { withTimezone: true }),
+}, t => [
+  index('imported_tests_welder_idx').on(t.welderId, t.testDate),
+  check('imported_tests_state_check', sql`${t.state} in ('imported', 'confirmed')`),
+])
+
+// The headers of a shop's existing WPSs and PQRs brought in from its register (number, revision, title, code, processes),
+// as recorded: a list of what exists on paper until each is entered in full. Nothing is checked against the code.
+export const importedDocuments = pgTable('imported_documents', {
+  id: serial('id').primaryKey(),
+  kind: text('kind').notNull(),
+  number: text('number').notNull(),
+  revision: text('revision').notNull().default(''),
+  title: text('title'),
+  code: text('code').notNull(),
+  edition: text('edition'),
+  processes: text('processes'),
+  documentDate: date('document_date', { mode: 'string' }),
+  status: text('status'),
+  importedBy: integer('imported_by').references(() => accounts.id),
+  importedAt: timestamp('imported_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [
+  uniqueIndex('imported_documents_number_key').on(t.kind, t.number, t.revision),
+  check('imported_documents_kind_check', sql`${t.kind} in ('wps', 'pqr')`),
+])
+// ---- end quality-b ----

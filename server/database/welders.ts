@@ -72,7 +72,7 @@ export async function welderHistory(db: Db, id: number) {
       .from(continuityEntries).leftJoin(accounts, eq(accounts.id, continuityEntries.recordedBy))
       .where(eq(continuityEntries.welderId, id)).orderBy(desc(continuityEntries.weldedOn), desc(continuityEntries.id)).limit(500),
   ])
-  const { calendarToken: _secret, ...visible } = welder
+  const { calendarToken: _secret, cardToken: _cardSecret, ...visible } = welder
   return { welder: visible, account: account[0] ?? null, tests, continuity }
 }
 

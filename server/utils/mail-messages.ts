@@ -66,13 +66,15 @@ export function lapseReminderMail(input: { welder: { id: number, name: string, s
 
 export interface DigestRow { stamp: string, name: string, standing: ProcessStanding }
 
-export function weeklyDigestMail(input: { week: string, account: { id: number, name: string, email: string }, today: string, windowDays: number, rows: DigestRow[], link: string, shopName: string }): OutgoingMail {
+export function weeklyDigestMail(input: { week: string, account: { id: number, name: string, email: string }, today: string, windowDays: number, rows: DigestRow[], link: string, shopName: string, calibrations?: { tag: string, kindWords: string, text: string }[] }): OutgoingMail {
   const count = input.rows.length
+  const calibrations = input.calibrations ?? []
   const body = renderLetter({
     greeting: `Hello ${input.account.name},`,
     paragraphs: [count
       ? `${count} welder ${count === 1 ? 'qualification lapses' : 'qualifications lapse'} in the ${input.windowDays} days from ${input.today} unless the process is used and logged before then:`
-      : `No welder qualification lapses in the ${input.windowDays} days from ${input.today}.`],
+      : `No welder qualification lapses in the ${input.windowDays} days from ${input.today}.`,
+    ...(calibrations.length ? [`Calibration of machines and meters in service, due in the ${input.windowDays} days, past due or not recorded: ${calibrations.map(c => `${c.kindWords} ${c.tag}: ${c.text}`).join(' ')}`] : [])],
     table: count
       ? {
           head: ['Lapses on', 'Days', 'Stamp', 'Welder', 'Process', 'Last use'],

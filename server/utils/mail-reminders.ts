@@ -2,6 +2,7 @@ import type { Db } from '../database/client'
 import { activeQualityManagers, queueMail, reminderRoster } from '../database/mail'
 import { digestWindowDays, isoWeekOf, reminderStepFor } from '#shared/mail/reminder-steps'
 import { standingsOf } from '../database/standings'
+import { calibrationsDue } from '../database/equipment'
 import { lapseReminderMail, weeklyDigestMail, type DigestRow } from './mail-messages'
 
 export interface ReminderRun {
@@ -43,8 +44,9 @@ export async function queueReminders(db: Db, today: string, base: string, shopNa
 
   digest.sort((a, b) => a.standing.lapsesOn.localeCompare(b.standing.lapsesOn) || a.stamp.localeCompare(b.stamp) || a.standing.process.localeCompare(b.standing.process))
   const managers = await activeQualityManagers(db)
+  const calibrations = (await calibrationsDue(db, today, digestWindowDays)).map(c => ({ tag: c.tag, kindWords: c.kindWords, text: c.calibration.text }))
   for (const account of managers) {
-    const mail = weeklyDigestMail({ week: run.week, account, today, windowDays: digestWindowDays, rows: digest, link: `${base}/welders`, shopName })
+    const mail = weeklyDigestMail({ week: run.week, account, today, windowDays: digestWindowDays, rows: digest, link: `${base}/welders`, shopName, calibrations })
     if (await queueMail(db, mail)) run.digestsQueued++
   }
   return run

@@ -7,6 +7,8 @@ export const attachmentKinds = {
   'procedure': ['joint-sketch', 'other'],
   'base-metal': ['mill-test-report', 'other'],
   'trial-bead': ['bead-photo', 'other'],
+  'equipment': ['calibration-certificate', 'other'],
+  'welder': ['photo'],
 } as const
 export type AttachmentRecordType = keyof typeof attachmentKinds
 export const attachmentRecordTypes = Object.keys(attachmentKinds) as [AttachmentRecordType, ...AttachmentRecordType[]]
@@ -18,6 +20,8 @@ export const attachmentKindWords: Record<string, string> = {
   'joint-sketch': 'Joint sketch',
   'mill-test-report': 'Mill test report',
   'bead-photo': 'Bead photo',
+  'calibration-certificate': 'Calibration certificate',
+  'photo': 'Photo for the ID card',
   'other': 'Other document',
 }
 

@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { idSchema, optionalNumber, optionalText } from './fields'
+import { readingEquipmentSchema } from './equipment'
 
 /** One production reading against a WPS window, in the WPS's unit (V, A, in/min or mm/min, in or mm, ft³/h or L/min). */
 export const readingSchema = z.object({
@@ -14,6 +15,8 @@ export const readingSchema = z.object({
   reference: optionalText('Weld reference', 120),
   /** Which process layer of the WPS the reading was taken on (0: the first) */
   layer: z.number({ invalid_type_error: 'layer must be a whole number' }).int('layer must be a whole number').min(0).max(7).optional(),
+  /** The welding machine and meters the reading was taken with (ids in the equipment register) */
+  equipmentIds: readingEquipmentSchema.optional(),
 }).strict().refine(v => [v.volts, v.amps, v.wireFeedSpeed, v.travelSpeed, v.ctwd, v.gasFlow].some(x => x !== null && x !== undefined),
   { message: 'Enter at least one reading', path: ['volts'] })
 export type ReadingInput = z.input<typeof readingSchema>

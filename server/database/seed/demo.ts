@@ -18,6 +18,7 @@ import {
   demoProjects, demoWelders, demoWelderTests,
 } from './demo-data'
 import { seedStructuralDemo } from './demo-structural'
+import { seedQualityB } from './demo-quality-b'
 
 const day = (today: Date, daysAgo: number) => format(subDays(today, daysAgo), 'yyyy-MM-dd')
 
@@ -153,6 +154,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
     await seedDemoIso(tx as unknown as Db, { today, supervisor, inspector })
     await seedDemoTrials(tx as unknown as Db, { supervisor: supervisor.id, inspector: inspector.id }, { baseId: baseOf(['SA-1011', 'CS Type B']).id, fillerId: fillerOf(['SFA-5.18', 'ER70S-6']).id })
     await seedDemoQualityA(tx as unknown as Db, today, inspector)
+    await seedQualityB(tx as unknown as Db, today)
     await tx.insert(t.auditEvents).values({ accountId: null, action: 'seed', recordType: 'shop', after: { shop: 'demo' } })
   })
   return true
