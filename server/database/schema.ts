@@ -519,6 +519,8 @@ export const joints = pgTable('joints', {
   pt: boolean('pt').notNull().default(false),
   procedureId: integer('procedure_id').references(() => procedures.id),
   weldedOn: date('welded_on', { mode: 'string' }),
+  // The check as made when the joint was marked welded: per welder and process the answer and the lapse date on that day
+  completionCheck: jsonb('completion_check'),
   version: integer('version').notNull().default(1),
   createdBy: integer('created_by').references(() => accounts.id),
   createdAt: created(),

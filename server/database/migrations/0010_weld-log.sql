@@ -82,6 +82,7 @@ CREATE TABLE "joints" (
 	"pt" boolean DEFAULT false NOT NULL,
 	"procedure_id" integer,
 	"welded_on" date,
+	"completion_check" jsonb,
 	"version" integer DEFAULT 1 NOT NULL,
 	"created_by" integer,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,

@@ -14,6 +14,7 @@ import {
   demoAccounts, demoBaseMetals, demoShopName, demoContinuity, demoCustomers, demoFillerMetals, demoPassword, demoPqrs, demoProcedures,
   demoProjects, demoWelders, demoWelderTests,
 } from './demo-data'
+import { seedDemoWeldLog } from './demo-weld-log'
 
 const day = (today: Date, daysAgo: number) => format(subDays(today, daysAgo), 'yyyy-MM-dd')
 
@@ -130,6 +131,8 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
         }
       }
     }
+
+    await seedDemoWeldLog(tx as unknown as Db, today)
 
     // Sign what the demo shows as approved or certified, over the content as stored.
     const toSign: { type: SignedRecordType, id: number, meaning: 'approved' | 'certified', signer: typeof supervisor }[] = [
