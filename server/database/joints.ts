@@ -12,6 +12,7 @@ import { fieldFailure, forbidden, frozen, missing, refused, stale, type Failure,
 import { checkJoint, refusalLines, type AssignedProcedure, type Assignment, type JointCheck, type RegisterJoint } from '../../shared/qualification/joint-check'
 import type { CandidateRow, ProcedureRow, TestRow } from '../../shared/qualification/joint-coverage'
 import { continuityChain } from '../../shared/qualification/process-standing'
+import { rejectRateOf, rejectRates, type ExamFact } from '../../shared/qualification/reject-rate'
 import type { CodeId, Unit } from '../../shared/rules/types'
 import type {
   JointExaminationInput, JointInput, JointListQuery, JointPatch, JointRepairInput, JointWeldedInput, JointWelderInput,
@@ -222,7 +223,7 @@ export async function deleteJoint(db: Db, user: SessionUser, projectId: number, 
 const crewOf = async (db: Db, jointId: number, repair: number): Promise<JointWelderInput[]> =>
   (await db.select({ welderId: jointWelders.welderId, process: jointWelders.process, layer: jointWelders.layer, fNumber: jointWelders.fNumber })
     .from(jointWelders).where(and(eq(jointWelders.jointId, jointId), eq(jointWelders.repair, repair))).orderBy(asc(jointWelders.id)))
-    .map(w => ({ ...w, layer: w.layer as JointWelderInput['layer'] }))
+    .map(w => ({ ...w, process: w.process as JointWelderInput['process'], layer: w.layer as JointWelderInput['layer'] }))
 
 /** One continuity entry per welder and process on the weld date, naming the joint (QW-322.1(a): the use keeps the process current). */
 async function postContinuity(tx: Db, user: SessionUser, jointId: number, crew: JointWelderInput[], weldedOn: string, reference: string) {
@@ -375,4 +376,32 @@ export async function registerChoices(db: Db, user: SessionUser, projectId: numb
 /** Certified tests exist for these welders (used by the weld-log import to name unknown stamps). */
 export async function rosterByStamp(db: Db) {
   return db.select({ id: welders.id, stamp: welders.stamp, status: welders.status }).from(welders)
+}
+
+/** The volumetric results of the welds each welder made (a repair's results go to its repair welders). */
+async function examFacts(db: Db, welderIds?: number[]): Promise<ExamFact[]> {
+  const rows = await db.selectDistinct({
+    welderId: jointWelders.welderId, jointId: jointExaminations.jointId, repair: jointExaminations.repair, method: jointExaminations.method,
+    examinedOn: jointExaminations.examinedOn, accepted: jointExaminations.accepted, lengthExamined: jointExaminations.lengthExamined,
+    defectLength: jointExaminations.defectLength, id: jointExaminations.id,
+  }).from(jointExaminations)
+    .innerJoin(jointWelders, and(eq(jointWelders.jointId, jointExaminations.jointId), eq(jointWelders.repair, jointExaminations.repair)))
+    .where(allOf([inArray(jointExaminations.method, ['RT', 'UT']), welderIds && inArray(jointWelders.welderId, welderIds)]))
+  return rows.map(({ id: _id, ...r }) => ({ ...r, method: r.method as 'RT' | 'UT' }))
+}
+
+/** One welder's reject rate and trend (staff any welder; a welder their own, 404 otherwise). */
+export async function welderRejectRate(db: Db, user: SessionUser, welderId: number, today: string) {
+  if (user.role === 'welder' && user.welderId !== welderId) return missing('Welder')
+  const [w] = await db.select({ id: welders.id }).from(welders).where(eq(welders.id, welderId))
+  if (!w) return missing('Welder')
+  return rejectRateOf(welderId, await examFacts(db, [welderId]), today)
+}
+
+/** The dashboard's reject rates: every welder with examined welds, flagged ones first. */
+export async function rejectBoard(db: Db, today: string) {
+  const rates = rejectRates(await examFacts(db), today)
+  const roster = await db.select({ id: welders.id, stamp: welders.stamp, name: welders.name }).from(welders)
+  return rates.map(r => ({ ...r, stamp: roster.find(w => w.id === r.welderId)?.stamp ?? '', name: roster.find(w => w.id === r.welderId)?.name ?? '' }))
+    .sort((a, b) => Number(b.flagged) - Number(a.flagged) || (b.rate ?? 0) - (a.rate ?? 0) || a.stamp.localeCompare(b.stamp))
 }
