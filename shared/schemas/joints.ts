@@ -15,6 +15,9 @@ const percent = (what: string) => z.preprocess(v => (v === '' || v === null || v
 export const overrideReasonSchema = z.string({ invalid_type_error: 'The reason must be text' }).trim()
   .min(20, 'Write the reason in at least 20 characters').max(1000, 'At most 1000 characters').regex(wellFormedText, brokenCharacterMessage('Reason'))
 
+/** Empty means no override. */
+const optionalOverride = z.preprocess(v => (v === '' || v === null ? undefined : v), overrideReasonSchema.optional())
+
 /** One welder on a joint for one process (and layer). */
 export const jointWelderSchema = z.object({
   welderId: pickedId('the welder'),
@@ -45,7 +48,7 @@ export const jointSchema = z.object({
   procedureId: z.preprocess(v => (v === '' ? null : typeof v === 'string' && /^\d+$/.test(v) ? Number(v) : v), idSchema.nullable()).default(null),
   welders: z.array(jointWelderSchema).max(12, 'At most 12 welders on a joint').default([])
     .refine(list => new Set(list.map(w => `${w.welderId}|${w.process}|${w.layer}`)).size === list.length, 'A welder is listed twice for the same process and layer'),
-  override: overrideReasonSchema.optional(),
+  override: optionalOverride,
 })
 export type JointInput = z.infer<typeof jointSchema>
 
@@ -56,7 +59,7 @@ export type JointPatch = z.infer<typeof jointPatchSchema>
 export const jointWeldedSchema = z.object({
   weldedOn: calendarDay,
   version: versionSchema,
-  override: overrideReasonSchema.optional(),
+  override: optionalOverride,
 })
 export type JointWeldedInput = z.infer<typeof jointWeldedSchema>
 
@@ -65,7 +68,7 @@ export const jointRepairSchema = z.object({
   cause: requiredText('what is repaired (indication and location)', 300),
   weldedOn: calendarDay,
   welders: z.array(jointWelderSchema).min(1, 'Name the repair welder').max(12),
-  override: overrideReasonSchema.optional(),
+  override: optionalOverride,
 })
 export type JointRepairInput = z.infer<typeof jointRepairSchema>
 
