@@ -1,21 +1,23 @@
 import { and, asc, count, desc, eq, ilike, inArray, lte, max, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import {
-  auditorGrants, continuityEntries, jointExaminations, jointOverrides, jointRepairs, jointWelders, joints, procedures, projectProcedures, projects,
-  welders,
+  auditorGrants, continuityEntries, issuedRegisters, issuedSheets, jointExaminations, jointOverrides, jointRepairs, jointWelders, joints, procedures, projectProcedures, projects,
+  signatures, welders,
 } from './schema'
 import { recordAudit } from './audit'
+import { newVerifyCode } from './signing'
 import type { SessionUser } from '../utils/auth'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import { settle } from '../utils/outcome'
-import { fieldFailure, forbidden, frozen, missing, refused, stale, type Failure, type Outcome } from '../../shared/types/outcome'
-import { checkJoint, refusalLines, type AssignedProcedure, type Assignment, type JointCheck, type RegisterJoint } from '../../shared/qualification/joint-check'
+import { parseWeldLog } from '../utils/weld-log-csv'
+import { fieldFailure, forbidden, frozen, invalid, missing, refused, stale, type Failure, type Outcome } from '../../shared/types/outcome'
+import { checkJoint, refusalLines, type AssignedProcedure, type Assignment, type JointCheck, type RegisterJoint, type Refusal } from '../../shared/qualification/joint-check'
 import type { CandidateRow, ProcedureRow, TestRow } from '../../shared/qualification/joint-coverage'
 import { continuityChain } from '../../shared/qualification/process-standing'
 import { rejectRateOf, rejectRates, type ExamFact } from '../../shared/qualification/reject-rate'
 import type { CodeId, Unit } from '../../shared/rules/types'
 import type {
-  JointExaminationInput, JointInput, JointListQuery, JointPatch, JointRepairInput, JointWeldedInput, JointWelderInput,
+  ExternalWeldedInput, JointExaminationInput, JointInput, JointListQuery, JointPatch, JointRepairInput, JointWeldedInput, JointWelderInput,
 } from '../../shared/schemas/joints'
 
 /** The weld register of a project: its joints, who welded them, the check on the weld date, examinations and repairs. */
@@ -242,13 +244,14 @@ const referenceOf = async (db: Db, projectId: number, mark: string, repair = 0) 
 const summaryOf = (check: JointCheck) => check.findings.filter(f => f.subject === 'welder').map(f => ({ welderId: f.welderId, stamp: f.stamp, process: f.process, answer: f.answer, lapsesOn: f.lapsesOn ?? null }))
 
 /** Marks a joint welded on a day: the check on that day (refused with reasons, or overridden), then continuity is posted. */
-export async function markWelded(db: Db, user: SessionUser, projectId: number, jointId: number, input: JointWeldedInput, today: string) {
+export async function markWelded(db: Db, user: SessionUser, projectId: number, jointId: number, input: JointWeldedInput, today: string, welded?: JointWelderInput[]) {
   const before = await jointOf(db, user, projectId, jointId)
   if ('fail' in before) return before
   if (before.weldedOn) return frozen(`This joint was marked welded on ${before.weldedOn}`)
   if (before.version !== input.version) return stale('Someone changed this joint since you opened it; reload and try again.')
   if (input.weldedOn > today) return fieldFailure('weldedOn', 'The date is after today')
-  const crew = await crewOf(db, jointId, 0)
+  // A production system reports who welded it; otherwise the welders assigned in the register did
+  const crew = welded ?? await crewOf(db, jointId, 0)
   if (!crew.length) return fieldFailure('welders', 'Name the welders of this joint first')
   const check = await checkAssignment(db, registerJoint(before), before.procedureId, crew, input.weldedOn)
   const stop = gate(user, check, input.override)
@@ -258,6 +261,10 @@ export async function markWelded(db: Db, user: SessionUser, projectId: number, j
     const [row] = await tx.update(joints).set({ weldedOn: input.weldedOn, completionCheck: summaryOf(check), version: before.version + 1, updatedAt: new Date() })
       .where(and(eq(joints.id, jointId), eq(joints.version, input.version))).returning()
     if (!row) throw stale('Someone changed this joint since you opened it; reload and try again.')
+    if (welded) {
+      await tx.delete(jointWelders).where(and(eq(jointWelders.jointId, jointId), eq(jointWelders.repair, 0)))
+      await tx.insert(jointWelders).values(welded.map(w => ({ ...w, jointId, repair: 0 })))
+    }
     await storeOverride(asTx(tx), user, jointId, 'completion', check, input.override)
     const posted = await postContinuity(asTx(tx), user, jointId, crew, input.weldedOn, reference)
     await recordAudit(asTx(tx), { accountId: user.id, action: 'welded', recordType: 'joint', recordId: jointId, before: { weldedOn: null }, after: { weldedOn: input.weldedOn, posted } })
@@ -404,4 +411,148 @@ export async function rejectBoard(db: Db, today: string) {
   const roster = await db.select({ id: welders.id, stamp: welders.stamp, name: welders.name }).from(welders)
   return rates.map(r => ({ ...r, stamp: roster.find(w => w.id === r.welderId)?.stamp ?? '', name: roster.find(w => w.id === r.welderId)?.name ?? '' }))
     .sort((a, b) => Number(b.flagged) - Number(a.flagged) || (b.rate ?? 0) - (a.rate ?? 0) || a.stamp.localeCompare(b.stamp))
+}
+
+/** The whole register of a project for its packet: each joint with its WPS, welders and the check kept at completion, results, overrides. */
+export async function registerForPacket(db: Db, projectId: number) {
+  const rows = await db.select({
+    id: joints.id, mark: joints.mark, jointType: joints.jointType, weld: joints.weld, unit: joints.unit, pNumberA: joints.pNumberA, pNumberB: joints.pNumberB,
+    thickness: joints.thickness, outsideDiameter: joints.outsideDiameter, positions: joints.positions, weldedOn: joints.weldedOn,
+    completionCheck: joints.completionCheck, procedureNumber: procedures.number, procedureRevision: procedures.revision,
+  }).from(joints).leftJoin(procedures, eq(procedures.id, joints.procedureId)).where(eq(joints.projectId, projectId)).orderBy(asc(joints.mark), asc(joints.id))
+  if (!rows.length) return []
+  const ids = rows.map(r => r.id)
+  const crew = await db.select({ jointId: jointWelders.jointId, stamp: welders.stamp, process: jointWelders.process, repair: jointWelders.repair, welderId: jointWelders.welderId })
+    .from(jointWelders).innerJoin(welders, eq(welders.id, jointWelders.welderId)).where(inArray(jointWelders.jointId, ids)).orderBy(asc(jointWelders.repair), asc(jointWelders.id))
+  const exams = await db.select({ jointId: jointExaminations.jointId, repair: jointExaminations.repair, method: jointExaminations.method, reportNumber: jointExaminations.reportNumber, accepted: jointExaminations.accepted, defectType: jointExaminations.defectType, defectLength: jointExaminations.defectLength })
+    .from(jointExaminations).where(inArray(jointExaminations.jointId, ids)).orderBy(asc(jointExaminations.examinedOn), asc(jointExaminations.id))
+  const overrides = await db.select({ jointId: jointOverrides.jointId, stage: jointOverrides.stage, reason: jointOverrides.reason, accountName: jointOverrides.accountName, at: jointOverrides.at, refusals: jointOverrides.refusals })
+    .from(jointOverrides).where(inArray(jointOverrides.jointId, ids)).orderBy(asc(jointOverrides.at), asc(jointOverrides.id))
+  const repairs = await db.select({ jointId: jointRepairs.jointId, repair: jointRepairs.repair, weldedOn: jointRepairs.weldedOn }).from(jointRepairs).where(inArray(jointRepairs.jointId, ids))
+  return rows.map(r => ({
+    ...r,
+    completionCheck: (r.completionCheck ?? null) as { welderId?: number, stamp?: string, process: string, answer: string, lapsesOn: string | null }[] | null,
+    welders: crew.filter(c => c.jointId === r.id),
+    examinations: exams.filter(e => e.jointId === r.id),
+    overrides: overrides.filter(o => o.jointId === r.id).map(o => ({ ...o, at: o.at.toISOString().slice(0, 10), refusals: refusalLines(o.refusals as Refusal[]) })),
+    repairs: repairs.filter(x => x.jointId === r.id).sort((a, b) => a.repair - b.repair),
+  }))
+}
+export type PacketRegister = Awaited<ReturnType<typeof registerForPacket>>
+
+/** The issue of a register with this content: the same project and content keep one code; a changed register gets a new one. */
+export async function issueRegister(db: Db, projectId: number, sha256: string, user: Pick<SessionUser, 'id' | 'name'>) {
+  const match = and(eq(issuedRegisters.projectId, projectId), eq(issuedRegisters.sha256, sha256))
+  const [known] = await db.select().from(issuedRegisters).where(match).limit(1)
+  if (known) return known
+  for (;;) {
+    const code = newVerifyCode()
+    const [a] = await db.select({ id: signatures.id }).from(signatures).where(eq(signatures.verifyCode, code)).limit(1)
+    const [b] = await db.select({ id: issuedSheets.id }).from(issuedSheets).where(eq(issuedSheets.verifyCode, code)).limit(1)
+    if (a || b) continue
+    const [row] = await db.insert(issuedRegisters).values({ projectId, sha256, verifyCode: code, issuedBy: user.id, issuerName: user.name }).onConflictDoNothing().returning()
+    if (row) return row
+  }
+}
+
+/** The issued register a code names, with its project, if any. */
+export async function registerIssueByCode(db: Db, code: string) {
+  const [issue] = await db.select({ issue: issuedRegisters, number: projects.number, name: projects.name }).from(issuedRegisters)
+    .innerJoin(projects, eq(projects.id, issuedRegisters.projectId)).where(eq(issuedRegisters.verifyCode, code)).limit(1)
+  return issue
+}
+
+/** How many joints a project's register holds. */
+export async function jointCountOf(db: Db, projectId: number) {
+  const [row] = await db.select({ n: count() }).from(joints).where(eq(joints.projectId, projectId))
+  return row?.n ?? 0
+}
+
+/**
+ * A joint reported welded by another shop system (API token): found by project number and mark, its welders by stamp
+ * (F-No. and layer from the register's assignment when the report leaves them out), then checked and posted as by hand.
+ */
+export async function weldedFromSystem(db: Db, user: SessionUser, input: ExternalWeldedInput, today: string) {
+  const [found] = await db.select({ id: joints.id, projectId: joints.projectId, version: joints.version }).from(joints)
+    .innerJoin(projects, eq(projects.id, joints.projectId)).where(and(eq(projects.number, input.project), eq(joints.mark, input.mark)))
+  if (!found) return missing('Joint')
+  const roster = await db.select({ id: welders.id, stamp: welders.stamp }).from(welders).where(inArray(welders.stamp, input.welders.map(w => w.stamp)))
+  const unknown = input.welders.filter(w => !roster.some(r => r.stamp === w.stamp)).map(w => w.stamp)
+  if (unknown.length) return fieldFailure('welders', `Not on the roster: ${unknown.join(', ')}`)
+  const assigned = await crewOf(db, found.id, 0)
+  const crew: JointWelderInput[] = input.welders.map((w) => {
+    const welderId = roster.find(r => r.stamp === w.stamp)!.id
+    const known = assigned.find(a => a.welderId === welderId && a.process === w.process)
+    return { welderId, process: w.process, layer: w.layer ?? known?.layer ?? null, fNumber: w.fNumber ?? known?.fNumber ?? null }
+  })
+  return markWelded(db, user, found.projectId, found.id, { weldedOn: input.weldedOn, version: found.version }, today, crew)
+}
+
+/**
+ * A weld log file for a project: each mark an open joint of the project, its lines the welders who welded it on one day.
+ * Every joint is checked on its day as when marked welded by hand; without `commit` the preview and the row errors, with
+ * it every joint in one transaction, or nothing when any line is wrong.
+ */
+export async function importWeldLog(db: Db, user: SessionUser, projectId: number, csv: string, commit: boolean, today: string) {
+  if (!await mayReadRegister(db, user, projectId)) return missing('Project')
+  const { rows, errors } = parseWeldLog(csv)
+  const roster = await db.select({ id: welders.id, stamp: welders.stamp }).from(welders)
+  const byStamp = new Map(roster.map(w => [w.stamp.toLowerCase(), w.id]))
+  const marks = [...new Set(rows.map(r => r.mark))]
+  const found = marks.length ? await db.select().from(joints).where(and(eq(joints.projectId, projectId), inArray(joints.mark, marks))) : []
+  const reference = await referenceOf(db, projectId, '')
+  const plan: { joint: JointRow, weldedOn: string, crew: JointWelderInput[], check: JointCheck, lines: number[] }[] = []
+  for (const mark of marks) {
+    const lines = rows.filter(r => r.mark === mark)
+    const joint = found.find(j => j.mark === mark)
+    const first = lines[0]!
+    if (!joint) {
+      errors.push({ line: first.line, field: 'mark', message: `No joint ${mark} in this project's register`, value: mark })
+      continue
+    }
+    if (joint.weldedOn) {
+      errors.push({ line: first.line, field: 'mark', message: `Joint ${mark} was marked welded on ${joint.weldedOn}`, value: mark })
+      continue
+    }
+    const days = [...new Set(lines.map(l => l.weldedOn))]
+    if (days.length > 1) {
+      errors.push({ line: lines[1]!.line, field: 'weldedOn', message: `Joint ${mark} is given two dates (${days.join(', ')}); a repair is entered on the joint's page` })
+      continue
+    }
+    if (first.weldedOn > today) {
+      errors.push({ line: first.line, field: 'weldedOn', message: `${first.weldedOn} is after today`, value: first.weldedOn })
+      continue
+    }
+    const unknown = lines.filter(l => !byStamp.has(l.stamp.toLowerCase()))
+    for (const l of unknown) errors.push({ line: l.line, field: 'stamp', message: `No welder with stamp ${l.stamp} on the roster`, value: l.stamp })
+    if (unknown.length) continue
+    const assigned = await crewOf(db, joint.id, 0)
+    const crew = lines.map((l) => {
+      const welderId = byStamp.get(l.stamp.toLowerCase())!
+      const known = assigned.find(a => a.welderId === welderId && a.process === l.process)
+      return { welderId, process: l.process, layer: l.layer ?? known?.layer ?? null, fNumber: l.fNumber ?? known?.fNumber ?? null }
+    })
+    const check = await checkAssignment(db, registerJoint(joint), joint.procedureId, crew, first.weldedOn)
+    if (!check.ok) {
+      for (const line of refusalLines(check.refusals)) errors.push({ line: first.line, field: 'check', message: `${mark}: ${line}` })
+      continue
+    }
+    plan.push({ joint, weldedOn: first.weldedOn, crew, check, lines: lines.map(l => l.line) })
+  }
+  errors.sort((a, b) => a.line - b.line)
+  const preview = plan.slice(0, 200).map(p => ({ mark: p.joint.mark, weldedOn: p.weldedOn, welders: p.crew.map(c => `${roster.find(r => r.id === c.welderId)?.stamp} ${c.process}`).join(', ') }))
+  const summary = { total: rows.length, joints: marks.length, errors, preview }
+  if (!commit) return { ...summary, stored: 0 }
+  if (errors.length) return invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors)
+  const stored = await db.transaction(async (tx) => {
+    for (const p of plan) {
+      await tx.update(joints).set({ weldedOn: p.weldedOn, completionCheck: summaryOf(p.check), version: p.joint.version + 1, updatedAt: new Date() }).where(eq(joints.id, p.joint.id))
+      await tx.delete(jointWelders).where(and(eq(jointWelders.jointId, p.joint.id), eq(jointWelders.repair, 0)))
+      await tx.insert(jointWelders).values(p.crew.map(c => ({ ...c, jointId: p.joint.id, repair: 0 })))
+      await postContinuity(asTx(tx), user, p.joint.id, p.crew, p.weldedOn, `${reference}${p.joint.mark}`)
+    }
+    await recordAudit(asTx(tx), { accountId: user.id, action: 'import', recordType: 'joint', recordId: null, after: { projectId, joints: plan.map(p => p.joint.id) } })
+    return plan.length
+  })
+  return { ...summary, preview: [], stored }
 }

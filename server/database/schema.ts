@@ -615,4 +615,20 @@ export const apiTokens = pgTable('api_tokens', {
   windowStart: timestamp('window_start', { withTimezone: true }).notNull().defaultNow(),
   windowCount: integer('window_count').notNull().default(0),
 }, t => [uniqueIndex('api_tokens_hash_key').on(t.tokenHash)])
+
+// The joint register as printed in a project's packet: the hash of its content and the code of its QR, so the public
+// verification page can tell whether the register has changed since it was issued.
+export const issuedRegisters = pgTable('issued_registers', {
+  id: serial('id').primaryKey(),
+  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+  sha256: text('sha256').notNull(),
+  verifyCode: text('verify_code').notNull(),
+  issuedBy: integer('issued_by').references(() => accounts.id),
+  issuerName: text('issuer_name').notNull(),
+  issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [
+  uniqueIndex('issued_registers_verify_code_key').on(t.verifyCode),
+  index('issued_registers_project_idx').on(t.projectId, t.sha256),
+  check('issued_registers_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
+])
 // ---- end weld-log ----

@@ -9,6 +9,8 @@ import { renderPacket } from './packet-render'
 import { pqrIdsOf, shopName } from './records'
 import { continuityLogSheet, pqrSheetOf, procedureSheet, projectPeriod, welderTestSheet } from './sheets'
 import { todayIso } from '../utils/today'
+import { jointRegisterSheet } from './packet-joints'
+import { jointCountOf } from '../database/joints'
 
 export interface PacketPlan {
   project: { id: number, number: string, name: string, customer: string }
@@ -18,6 +20,8 @@ export interface PacketPlan {
   pqrs: { id: number, number: string }[]
   welders: { id: number, name: string, stamp: string, testIds: number[], tests: { id: number, process: string, testDate: string }[] }[]
   processes: string[]
+  /** Joints in the project's weld register (the packet prints the register when there are any) */
+  registerJoints: number
 }
 
 /** What goes into a project's packet: its WPSs and their PQRs, its welders' certified tests up to the period's end. */
@@ -48,11 +52,12 @@ export async function packetPlan(db: Db, projectId: number): Promise<PacketPlan 
     pqrs: [...new Map(support.map(s => [s.pqrId, { id: s.pqrId, number: s.number }])).values()],
     // Every process of every layer of the project's WPSs (a GTAW root, SMAW fill WPS needs both held).
     processes: [...new Set(procs.flatMap(p => (p.processes?.length ? p.processes : [p.process])))].sort(),
+    registerJoints: await jointCountOf(db, projectId),
   }
 }
 
 export function sheetCount(plan: PacketPlan) {
-  return plan.procedureIds.length + plan.pqrIds.length + plan.welders.reduce((n, w) => n + w.testIds.length + 1, 0)
+  return plan.procedureIds.length + plan.pqrIds.length + plan.welders.reduce((n, w) => n + w.testIds.length + 1, 0) + (plan.registerJoints ? 1 : 0)
 }
 
 export interface WelderGap extends Gap { welder: string, stamp: string }
@@ -87,6 +92,7 @@ export async function buildPacket(db: Db, plan: PacketPlan, user: Pick<SessionUs
     for (const id of w.testIds) await add(await welderTestSheet(db, id, origin), `${w.name} (${w.stamp})`)
     await add(await continuityLogSheet(db, w.id, plan.period, user, origin), `${w.name} (${w.stamp})`)
   }
+  await add(await jointRegisterSheet(db, plan, user, origin), 'Weld register')
   const modelsDone = performance.now()
   const gaps = await gapsOfProject(db, plan)
   const shop = await shopName(db)

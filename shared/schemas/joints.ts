@@ -124,6 +124,7 @@ export const externalWeldedSchema = z.object({
     stamp: requiredText('the welder stamp', 20),
     process: z.string().trim().toUpperCase().pipe(processSchema),
     layer: jointWelderSchema.shape.layer,
+    fNumber: jointWelderSchema.shape.fNumber,
   })).min(1, 'Name at least one welder').max(12),
 })
 export type ExternalWeldedInput = z.infer<typeof externalWeldedSchema>

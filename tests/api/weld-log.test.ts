@@ -1,6 +1,7 @@
 import dayjs from 'dayjs'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { signedIn, startServer, type Client, type TestServer } from './harness'
+import { pdfPages, squeeze } from './pdf-text'
 
 let server: TestServer
 let supervisor: Client
@@ -134,5 +135,99 @@ describe('the weld register', () => {
     expect(other.body.items.length).toBeGreaterThan(0)
     expect((await auditor.fetch(`/api/projects/2/joints/${other.body.items[0]!.id}`)).status).toBe(404)
     expect((await auditor.fetch(`/api/projects/1/joints/${other.body.items[0]!.id}`)).status).toBe(404)
+  })
+
+  it('a weld log CSV is checked all or nothing: a preview with row errors, nothing stored while a line is wrong, then every joint', async () => {
+    for (const mark of ['T-CSV1', 'T-CSV2']) expect((await send(supervisor, `${project}/joints`, seam(mark, []))).status).toBe(201)
+    const bad = `mark,stamp,process,date\nT-CSV1,KB-04,SMAW,${yesterday}\nT-CSV2,KB-06,GTAW,${yesterday}\nT-NONE,KB-04,SMAW,${yesterday}\nT-CSV1,KB-04,SMAW,2026-02-30\n`
+    const preview = await send(inspector, `${project}/joints/import`, { csv: bad })
+    expect(preview.status).toBe(200)
+    const errors = preview.body.errors as { line: number, field: string, message: string }[]
+    expect(errors.map(e => e.line)).toEqual(expect.arrayContaining([3, 4, 5]))
+    expect(errors.find(e => e.line === 3)!.message).toContain('KB-06 GTAW')
+    const refused = await send(inspector, `${project}/joints/import`, { csv: bad, commit: true })
+    expect(refused.status).toBe(400)
+    expect((refused.body.data!.rowErrors as unknown[]).length).toBe(errors.length)
+    expect((await supervisor.json<{ items: { status: string }[] }>(`${project}/joints?q=T-CSV1`)).body.items[0]!.status).toBe('open')
+    const good = `mark,stamp,process,date,f-no.\nT-CSV1,KB-04,SMAW,${yesterday},4\nT-CSV2,KB-10,SMAW,${yesterday},4\n`
+    const stored = await send(inspector, `${project}/joints/import`, { csv: good, commit: true })
+    expect(stored.status).toBe(200)
+    expect(stored.body.stored).toBe(2)
+    const log = await supervisor.json<{ total: number }>(`/api/continuity?q=${encodeURIComponent('joint T-CSV')}`)
+    expect(log.body.total).toBe(2)
+  })
+
+  it('the auditor\'s packet prints the register with each welder\'s standing, the results and the overrides; its code verifies, and a change shows', async () => {
+    const started = await auditor.json<{ id: number, status: string }>('/api/packets', {
+      method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ projectId: 1 }),
+    })
+    expect(started.status).toBe(202)
+    let state = { status: started.body.status }
+    for (let i = 0; i < 300 && state.status !== 'ready' && state.status !== 'failed'; i++) {
+      await new Promise(r => setTimeout(r, 100))
+      state = (await auditor.json<typeof state>(`/api/packets/${started.body.id}`)).body
+    }
+    expect(state.status).toBe('ready')
+    const pages = await pdfPages(new Uint8Array(await (await auditor.fetch(`/api/packets/${started.body.id}/file`)).arrayBuffer()))
+    const register = pages.map(squeeze).filter(p => p.includes('WR-KB-2611')).join('')
+    expect(register).toContain(squeeze('Weld register'))
+    expect(register).toContain('T-WELDED')
+    expect(register).toContain(squeeze('KB-04 SMAW: qualified, current'))
+    expect(register).toContain(squeeze('REJECT (porosity 0.625 in)'))
+    expect(register).toContain(squeeze('Customer concession CC-17'))
+    const code = /verify\/([A-Z0-9-]+)/.exec(register)?.[1]
+    expect(code).toBeTruthy()
+    const verified = await (await fetch(`${server.url}/api/verify/${code}`)).json() as { state: string, sheet: string }
+    expect(verified).toMatchObject({ state: 'unchanged', sheet: 'Weld register' })
+    // A result added afterwards changes the register: the printed code now says so
+    const list = await supervisor.json<{ items: { id: number }[] }>(`${project}/joints?q=T-WELDED`)
+    expect((await send(inspector, `${project}/joints/${list.body.items[0]!.id}/examinations`, { method: 'MT', examinedOn: yesterday, accepted: true })).status).toBe(201)
+    expect((await (await fetch(`${server.url}/api/verify/${code}`)).json() as { state: string }).state).toBe('changed')
+  })
+})
+
+describe('API tokens for other shop systems', () => {
+  // A server-to-server call: no cookie, no Origin header
+  const call = (path: string, token: string | null, body: unknown) => fetch(`${server.url}${path}`, {
+    method: 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+  })
+  const newToken = async (scopes: string[]) => (await send(supervisor, '/api/tokens', { name: `line 3 log ${scopes.join('+')}`, scopes })).body as { id: number, token: string, prefix: string }
+
+  it('a token scoped to joints posts a welded joint by stamps, is refused continuity, is audited, and stops at revocation', async () => {
+    const created = await send(supervisor, `${project}/joints`, seam('T-API', [{ welderId: idOf('KB-04'), process: 'SMAW' }]))
+    expect(created.status).toBe(201)
+    const { id, token, prefix } = await newToken(['joints:write'])
+    expect(token.startsWith(prefix)).toBe(true)
+    // Listed without the token or its hash
+    const listed = await supervisor.json<unknown[]>('/api/tokens')
+    expect(JSON.stringify(listed.body)).not.toContain(token)
+    expect(JSON.stringify(listed.body)).not.toContain('tokenHash')
+
+    const welded = { project: 'KB-2611', mark: 'T-API', weldedOn: yesterday, welders: [{ stamp: 'KB-04', process: 'smaw' }] }
+    expect((await call('/api/ext/joints/welded', null, welded)).status).toBe(401)
+    expect((await call('/api/ext/joints/welded', 'rft_not-a-token', welded)).status).toBe(401)
+    expect((await call('/api/ext/continuity', token, { stamp: 'KB-04', process: 'SMAW', weldedOn: yesterday, reference: 'x' })).status).toBe(403)
+    const ok = await call('/api/ext/joints/welded', token, welded)
+    expect(ok.status).toBe(200)
+    expect(await ok.json()).toMatchObject({ weldedOn: yesterday, posted: 1 })
+    const log = await supervisor.json<{ total: number }>(`/api/continuity?q=${encodeURIComponent('joint T-API')}`)
+    expect(log.body.total).toBe(1)
+    const audit = await supervisor.json<{ items: { action: string }[] }>(`/api/audit?recordType=api-token&recordId=${id}`)
+    expect(audit.body.items.map(e => e.action)).toEqual(expect.arrayContaining(['create', 'api:joint-welded']))
+
+    expect((await supervisor.fetch(`/api/tokens/${id}`, { method: 'DELETE' })).status).toBe(200)
+    expect((await call('/api/ext/joints/welded', token, welded)).status).toBe(401)
+    expect((await supervisor.fetch(`/api/tokens/${id}`, { method: 'DELETE' })).status).toBe(404)
+  })
+
+  it('a continuity token logs by stamp; an unknown stamp is a field message; the 61st call in a minute is 429', async () => {
+    const { token } = await newToken(['continuity:write'])
+    const res = await call('/api/ext/continuity', token, { stamp: 'KB-07', process: 'GTAW', weldedOn: yesterday, reference: 'line 3 system' })
+    expect(res.status).toBe(201)
+    const unknown = await call('/api/ext/continuity', token, { stamp: 'NOBODY', process: 'GTAW', weldedOn: yesterday, reference: 'x' })
+    expect(unknown.status).toBe(400)
+    let status = 0
+    for (let i = 0; i < 60 && status !== 429; i++) status = (await call('/api/ext/continuity', token, {})).status
+    expect(status).toBe(429)
   })
 })

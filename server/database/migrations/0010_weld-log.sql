@@ -12,6 +12,17 @@ CREATE TABLE "api_tokens" (
 	"window_count" integer DEFAULT 0 NOT NULL
 );
 --> statement-breakpoint
+CREATE TABLE "issued_registers" (
+	"id" serial PRIMARY KEY NOT NULL,
+	"project_id" integer NOT NULL,
+	"sha256" text NOT NULL,
+	"verify_code" text NOT NULL,
+	"issued_by" integer,
+	"issuer_name" text NOT NULL,
+	"issued_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "issued_registers_sha_check" CHECK ("issued_registers"."sha256" ~ '^[0-9a-f]{64}$')
+);
+--> statement-breakpoint
 CREATE TABLE "joint_examinations" (
 	"id" serial PRIMARY KEY NOT NULL,
 	"joint_id" integer NOT NULL,
@@ -95,6 +106,8 @@ CREATE TABLE "joints" (
 --> statement-breakpoint
 ALTER TABLE "continuity_entries" ADD COLUMN "joint_id" integer;--> statement-breakpoint
 ALTER TABLE "api_tokens" ADD CONSTRAINT "api_tokens_created_by_accounts_id_fk" FOREIGN KEY ("created_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "issued_registers" ADD CONSTRAINT "issued_registers_project_id_projects_id_fk" FOREIGN KEY ("project_id") REFERENCES "public"."projects"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "issued_registers" ADD CONSTRAINT "issued_registers_issued_by_accounts_id_fk" FOREIGN KEY ("issued_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "joint_examinations" ADD CONSTRAINT "joint_examinations_joint_id_joints_id_fk" FOREIGN KEY ("joint_id") REFERENCES "public"."joints"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "joint_examinations" ADD CONSTRAINT "joint_examinations_recorded_by_accounts_id_fk" FOREIGN KEY ("recorded_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "joint_overrides" ADD CONSTRAINT "joint_overrides_joint_id_joints_id_fk" FOREIGN KEY ("joint_id") REFERENCES "public"."joints"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -106,6 +119,8 @@ ALTER TABLE "joints" ADD CONSTRAINT "joints_project_id_projects_id_fk" FOREIGN K
 ALTER TABLE "joints" ADD CONSTRAINT "joints_procedure_id_procedures_id_fk" FOREIGN KEY ("procedure_id") REFERENCES "public"."procedures"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "joints" ADD CONSTRAINT "joints_created_by_accounts_id_fk" FOREIGN KEY ("created_by") REFERENCES "public"."accounts"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "api_tokens_hash_key" ON "api_tokens" USING btree ("token_hash");--> statement-breakpoint
+CREATE UNIQUE INDEX "issued_registers_verify_code_key" ON "issued_registers" USING btree ("verify_code");--> statement-breakpoint
+CREATE INDEX "issued_registers_project_idx" ON "issued_registers" USING btree ("project_id","sha256");--> statement-breakpoint
 CREATE INDEX "joint_examinations_joint_idx" ON "joint_examinations" USING btree ("joint_id","examined_on");--> statement-breakpoint
 CREATE INDEX "joint_overrides_joint_idx" ON "joint_overrides" USING btree ("joint_id");--> statement-breakpoint
 CREATE UNIQUE INDEX "joint_repairs_key" ON "joint_repairs" USING btree ("joint_id","repair");--> statement-breakpoint
