@@ -1,7 +1,7 @@
 import { and, asc, count, desc, eq, ilike, inArray, lte, max, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import {
-  auditorGrants, continuityEntries, issuedRegisters, issuedSheets, jointExaminations, jointOverrides, jointRepairs, jointWelders, joints, procedures, projectProcedures, projects,
+  auditorGrants, continuityEntries, issuedRegisters, issuedSheets, jointExaminations, jointOverrides, jointRepairs, jointWelders, joints, procedures, projectProcedures, projectWelders, projects,
   signatures, welders,
 } from './schema'
 import { recordAudit } from './audit'
@@ -555,4 +555,37 @@ export async function importWeldLog(db: Db, user: SessionUser, projectId: number
     return plan.length
   })
   return { ...summary, preview: [], stored }
+}
+
+/**
+ * A joint's tag, as opened from its QR code: the joint, its WPS, and "may I weld it today": for a welder their own check
+ * on this joint today (their assigned processes, or every process of the WPS when not assigned); for staff the whole check.
+ * Who may open it: staff; a welder on the joint or on its project's crew; an auditor of the granted project. Others: 404.
+ */
+export async function jointTag(db: Db, user: SessionUser, jointId: number, today: string) {
+  const [joint] = await db.select().from(joints).where(eq(joints.id, jointId))
+  if (!joint) return missing('Joint')
+  const assigned = await crewOf(db, jointId, 0)
+  if (user.role === 'welder') {
+    const own = user.welderId ?? -1
+    const onCrew = await db.select({ id: projectWelders.welderId }).from(projectWelders).where(and(eq(projectWelders.projectId, joint.projectId), eq(projectWelders.welderId, own)))
+    if (!onCrew.length && !assigned.some(a => a.welderId === own)) return missing('Joint')
+  }
+  else if (!await mayReadRegister(db, user, joint.projectId)) return missing('Joint')
+  const procedure = await assignedProcedure(db, joint.procedureId)
+  let crew = assigned
+  if (user.role === 'welder') {
+    const own = assigned.filter(a => a.welderId === user.welderId)
+    crew = own.length ? own : (procedure?.processes ?? []).map(process => ({ welderId: user.welderId!, process: process as JointWelderInput['process'], layer: null, fNumber: assigned.find(a => a.process === process)?.fNumber ?? null }))
+  }
+  const check = joint.weldedOn && user.role !== 'welder' ? null : await checkAssignment(db, registerJoint(joint), joint.procedureId, crew, today)
+  const [project] = await db.select({ id: projects.id, number: projects.number, name: projects.name }).from(projects).where(eq(projects.id, joint.projectId))
+  const [wps] = joint.procedureId === null ? [] : await db.select({ id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, status: procedures.status }).from(procedures).where(eq(procedures.id, joint.procedureId))
+  const stamps = assigned.length ? await db.select({ id: welders.id, stamp: welders.stamp }).from(welders).where(inArray(welders.id, assigned.map(a => a.welderId))) : []
+  return {
+    today, project: project!, procedure: wps ?? null,
+    joint: { id: joint.id, mark: joint.mark, jointType: joint.jointType, weld: joint.weld, unit: joint.unit, pNumberA: joint.pNumberA, pNumberB: joint.pNumberB, thickness: joint.thickness, outsideDiameter: joint.outsideDiameter, positions: joint.positions, progression: joint.progression, weldedOn: joint.weldedOn, rtPercent: joint.rtPercent, utPercent: joint.utPercent },
+    welders: assigned.map(a => ({ ...a, stamp: stamps.find(s => s.id === a.welderId)?.stamp ?? '' })),
+    check,
+  }
 }

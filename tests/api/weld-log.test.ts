@@ -144,7 +144,7 @@ describe('the weld register', () => {
     expect(preview.status).toBe(200)
     const errors = preview.body.errors as { line: number, field: string, message: string }[]
     expect(errors.map(e => e.line)).toEqual(expect.arrayContaining([3, 4, 5]))
-    expect(errors.find(e => e.line === 3)!.message).toContain('KB-06 GTAW')
+    expect(errors.filter(e => e.line === 3).map(e => e.message).join(' ')).toContain('KB-06 GTAW: missing')
     const refused = await send(inspector, `${project}/joints/import`, { csv: bad, commit: true })
     expect(refused.status).toBe(400)
     expect((refused.body.data!.rowErrors as unknown[]).length).toBe(errors.length)
@@ -175,7 +175,7 @@ describe('the weld register', () => {
     expect(register).toContain(squeeze('KB-04 SMAW: qualified, current'))
     expect(register).toContain(squeeze('REJECT (porosity 0.625 in)'))
     expect(register).toContain(squeeze('Customer concession CC-17'))
-    const code = /verify\/([A-Z0-9-]+)/.exec(register)?.[1]
+    const code = /verify\/([A-Z0-9]{10})/.exec(register)?.[1]
     expect(code).toBeTruthy()
     const verified = await (await fetch(`${server.url}/api/verify/${code}`)).json() as { state: string, sheet: string }
     expect(verified).toMatchObject({ state: 'unchanged', sheet: 'Weld register' })
@@ -229,5 +229,23 @@ describe('API tokens for other shop systems', () => {
     let status = 0
     for (let i = 0; i < 60 && status !== 429; i++) status = (await call('/api/ext/continuity', token, {})).status
     expect(status).toBe(429)
+  })
+})
+
+describe('the joint tag', () => {
+  it('a welder on the project opens a joint\'s tag and is told whether they may weld it today; off the project it is 404', async () => {
+    const welder = await signedIn(server.url, 'welder') // KB-03, on KB-2611's crew and not on KB-2598's
+    const open = await supervisor.json<{ items: { id: number }[] }>(`${project}/joints?status=open&q=V204-C4`)
+    const tag = await welder.json<{ joint: { mark: string }, procedure: { number: string }, check: { ok: boolean, findings: { subject: string, stamp?: string }[], refusals: unknown[] } }>(`/api/tags/${open.body.items[0]!.id}`)
+    expect(tag.status).toBe(200)
+    expect(tag.body.joint.mark).toBe('V204-C4')
+    expect(tag.body.procedure.number).toBe('KB-W02')
+    // The welder's own check only: every welder finding is theirs
+    const stamps = tag.body.check.findings.filter(f => f.subject === 'welder').map(f => f.stamp)
+    expect(stamps.length).toBeGreaterThan(0)
+    expect(new Set(stamps)).toEqual(new Set(['KB-03']))
+    expect(tag.body.check.ok).toBe(tag.body.check.refusals.length === 0)
+    const other = await supervisor.json<{ items: { id: number }[] }>('/api/projects/2/joints')
+    expect((await welder.fetch(`/api/tags/${other.body.items[0]!.id}`)).status).toBe(404)
   })
 })
