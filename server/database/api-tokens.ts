@@ -6,7 +6,8 @@ import { logEntry } from './continuity'
 import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
 import { fieldFailure, missing } from '../../shared/types/outcome'
-import type { ApiTokenInput, ExternalContinuityInput, TokenScope } from '../../shared/schemas/joints'
+import type { ApiTokenInput, ExternalContinuityInput } from '../../shared/schemas/joints'
+import type { TokenScope } from '../../shared/vocabulary/joints'
 
 /** Per-shop API tokens for other shop systems: created and revoked by the quality manager, only their SHA-256 kept. */
 

@@ -1,6 +1,6 @@
 import type { H3Event } from 'h3'
 import { checkApiToken } from '../database/api-tokens'
-import type { TokenScope } from '../../shared/schemas/joints'
+import type { TokenScope } from '../../shared/vocabulary/joints'
 import type { SessionUser } from './auth'
 
 /**
@@ -12,7 +12,7 @@ export async function requireToken(event: H3Event, scope: TokenScope) {
   const token = /^Bearer\s+(\S+)$/i.exec(header)?.[1] ?? null
   const checked = await checkApiToken(await useDb(), token, scope)
   if (!checked.ok) {
-    if (checked.status === 429) setResponseHeader(event, 'retry-after', '60')
+    if (checked.status === 429) setResponseHeader(event, 'retry-after', 60)
     throw createError({ statusCode: checked.status, statusMessage: checked.message })
   }
   const user: SessionUser = { id: checked.token.createdBy, name: `API token “${checked.token.name}”`, email: '', role: 'inspector', welderId: null }
