@@ -589,3 +589,14 @@ export async function jointTag(db: Db, user: SessionUser, jointId: number, today
     check,
   }
 }
+
+/** The projects whose registers the user may read, with how many joints each holds and how many are welded. */
+export async function registerProjects(db: Db, user: SessionUser) {
+  const granted = user.role === 'auditor' ? (await db.select({ id: auditorGrants.projectId }).from(auditorGrants).where(eq(auditorGrants.accountId, user.id))).map(g => g.id) : null
+  if (granted && !granted.length) return []
+  return db.select({
+    id: projects.id, number: projects.number, name: projects.name,
+    joints: sql<number>`(select count(*)::int from joints j where j.project_id = ${projects.id})`,
+    welded: sql<number>`(select count(*)::int from joints j where j.project_id = ${projects.id} and j.welded_on is not null)`,
+  }).from(projects).where(granted ? inArray(projects.id, granted) : undefined).orderBy(asc(projects.number))
+}

@@ -17,6 +17,7 @@ const registerEntries: MatrixEntries = {
   'POST /api/projects/[id]/joints/[jointId]/examinations': { url: '/api/projects/1/joints/1/examinations', expect: [401, 400, 400, 403, 403] },
   'GET /api/welders/[id]/rejects': { url: '/api/welders/1/rejects', expect: [401, 200, 200, 404, 403] },
   'GET /api/tags/[id]': { url: '/api/tags/1', expect: [401, 200, 200, 200, 200] },
+  'GET /api/registers': { expect: [401, 200, 200, 403, 200] },
   'GET /api/dashboard/rejects': { expect: [401, 200, 200, 403, 403] },
 }
 
