@@ -30,7 +30,7 @@ export const registerHash = (register: PacketRegister) => createHash('sha256').u
 function welderCell(j: PacketRegister[number]) {
   return j.welders.map((w) => {
     const check = w.repair === 0 ? j.completionCheck?.find(c => c.stamp === w.stamp && c.process === w.process) : undefined
-    const standing = check ? `: ${answerWords[check.answer] ?? check.answer}${check.lapsesOn ? `, lapses ${check.lapsesOn}` : ''}` : w.repair ? '' : j.weldedOn ? '' : ': not welded yet'
+    const standing = check ? `: ${answerWords[check.answer] ?? check.answer}${check.lapsesOn ? `, lapses ${check.lapsesOn}` : ''}` : w.repair ? '' : j.weldedOn ? ': not checked, check by hand' : ': not welded yet'
     return `${w.repair ? `${repairName(w.repair)} ` : ''}${printable(w.stamp)} ${w.process}${standing}`
   }).join('; ') || '—'
 }
