@@ -1,5 +1,5 @@
 // npm run seed:large: a large invented shop in its own data directory (default .data/large/db), for `npm run bench`.
-// 2,000 welders, 10,000 welder tests, 200,000 continuity entries, 500 WPSs, 300 PQRs, 200 projects,
+// 2,000 welders, 10,000 welder tests, 200,000 continuity entries, 500 WPSs, 300 PQRs, 200 projects with 200,000 joints,
 // on top of the demo shop (so the demo accounts sign in). Deterministic: the same data every run.
 import { layersOf } from '../server/database/procedure-columns'
 import { pqrLayersOf } from '../server/database/pqr-columns'
@@ -11,6 +11,7 @@ import * as t from '../server/database/schema'
 import { seedDemoShop } from '../server/database/seed/demo'
 import { refreshStandings } from '../server/database/standings'
 import { qualifiedRangesOf } from '../shared/qualification/test-ranges'
+import { seedLargeJoints } from './seed-large-joints'
 
 export const largeShop = { welders: 2000, tests: 10_000, continuity: 200_000, procedures: 500, pqrs: 300, projects: 200 }
 
@@ -115,6 +116,7 @@ export async function seedLargeShop(db: Db, today = new Date()) {
     const welderCount = (i: number) => (i === 0 ? 16 : 10)
     await batches(projectIds.flatMap((projectId, i) => Array.from({ length: welderCount(i) }, (_, k) => ({ projectId, welderId: welderIds[(i * 16 + k) % welderIds.length]! }))), 1000, chunk => tx.insert(t.projectWelders).values(chunk))
     await batches(projectIds.flatMap((projectId, i) => Array.from({ length: 3 }, (_, k) => ({ projectId, procedureId: procedureIds[(i * 3 + k) % procedureIds.length]! }))), 1000, chunk => tx.insert(t.projectProcedures).values(chunk))
+    await seedLargeJoints(tx as unknown as Db, projectIds.map((id, i) => ({ id, welderIds: Array.from({ length: welderCount(i) }, (_, k) => welderIds[(i * 16 + k) % welderIds.length]!), procedureIds: Array.from({ length: 3 }, (_, k) => procedureIds[(i * 3 + k) % procedureIds.length]!) })), day, int)
   })
 }
 

@@ -1,7 +1,6 @@
 import { sql } from 'drizzle-orm'
 import {
-  boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
-  type AnyPgColumn,
+  type AnyPgColumn, boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
 } from 'drizzle-orm/pg-core'
 
 // Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
@@ -264,10 +263,13 @@ export const continuityEntries = pgTable('continuity_entries', {
   weldedOn: date('welded_on', { mode: 'string' }).notNull(),
   reference: text('reference').notNull(),
   recordedBy: integer('recorded_by').references(() => accounts.id),
+  // The production joint whose welding this use is (posted when the joint was marked welded); null for entries typed in.
+  jointId: integer('joint_id').references((): AnyPgColumn => joints.id, { onDelete: 'set null' }),
   createdAt: created(),
   // The CSV import that stored this entry (null: logged by hand); an import is undone as a whole (continuity_imports).
   importId: integer('import_id').references((): AnyPgColumn => continuityImports.id),
 }, t => [
+  index('continuity_joint_idx').on(t.jointId),
   index('continuity_welder_process_idx').on(t.welderId, t.process, t.weldedOn),
   index('continuity_date_idx').on(t.weldedOn),
 ])
@@ -738,3 +740,142 @@ export const importedDocuments = pgTable('imported_documents', {
   check('imported_documents_kind_check', sql`${t.kind} in ('wps', 'pqr')`),
 ])
 // ---- end quality-b ----
+
+// ---- weld-log ----
+// The project's register of production weld joints: what each joint is, the WPS it is welded to, who welded which
+// process or layer, when, and how it was examined and repaired. Lengths in the joint's `unit`.
+export const joints = pgTable('joints', {
+  id: serial('id').primaryKey(),
+  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+  // The shop's own mark: drawing / line / weld number
+  mark: text('mark').notNull(),
+  jointType: text('joint_type').notNull(),
+  weld: text('weld').notNull().default('groove'),
+  unit: unit(),
+  pNumberA: text('p_number_a'),
+  pNumberB: text('p_number_b'),
+  thickness: doublePrecision('thickness'),
+  outsideDiameter: doublePrecision('outside_diameter'),
+  positions: text('positions').array().notNull().default(sql`'{}'::text[]`),
+  progression: text('progression'),
+  backing: boolean('backing'),
+  // Required examinations: visual always; RT and UT as a percentage of joints, MT and PT yes or no
+  rtPercent: integer('rt_percent').notNull().default(0),
+  utPercent: integer('ut_percent').notNull().default(0),
+  mt: boolean('mt').notNull().default(false),
+  pt: boolean('pt').notNull().default(false),
+  procedureId: integer('procedure_id').references(() => procedures.id),
+  weldedOn: date('welded_on', { mode: 'string' }),
+  // The check as made when the joint was marked welded: per welder and process the answer and the lapse date on that day
+  completionCheck: jsonb('completion_check'),
+  version: integer('version').notNull().default(1),
+  createdBy: integer('created_by').references(() => accounts.id),
+  createdAt: created(),
+  updatedAt: updated(),
+}, t => [
+  uniqueIndex('joints_project_mark_key').on(t.projectId, t.mark),
+  index('joints_project_welded_idx').on(t.projectId, t.weldedOn),
+  index('joints_procedure_idx').on(t.procedureId),
+  check('joints_weld_check', sql`${t.weld} in ('groove', 'fillet')`),
+  check('joints_percent_check', sql`${t.rtPercent} between 0 and 100 and ${t.utPercent} between 0 and 100`),
+  check('joints_sizes_check', sql`coalesce(${t.thickness}, 1) > 0 and coalesce(${t.outsideDiameter}, 1) > 0`),
+  unitCheck('joints_unit_check', t.unit),
+])
+
+// Who welded a joint: one row per welder × process (and layer); `repair` 0 is the original weld, 1 is R1, 2 is R2...
+export const jointWelders = pgTable('joint_welders', {
+  id: serial('id').primaryKey(),
+  jointId: integer('joint_id').notNull().references(() => joints.id, { onDelete: 'cascade' }),
+  welderId: integer('welder_id').notNull().references(() => welders.id),
+  process: text('process').notNull(),
+  layer: text('layer'),
+  // The filler's F-No. this welder used for this process (a GTAW root and SMAW fill joint has one per process)
+  fNumber: integer('f_number'),
+  repair: integer('repair').notNull().default(0),
+}, t => [
+  index('joint_welders_joint_idx').on(t.jointId, t.repair),
+  index('joint_welders_welder_idx').on(t.welderId),
+  check('joint_welders_repair_check', sql`${t.repair} between 0 and 9`),
+])
+
+// Repairs of a joint, R1, R2...: the date the repair was welded (its welders are joint_welders with this `repair`).
+export const jointRepairs = pgTable('joint_repairs', {
+  id: serial('id').primaryKey(),
+  jointId: integer('joint_id').notNull().references(() => joints.id, { onDelete: 'cascade' }),
+  repair: integer('repair').notNull(),
+  cause: text('cause').notNull(),
+  weldedOn: date('welded_on', { mode: 'string' }),
+  createdAt: created(),
+}, t => [
+  uniqueIndex('joint_repairs_key').on(t.jointId, t.repair),
+  check('joint_repairs_repair_check', sql`${t.repair} between 1 and 9`),
+])
+
+// Examination results of a joint (of its original weld, `repair` 0, or of a repair).
+export const jointExaminations = pgTable('joint_examinations', {
+  id: serial('id').primaryKey(),
+  jointId: integer('joint_id').notNull().references(() => joints.id, { onDelete: 'cascade' }),
+  repair: integer('repair').notNull().default(0),
+  method: text('method').notNull(),
+  reportNumber: text('report_number'),
+  examinedOn: date('examined_on', { mode: 'string' }).notNull(),
+  accepted: boolean('accepted').notNull(),
+  // RT and UT: the length of weld examined, and of a rejected indication its type and length (in the joint's unit)
+  lengthExamined: doublePrecision('length_examined'),
+  defectType: text('defect_type'),
+  defectLength: doublePrecision('defect_length'),
+  recordedBy: integer('recorded_by').references(() => accounts.id),
+  createdAt: created(),
+}, t => [
+  index('joint_examinations_joint_idx').on(t.jointId, t.examinedOn),
+  check('joint_examinations_method_check', sql`${t.method} in ('VT', 'RT', 'UT', 'MT', 'PT')`),
+  check('joint_examinations_lengths_check', sql`coalesce(${t.lengthExamined}, 1) > 0 and coalesce(${t.defectLength}, 0) >= 0`),
+])
+
+// A refused check let through by a supervisor: the reasons refused, the written reason, who and when (printed in the packet).
+export const jointOverrides = pgTable('joint_overrides', {
+  id: serial('id').primaryKey(),
+  jointId: integer('joint_id').notNull().references(() => joints.id, { onDelete: 'cascade' }),
+  stage: text('stage').notNull(),
+  reason: text('reason').notNull(),
+  refusals: jsonb('refusals').notNull().default([]),
+  accountId: integer('account_id').notNull().references(() => accounts.id),
+  accountName: text('account_name').notNull(),
+  at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [
+  index('joint_overrides_joint_idx').on(t.jointId),
+  check('joint_overrides_stage_check', sql`${t.stage} in ('assignment', 'completion', 'repair')`),
+])
+
+// Per-shop API tokens for other shop systems: only the SHA-256 is stored; scoped; a fixed one-minute window counts uses.
+export const apiTokens = pgTable('api_tokens', {
+  id: serial('id').primaryKey(),
+  name: text('name').notNull(),
+  tokenHash: text('token_hash').notNull(),
+  // The first characters of the token, shown so a supervisor can tell tokens apart
+  prefix: text('prefix').notNull(),
+  scopes: text('scopes').array().notNull(),
+  createdBy: integer('created_by').notNull().references(() => accounts.id),
+  createdAt: created(),
+  revokedAt: timestamp('revoked_at', { withTimezone: true }),
+  lastUsedAt: timestamp('last_used_at', { withTimezone: true }),
+  windowStart: timestamp('window_start', { withTimezone: true }).notNull().defaultNow(),
+  windowCount: integer('window_count').notNull().default(0),
+}, t => [uniqueIndex('api_tokens_hash_key').on(t.tokenHash)])
+
+// The joint register as printed in a project's packet: the hash of its content and the code of its QR, so the public
+// verification page can tell whether the register has changed since it was issued.
+export const issuedRegisters = pgTable('issued_registers', {
+  id: serial('id').primaryKey(),
+  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
+  sha256: text('sha256').notNull(),
+  verifyCode: text('verify_code').notNull(),
+  issuedBy: integer('issued_by').references(() => accounts.id),
+  issuerName: text('issuer_name').notNull(),
+  issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+}, t => [
+  uniqueIndex('issued_registers_verify_code_key').on(t.verifyCode),
+  index('issued_registers_project_idx').on(t.projectId, t.sha256),
+  check('issued_registers_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
+])
+// ---- end weld-log ----

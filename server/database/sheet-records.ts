@@ -10,6 +10,7 @@ import { prequalifiedOf } from './procedures'
 import type { SessionUser } from '../utils/auth'
 import type { SheetSignature } from '../sheets/model'
 import { todayIso } from '../utils/today'
+import { jointCountOf } from './joints'
 
 // Everything the sheets, logs, packets and the verification page read: the builders in server/sheets/ are given
 // these rows and only lay them out.
@@ -207,6 +208,8 @@ export interface PacketPlan {
   pqrs: { id: number, number: string }[]
   welders: { id: number, name: string, stamp: string, testIds: number[], tests: { id: number, process: string, testDate: string }[] }[]
   processes: string[]
+  /** Joints in the project's weld register (the packet prints the register when there are any) */
+  registerJoints: number
 }
 
 /** What goes into a project's packet: its WPSs and their PQRs, its welders' certified tests up to the period's end. */
@@ -237,6 +240,7 @@ export async function packetPlan(db: Db, projectId: number): Promise<PacketPlan 
     pqrs: [...new Map(support.map(s => [s.pqrId, { id: s.pqrId, number: s.number }])).values()],
     // Every process of every layer of the project's WPSs (a GTAW root, SMAW fill WPS needs both held).
     processes: [...new Set(procs.flatMap(p => (p.processes?.length ? p.processes : [p.process])))].sort(),
+    registerJoints: await jointCountOf(db, projectId),
   }
 }
 

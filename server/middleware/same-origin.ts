@@ -4,6 +4,8 @@ const mutating = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
 
 export default defineEventHandler((event) => {
   if (!mutating.has(event.method) || !event.path.startsWith('/api/') || event.path.startsWith('/api/auth/')) return
+  // Routes for other shop systems take only a bearer token, never the session cookie, so a cross-site page cannot ride them.
+  if (event.path.startsWith('/api/ext/')) return
   const origin = getRequestHeader(event, 'origin')
   let host: string | undefined
   try {

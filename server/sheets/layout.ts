@@ -214,7 +214,7 @@ export interface Furniture {
   documentLine: string | null
 }
 
-const shortKind = { wps: 'WPS', pqr: 'PQR', wpq: 'WPQ', continuity: 'Continuity log' } as const
+const shortKind = { wps: 'WPS', pqr: 'PQR', wpq: 'WPQ', continuity: 'Continuity log', register: 'Weld register' } as const
 
 /** "WPS KB-W02 rev. 1", but "PQR-K101" rather than "PQR PQR-K101". */
 export function labelled(kind: string, reference: string) {

@@ -80,7 +80,7 @@ function coverContent({ plan, shop, entries, gaps, preparedBy, preparedOn }: Pac
 const genericCaution = 'Rootface helps; it does not qualify anyone. Each sheet names the code edition its ranges follow; the governing code '
   + 'edition, the shop\'s quality manual, the contract and the Authorized Inspector or certified welding inspector have the final word.'
 
-const shortKinds = { wps: 'WPS', pqr: 'PQR', wpq: 'WPQ', continuity: 'Continuity log' } as const
+const shortKinds = { wps: 'WPS', pqr: 'PQR', wpq: 'WPQ', continuity: 'Continuity log', register: 'Weld register' } as const
 
 function indexContent(entries: PacketEntry[]) {
   const body: unknown[][] = [[

@@ -7,11 +7,12 @@ import type { PacketDocumentInput, PacketEntry } from './packet-document'
 import { renderPacket } from './packet-render'
 import { continuityLogSheet, pqrSheetOf, procedureSheet, welderTestSheet } from './sheets'
 import { todayIso } from '../utils/today'
+import { jointRegisterSheet } from './packet-joints'
 
 export { packetPlan, type PacketPlan } from '../database/sheet-records'
 
 export function sheetCount(plan: PacketPlan) {
-  return plan.procedureIds.length + plan.pqrIds.length + plan.welders.reduce((n, w) => n + w.testIds.length + 1, 0)
+  return plan.procedureIds.length + plan.pqrIds.length + plan.welders.reduce((n, w) => n + w.testIds.length + 1, 0) + (plan.registerJoints ? 1 : 0)
 }
 
 export interface WelderGap extends Gap { welder: string, stamp: string }
@@ -46,6 +47,7 @@ export async function buildPacket(db: Db, plan: PacketPlan, user: Pick<SessionUs
     for (const id of w.testIds) await add(await welderTestSheet(db, id, origin), `${w.name} (${w.stamp})`)
     await add(await continuityLogSheet(db, w.id, plan.period, user, origin), `${w.name} (${w.stamp})`)
   }
+  await add(await jointRegisterSheet(db, plan, user, origin), 'Weld register')
   const modelsDone = performance.now()
   const gaps = await gapsOfProject(db, plan)
   const shop = await shopName(db)

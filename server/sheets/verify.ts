@@ -4,6 +4,7 @@ import { contentFormatOf, contentHash, type SignedRecordType } from '../database
 import { issuedSheetByCode, recordHead, signatureByCode, signersOf, welderOf } from '../database/sheet-records'
 import { missing, type Outcome } from '../../shared/types/outcome'
 import { loadContinuityLog } from './continuity-log'
+import { verifyRegister } from './packet-joints'
 
 export interface Verification {
   code: string
@@ -30,7 +31,7 @@ export async function verifyCode(db: Db, code: string): Promise<Outcome<Verifica
   const signature = await signatureByCode(db, code)
   if (signature) return await verifySigned(db, code, signature) ?? missing('Sheet with this code')
   const issue = await issuedSheetByCode(db, code)
-  if (!issue) return missing('Sheet with this code')
+  if (!issue) return await verifyRegister(db, code) ?? missing('Sheet with this code')
   const welder = await welderOf(db, issue.welderId)
   const log = await loadContinuityLog(db, issue.welderId, { from: issue.periodFrom, to: issue.periodTo })
   return {

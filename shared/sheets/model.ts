@@ -4,7 +4,7 @@ import type { Unit } from '../rules/types'
  * What a sheet says, independent of how it is drawn: the PDF builder and the read-only record view both render it,
  * so the screen and the paper never disagree.
  */
-export type SheetKind = 'wps' | 'pqr' | 'wpq' | 'continuity'
+export type SheetKind = 'wps' | 'pqr' | 'wpq' | 'continuity' | 'register'
 
 export interface SheetField {
   label: string

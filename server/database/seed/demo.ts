@@ -19,6 +19,7 @@ import {
 } from './demo-data'
 import { seedStructuralDemo } from './demo-structural'
 import { seedQualityB } from './demo-quality-b'
+import { seedDemoWeldLog } from './demo-weld-log'
 
 const day = (today: Date, daysAgo: number) => format(subDays(today, daysAgo), 'yyyy-MM-dd')
 
@@ -137,6 +138,7 @@ export async function seedDemoShop(db: Db, today = new Date()): Promise<boolean>
     }
 
     await seedStructuralDemo(tx as unknown as Db, { supervisorId: supervisor.id, inspectorId: inspector.id, welderId: welderId.get('KB-05')!, today })
+    await seedDemoWeldLog(tx as unknown as Db, today)
 
     // Sign what the demo shows as approved or certified, over the content as stored.
     const toSign: { type: SignedRecordType, id: number, meaning: 'approved' | 'certified', signer: typeof supervisor }[] = [
