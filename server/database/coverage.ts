@@ -1,36 +1,86 @@
 import { sql } from 'drizzle-orm'
 import type { Db } from './client'
-import type { CandidateRow, ProcedureRow, TestRow } from '../../shared/qualification/joint-coverage'
+import { performance } from 'node:perf_hooks'
+import { judgeProcedures, judgeWelders, type CandidateRow, type ProcedureRow, type ResolvedJoint, type TestRow } from '../../shared/qualification/joint-coverage'
+import { rangeFilterPlan } from '../../shared/qualification/range-filters'
 import type { CodeId } from '../../shared/rules/types'
 import { refreshStandings } from './standings'
+import { coverageTestColumns, droppedSql, parseArray, refreshQualifiedRanges } from './qualified-ranges'
 
 type Rows<T> = { rows: T[] }
 
+// How many welders the answer lists as not covered (with their findings); the count is always whole.
+export const notCoveredListed = 100
+
+export interface CoverageCandidates {
+  procedures: ProcedureRow[]
+  /** The welders to judge with the rules, in stamp order. */
+  welders: CandidateRow[]
+  /** Every active welder with a certified test of the process (those not in `welders` are not covered). */
+  candidateCount: number
+  /** Welders the stored ranges showed not covered before the rules ran. */
+  ruledOut: number
+}
+
+export interface CoverageOptions {
+  /** Filter on the stored qualified ranges first (default true). */
+  prefilter?: boolean
+  /** How many welders not covered the answer lists (default `notCoveredListed`). */
+  listed?: number
+}
+
 /**
- * The candidates for "who can weld this joint?": the approved WPSs with a layer of the process, and every certified test of it
- * (a combination coupon with that process's own deposit, QW-452.1(b)) by an
- * active welder (flat rows, newest first) joined with that welder's kept standing for the process (process_standings,
- * brought up to date first), so continuity is not re-read here. Flat rows, no per-row JSON.
+ * The candidates for "who can weld this joint?": the approved WPSs with a layer of the process, and the active welders with
+ * a certified test of it (a combination coupon with that process's own deposit, QW-452.1(b)) joined with their kept standing
+ * for the process (process_standings, brought up to date first), so continuity is not re-read here.
+ *
+ * With `prefilter` (the default) the stored qualified ranges (qualified_ranges, brought up to date first) drop in SQL every
+ * test the joint's code rules would find not covered on a stated variable; a welder is fetched in full (all their tests of
+ * the process) when one test survives, and the first `notCoveredListed` welders without a survivor are fetched too, so the
+ * answer's list of welders not covered stays the one the full evaluation gives. Without it every candidate is fetched.
  */
-export async function coverageCandidates(db: Db, process: string): Promise<{ procedures: ProcedureRow[], welders: CandidateRow[] }> {
+export async function coverageCandidates(db: Db, joint: ResolvedJoint, options: CoverageOptions = {}): Promise<CoverageCandidates> {
+  const process = joint.process
   await refreshStandings(db)
   const procedures = await db.execute(sql`
     select id, number, revision, title, code, edition, unit, ${process}::text as process,
            coalesce((select l->>'transfer' from jsonb_array_elements(layers) l where l->>'process' = ${process} limit 1), transfer) as transfer,
            p_number_a, p_number_b, thickness_min, thickness_max, diameter_min, positions, f_numbers
     from procedures where status = 'approved' and (process = ${process} or ${process} = any(processes)) order by number, revision`) as unknown as Rows<ProcedureRow>
+  let only = sql``
+  let candidateCount: number | undefined
+  let ruledOut = 0
+  if (options.prefilter !== false) {
+    await refreshQualifiedRanges(db)
+    const picked = await db.execute(sql`
+      with c as (
+        select t.welder_id, w.stamp, bool_or(not ${droppedSql(rangeFilterPlan(joint))}) as hit
+        from welder_tests t
+          join welders w on w.id = t.welder_id and w.status = 'active'
+          join process_standings s on s.welder_id = t.welder_id and s.process = ${process}
+          left join qualified_ranges r on r.test_id = t.id and r.process = ${process}
+        where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes))
+        group by t.welder_id, w.stamp),
+      n as (select count(*)::int as total from c)
+      select welder_id, true as hit, (select total from n) as total from c where hit
+      union all
+      (select welder_id, false, (select total from n) as total from c where not hit order by stamp limit ${options.listed ?? notCoveredListed})
+      union all
+      select null, null, total from n`) as unknown as Rows<{ welder_id: number | null, hit: boolean | null, total: number }>
+    candidateCount = Number(picked.rows[0]?.total ?? 0)
+    ruledOut = candidateCount - picked.rows.filter(r => r.hit === true).length
+    const ids = picked.rows.filter(r => r.welder_id !== null).map(r => Number(r.welder_id))
+    only = sql`and t.welder_id = any(${`{${ids.join(',')}}`}::int[])`
+  }
   const tests = await db.execute(sql`
-    select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, ${process}::text as process,
-           case when d.e is null then t.transfer else d.e->>'transfer' end as transfer, t.form, t.weld, t.coupon_thickness,
-           case when d.e is null then t.deposit_thickness else (d.e->>'depositThickness')::float8 end as deposit_thickness, t.layers,
-           t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions, t.progression,
+    select ${coverageTestColumns(sql`${process}::text`)}, t.welder_id,
            w.name, w.stamp, s.code as chain_code, s.edition as chain_edition, s.test_date::text as chain_test_date,
            s.last_use::text as chain_last_use, s.lapses_on::text as chain_lapses_on, s.rule as chain_rule
     from welder_tests t
       join welders w on w.id = t.welder_id
       join process_standings s on s.welder_id = t.welder_id and s.process = ${process}
       left join lateral (select e from jsonb_array_elements(t.deposits) e where e->>'process' = ${process} limit 1) d on true
-    where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes)) and w.status = 'active'
+    where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes)) and w.status = 'active' ${only}
     order by w.stamp, t.test_date desc, t.id desc`) as unknown as Rows<TestRow & Record<'name' | 'stamp' | `chain_${'code' | 'edition' | 'test_date' | 'last_use' | 'lapses_on' | 'rule'}`, string> & { welder_id: number }>
 
   const welders = new Map<number, CandidateRow>()
@@ -41,12 +91,47 @@ export async function coverageCandidates(db: Db, process: string): Promise<{ pro
     candidate.tests.push({ ...test, positions: parseArray(test.positions) })
     welders.set(id, candidate)
   }
-  return { procedures: procedures.rows.map(p => ({ ...p, positions: parseArray(p.positions), f_numbers: parseArray(p.f_numbers) })), welders: [...welders.values()] }
+  return {
+    procedures: procedures.rows.map(p => ({ ...p, positions: parseArray(p.positions), f_numbers: parseArray(p.f_numbers) })),
+    welders: [...welders.values()],
+    candidateCount: candidateCount ?? welders.size,
+    ruledOut,
+  }
 }
 
-/** node-postgres and PGlite both return text[] as arrays; a literal '{a,b}' is parsed for safety. */
-function parseArray(value: string[] | string | null): string[] {
-  if (Array.isArray(value)) return value
-  if (!value || value === '{}') return []
-  return value.replace(/^\{|\}$/g, '').split(',').map(s => s.replace(/^"|"$/g, ''))
+/**
+ * Who can weld this joint today: the approved WPSs that cover it and the active welders whose certified tests cover it and
+ * who are current, each with the findings behind the answer. The rules judge only the candidates the stored ranges leave
+ * (see coverageCandidates); `prefilter: false` judges every candidate (the property test compares the two).
+ */
+export async function whoCanWeld(db: Db, joint: ResolvedJoint, today: string, options: CoverageOptions = {}) {
+  const started = performance.now()
+  const rows = await coverageCandidates(db, joint, options)
+  const queried = performance.now()
+  const procedures = judgeProcedures(rows.procedures, joint)
+  const welders = judgeWelders(rows.welders, joint, today)
+  const judged = performance.now()
+  const timing = { queryMs: Math.round((queried - started) * 10) / 10, rulesMs: Math.round((judged - queried) * 10) / 10, candidates: rows.welders.length, ruledOut: rows.ruledOut }
+  const lapsed = welders.filter(w => w.covered && !w.current)
+  const notCovered = welders.filter(w => w.answer === 'not-covered')
+  const undecided = welders.filter(w => w.answer === 'cannot-tell')
+  // Welders the stored ranges left out are not covered; they are counted, and the first of them judged for the list.
+  const notCoveredCount = rows.candidateCount - welders.filter(w => w.answer !== 'not-covered').length
+  return {
+    today, joint, timing,
+    procedures: procedures.sort((a, b) => Number(b.covered) - Number(a.covered)),
+    welders: {
+      // Covered and current today: may weld it (with a WPS that covers it)
+      able: welders.filter(w => w.covered && w.current),
+      // Covered by their tests, but the process has lapsed: renewal needed first (names and dates only)
+      lapsed: lapsed.slice(0, 100).map(({ id, name, stamp, standing }) => ({ id, name, stamp, standing })),
+      lapsedCount: lapsed.length,
+      // Tested in the process but no test covers the joint: the findings that are not met
+      notCovered: notCovered.slice(0, options.listed ?? notCoveredListed).map(w => ({ ...w, reasons: w.reasons.filter(r => r.state === 'not-met' || (r.state === undefined && !r.met)) })),
+      notCoveredCount,
+      // A variable the joint states was not recorded on their tests (or the reverse): cannot tell until it is recorded
+      undecided: undecided.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => !r.met) })),
+      undecidedCount: undecided.length,
+    },
+  }
 }
