@@ -128,4 +128,19 @@ describe('"Who can weld it?" on the stored qualified ranges', () => {
     const short = resolveJoint(jointSchema.parse({ process: 'SMAW', positions: 'F', weld: 'groove', form: 'plate', code: 'asme-ix', unit: 'in' })) as ResolvedJoint
     expect((await whoCanWeld(database.db, short, today)).welders.undecidedCount).toBeGreaterThan(0)
   })
+
+  it('rows of another rules version are not trusted until derived again, then filter again', async () => {
+    const db = database.db
+    const joint = resolveJoint(jointSchema.parse({ process: 'GMAW', positions: 'V', weld: 'groove', form: 'plate', thickness: 0.25, unit: 'in', fNumber: 6 })) as ResolvedJoint
+    const full = withoutTiming(await whoCanWeld(db, joint, today, { prefilter: false }))
+    // As an older release might have left them: stamped with another version and saying the test qualifies nothing.
+    await db.execute(sql`update qualified_ranges set rules_version = rules_version - 1, positions_groove = '{}', positions_groove_pipe = '{}', positions_fillet = '{}', deposit_max_micro = 1`)
+    const stale = await whoCanWeld(db, joint, today)
+    expect(stale.timing.ruledOut).toBe(0)
+    expect(withoutTiming(stale)).toEqual(full)
+    expect(await recomputeStaleQualifiedRanges(db)).toBeGreaterThan(0)
+    const fresh = await whoCanWeld(db, joint, today)
+    expect(fresh.timing.ruledOut).toBeGreaterThan(0)
+    expect(withoutTiming(fresh)).toEqual(full)
+  })
 })
