@@ -5,7 +5,8 @@ import type { SessionUser } from '../utils/auth'
 import { loadContinuityLog, type Period } from './continuity'
 import { continuitySheet } from './continuity-sheet'
 import { verifyUrl } from './common'
-import { documentBase, labelled, PageTracker, sheetSection } from './layout'
+import { labelled } from './layout'
+import { sheetDefinition } from './sheet-document'
 import { sheetReference, type SheetModel } from './model'
 import { renderPdf } from './pdf'
 import { pqrSheet } from './pqr'
@@ -83,12 +84,9 @@ export async function projectPeriod(db: Db, projectId: number): Promise<Period |
 }
 
 export async function renderSheet(sheet: SheetModel) {
-  const tracker = new PageTracker()
+  const { definition, tracker } = sheetDefinition(sheet)
   const started = performance.now()
-  const pdf = await renderPdf({
-    ...documentBase(`${sheet.kindTitle} ${sheetReference(sheet)}`, sheet.shopName),
-    content: [sheetSection(sheet, 0, tracker, { shopName: sheet.shopName, documentLine: null })],
-  })
+  const pdf = await renderPdf(definition)
   return { pdf, pageCount: tracker.total, ms: Math.round(performance.now() - started) }
 }
 
