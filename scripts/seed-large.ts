@@ -10,7 +10,7 @@ import { openDatabase, type Db } from '../server/database/client'
 import * as t from '../server/database/schema'
 import { seedDemoShop } from '../server/database/seed/demo'
 import { refreshStandings } from '../server/database/standings'
-import { recomputeStaleQualifiedRanges } from '../server/database/qualified-ranges'
+import { analyzeTables, recomputeStaleQualifiedRanges } from '../server/database/qualified-ranges'
 import { qualifiedRangesOf } from '../shared/qualification/test-ranges'
 
 export const largeShop = { welders: 2000, tests: 10_000, continuity: 200_000, procedures: 500, pqrs: 300, projects: 200 }
@@ -138,6 +138,7 @@ if (isMain) {
     await seedLargeShop(database.db, new Date(), Number(process.env.BENCH_SCALE ?? 1))
     await refreshStandings(database.db) // so the first request is not the one that computes 8,000 chains
     await recomputeStaleQualifiedRanges(database.db) // and not the one that derives 10,000 tests' ranges
+    await analyzeTables(database.db) // the planner's statistics (PGlite runs no autovacuum)
   }
   finally {
     await database.close()

@@ -47,45 +47,42 @@ export async function coverageCandidates(db: Db, joint: ResolvedJoint, options: 
            coalesce((select l->>'transfer' from jsonb_array_elements(layers) l where l->>'process' = ${process} limit 1), transfer) as transfer,
            p_number_a, p_number_b, thickness_min, thickness_max, diameter_min, positions, f_numbers
     from procedures where status = 'approved' and (process = ${process} or ${process} = any(processes)) order by number, revision`) as unknown as Rows<ProcedureRow>
-  let only = sql``
-  let candidateCount: number | undefined
-  let ruledOut = 0
-  if (options.prefilter !== false) {
-    await refreshQualifiedRanges(db)
-    const picked = await db.execute(sql`
-      with c as (
-        select t.welder_id, w.stamp, bool_or(not ${droppedSql(rangeFilterPlan(joint))}) as hit
-        from welder_tests t
-          join welders w on w.id = t.welder_id and w.status = 'active'
-          join process_standings s on s.welder_id = t.welder_id and s.process = ${process}
+  const prefilter = options.prefilter !== false
+  if (prefilter) await refreshQualifiedRanges(db)
+  const candidates = sql`
+    from welder_tests t
+      join welders w on w.id = t.welder_id and w.status = 'active'
+      join process_standings s on s.welder_id = t.welder_id and s.process = ${process}`
+  const ofProcess = sql`t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes))`
+  // One statement: with the prefilter, `c` says per welder whether a test survives the stored ranges; the welders fetched
+  // are the survivors and the first listed others (at least one, so the count comes back with a row).
+  const picked = prefilter
+    ? sql`with c as (
+        select t.welder_id, w.stamp, bool_or(not ${droppedSql(rangeFilterPlan(joint))}) as hit ${candidates}
           left join qualified_ranges r on r.test_id = t.id and r.process = ${process}
-        where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes))
-        group by t.welder_id, w.stamp),
-      n as (select count(*)::int as total from c)
-      select welder_id, true as hit, (select total from n) as total from c where hit
-      union all
-      (select welder_id, false, (select total from n) as total from c where not hit order by stamp limit ${options.listed ?? notCoveredListed})
-      union all
-      select null, null, total from n`) as unknown as Rows<{ welder_id: number | null, hit: boolean | null, total: number }>
-    candidateCount = Number(picked.rows[0]?.total ?? 0)
-    ruledOut = candidateCount - picked.rows.filter(r => r.hit === true).length
-    const ids = picked.rows.filter(r => r.welder_id !== null).map(r => Number(r.welder_id))
-    only = sql`and t.welder_id = any(${`{${ids.join(',')}}`}::int[])`
-  }
-  const tests = await db.execute(sql`
+        where ${ofProcess} group by t.welder_id, w.stamp),
+      picked as (
+        select welder_id from c where hit
+        union all
+        (select welder_id from c where not hit order by stamp limit ${Math.max(1, options.listed ?? notCoveredListed)}))`
+    : sql``
+  const tests = await db.execute(sql`${picked}
     select ${coverageTestColumns(sql`${process}::text`)}, t.welder_id,
            w.name, w.stamp, s.code as chain_code, s.edition as chain_edition, s.test_date::text as chain_test_date,
            s.last_use::text as chain_last_use, s.lapses_on::text as chain_lapses_on, s.rule as chain_rule
-    from welder_tests t
-      join welders w on w.id = t.welder_id
-      join process_standings s on s.welder_id = t.welder_id and s.process = ${process}
+           ${prefilter ? sql`, (select count(*) from c)::int as candidate_total, (select count(*) from c where hit)::int as survivors` : sql``}
+    ${candidates}
+      ${prefilter ? sql`join picked p on p.welder_id = t.welder_id` : sql``}
       left join lateral (select e from jsonb_array_elements(t.deposits) e where e->>'process' = ${process} limit 1) d on true
-    where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes)) and w.status = 'active' ${only}
-    order by w.stamp, t.test_date desc, t.id desc`) as unknown as Rows<TestRow & Record<'name' | 'stamp' | `chain_${'code' | 'edition' | 'test_date' | 'last_use' | 'lapses_on' | 'rule'}`, string> & { welder_id: number }>
+    where ${ofProcess}
+    order by w.stamp, t.test_date desc, t.id desc`) as unknown as Rows<TestRow & Record<'name' | 'stamp' | `chain_${'code' | 'edition' | 'test_date' | 'last_use' | 'lapses_on' | 'rule'}`, string> & { welder_id: number, candidate_total?: number, survivors?: number }>
+  const first = tests.rows[0]
+  const candidateCount = prefilter ? Number(first?.candidate_total ?? 0) : undefined
+  const ruledOut = prefilter ? Number(first?.candidate_total ?? 0) - Number(first?.survivors ?? 0) : 0
 
   const welders = new Map<number, CandidateRow>()
   for (const row of tests.rows) {
-    const { welder_id: welderId, name, stamp, chain_code: code, chain_edition: edition, chain_test_date: testDate, chain_last_use: lastUse, chain_lapses_on: lapsesOn, chain_rule: rule, ...test } = row
+    const { welder_id: welderId, candidate_total: _total, survivors: _survivors, name, stamp, chain_code: code, chain_edition: edition, chain_test_date: testDate, chain_last_use: lastUse, chain_lapses_on: lapsesOn, chain_rule: rule, ...test } = row
     const id = Number(welderId)
     const candidate = welders.get(id) ?? { id, name, stamp, tests: [], chain: { process, code: code as CodeId, edition, testDate, lastUse, lapsesOn, rule } }
     candidate.tests.push({ ...test, positions: parseArray(test.positions) })
