@@ -14,6 +14,7 @@ import { openDatabase, type Db } from '../server/database/client'
 import { lapseListQuery } from '../server/database/standings'
 import pg from 'pg'
 import { coverageCandidates } from '../server/database/coverage'
+import { analyzeTables } from '../server/database/qualified-ranges'
 import { resolveJoint, type ResolvedJoint } from '../shared/qualification/joint-coverage'
 import { jointSchema } from '../shared/schemas/coverage'
 import { type Client, freePort, signedIn } from '../tests/api/harness'
@@ -204,6 +205,7 @@ async function benchOn(target: Target) {
   const direct = await prepared.open()
   const counts = (await direct.db.execute<{ welders: number, tests: number, continuity: number }>(sql`select
     (select count(*) from welders)::int as welders, (select count(*) from welder_tests)::int as tests, (select count(*) from continuity_entries)::int as continuity`)).rows[0]!
+  await analyzeTables(direct.db) // as the server does at start-up on PGlite (a PostgreSQL server keeps its own statistics)
   const floors = await sqlFloors(direct.db)
   const packetProject = (await direct.db.execute<{ id: number }>(sql`select id from projects where number = 'LP-0001'`)).rows[0]?.id
   const sheetTest = (await direct.db.execute<{ id: number }>(sql`select id from welder_tests where status = 'certified' order by id limit 1`)).rows[0]?.id
