@@ -56,11 +56,25 @@ export async function coverageCandidates(db: Db, joint: ResolvedJoint, options: 
   const ofProcess = sql`t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes))`
   // One statement: with the prefilter, `c` says per welder whether a test survives the stored ranges; the welders fetched
   // are the survivors and the first listed others (at least one, so the count comes back with a row).
+  // The stored rows exist for every certified test (refreshed just above, in the same transaction as the queue is emptied);
+  // a test marked since then waits in the queue, and its welder is fetched and counted whatever the rows say.
   const picked = prefilter
-    ? sql`with c as (
-        select t.welder_id, w.stamp, bool_or(not ${droppedSql(rangeFilterPlan(joint))}) as hit ${candidates}
-          left join qualified_ranges r on r.test_id = t.id and r.process = ${process}
-        where ${ofProcess} group by t.welder_id, w.stamp),
+    ? sql`with ranged as (
+        select r.welder_id, w.stamp, bool_or(not ${droppedSql(rangeFilterPlan(joint))}) as hit
+        from qualified_ranges r
+          join welders w on w.id = r.welder_id and w.status = 'active'
+          join process_standings s on s.welder_id = r.welder_id and s.process = ${process}
+        where r.process = ${process}
+        group by r.welder_id, w.stamp),
+      queued as (
+        select distinct t.welder_id, w.stamp from qualified_ranges_refresh q join welder_tests t on t.id = q.test_id
+          join welders w on w.id = t.welder_id and w.status = 'active'
+          join process_standings s on s.welder_id = t.welder_id and s.process = ${process}
+        where ${ofProcess}),
+      c as (
+        select welder_id, stamp, hit from ranged where welder_id not in (select welder_id from queued)
+        union all
+        select welder_id, stamp, true from queued),
       picked as (
         select welder_id from c where hit
         union all
