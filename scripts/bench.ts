@@ -1,6 +1,8 @@
 // npm run bench: builds the app, fills (once) a large invented shop, starts the built server on a copy of it,
 // and prints one table: each operation's median and p95 latency and requests per second at 1 and 10
 // connections, beside its floor measured in the same run, and the target. Ratios hold; absolute times drift.
+// BENCH_SCALE=10 fills a shop ten times the size (20,000 welders); BENCH_DATABASE_URL=postgres://user@host:port/db names
+// a PostgreSQL server on which the same table is measured in the same run, beside the embedded database.
 import { spawn, spawnSync } from 'node:child_process'
 import { cpSync, existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
@@ -10,13 +12,22 @@ import { addDays, format } from 'date-fns'
 import { sql } from 'drizzle-orm'
 import { openDatabase, type Db } from '../server/database/client'
 import { lapseListQuery } from '../server/database/standings'
+import pg from 'pg'
 import { coverageCandidates } from '../server/database/coverage'
 import { listJoints } from '../server/database/joints'
 import { jointListQuerySchema } from '../shared/schemas/joints'
+import { analyzeTables } from '../server/database/qualified-ranges'
+import { resolveJoint, type ResolvedJoint } from '../shared/qualification/joint-coverage'
+import { jointSchema } from '../shared/schemas/coverage'
 import { type Client, freePort, signedIn } from '../tests/api/harness'
 
 const output = resolve('.output-bench')
-const largeDir = resolve(process.env.BENCH_DATA_DIR ?? '.data/large')
+const scale = Number(process.env.BENCH_SCALE ?? 1)
+const largeDir = resolve(process.env.BENCH_DATA_DIR ?? (scale === 1 ? '.data/large' : `.data/large-x${scale}`))
+const serverUrl = process.env.BENCH_DATABASE_URL || undefined
+// The joint asked in the coverage row (its query string, and parsed for the SQL floor).
+const jointQuery = 'process=GMAW&pNumber=1&thickness=0.25&form=plate&weld=groove&position=V&fNumber=6'
+const benchJoint = resolveJoint(jointSchema.parse(Object.fromEntries(new URLSearchParams(jointQuery)))) as ResolvedJoint
 const seconds = Number(process.env.BENCH_SECONDS ?? 4)
 const today = format(new Date(), 'yyyy-MM-dd')
 const in30 = format(addDays(new Date(), 30), 'yyyy-MM-dd')
@@ -83,7 +94,7 @@ function get(client: Client, path: string, expectType?: string) {
 async function sqlFloors(db: Db) {
   return {
     lapses: await measure(async () => { await lapseListQuery(db, today, in30) }, { connections10: false }),
-    coverage: await measure(async () => { await coverageCandidates(db, 'GMAW') }, { connections10: false }),
+    coverage: await measure(async () => { await coverageCandidates(db, benchJoint) }, { connections10: false }),
   }
 }
 
@@ -124,16 +135,79 @@ async function packetSeconds(client: Client, projectId: number) {
   return { seconds: (performance.now() - started) / 1000, pages }
 }
 
-async function main() {
-  run('build', 'npx', ['nuxt', 'build'], { NUXT_BUILD_DIR: '.nuxt-bench', NUXT_OUTPUT_DIR: output })
-  if (!existsSync(join(largeDir, 'db'))) run('seed:large', process.execPath, ['node_modules/tsx/dist/cli.mjs', 'scripts/seed-large.ts'], { NUXT_DATA_DIR: join(largeDir, 'db') })
-  const work = mkdtempSync(join(tmpdir(), 'rootface-bench-'))
-  cpSync(join(largeDir, 'db'), join(work, 'db'), { recursive: true })
+interface Target {
+  name: 'PGlite' | 'PostgreSQL'
+  /** Opens the database the server will use (a fresh copy of the seeded shop) and the server's environment for it. */
+  prepare: () => Promise<{ env: Record<string, string>, open: () => Promise<Awaited<ReturnType<typeof openDatabase>>>, cleanup: () => Promise<void> }>
+}
 
-  // The floor of the two queries: the same SQL through the driver, before the server holds the directory.
-  const direct = await openDatabase({ dataDir: join(work, 'db'), holder: 'npm run bench' })
+const seedEnv = { BENCH_SCALE: String(scale) }
+
+function pglite(): Target {
+  return {
+    name: 'PGlite',
+    prepare: async () => {
+      if (!existsSync(join(largeDir, 'db'))) run('seed:large (PGlite)', process.execPath, ['node_modules/tsx/dist/cli.mjs', 'scripts/seed-large.ts'], { ...seedEnv, NUXT_DATA_DIR: join(largeDir, 'db'), DATABASE_URL: '' })
+      const work = mkdtempSync(join(tmpdir(), 'rootface-bench-'))
+      cpSync(join(largeDir, 'db'), join(work, 'db'), { recursive: true })
+      return {
+        env: { NUXT_DATA_DIR: join(work, 'db'), DATABASE_URL: '' },
+        open: () => openDatabase({ dataDir: join(work, 'db'), holder: 'npm run bench' }),
+        cleanup: async () => rmSync(work, { recursive: true, force: true }),
+      }
+    },
+  }
+}
+
+/** The seeded shop is kept as its own database on the server (seeded once per scale); each run works on a copy made from it as a template. */
+function postgres(url: string): Target {
+  const named = (db: string) => {
+    const u = new URL(url)
+    u.pathname = `/${db}`
+    return u.toString()
+  }
+  const seeded = `rootface_large_x${String(scale).replace('.', '_')}`
+  const copy = `rootface_bench_${process.pid}`
+  const admin = async <T>(work: (client: pg.Client) => Promise<T>) => {
+    const client = new pg.Client({ connectionString: url })
+    await client.connect()
+    try {
+      return await work(client)
+    }
+    finally {
+      await client.end()
+    }
+  }
+  return {
+    name: 'PostgreSQL',
+    prepare: async () => {
+      const exists = await admin(c => c.query('select 1 from pg_database where datname = $1', [seeded]))
+      if (!exists.rowCount) {
+        await admin(c => c.query(`create database ${seeded}`))
+        run('seed:large (PostgreSQL)', process.execPath, ['node_modules/tsx/dist/cli.mjs', 'scripts/seed-large.ts'], { ...seedEnv, DATABASE_URL: named(seeded) })
+      }
+      await admin(c => c.query(`create database ${copy} template ${seeded}`))
+      return {
+        env: { DATABASE_URL: named(copy), NUXT_DATA_DIR: join(tmpdir(), `rootface-bench-unused-${process.pid}`) },
+        open: () => openDatabase({ databaseUrl: named(copy), dataDir: '', holder: 'npm run bench' }),
+        cleanup: async () => {
+          await admin(c => c.query(`drop database if exists ${copy} with (force)`))
+          rmSync(join(tmpdir(), `rootface-bench-unused-${process.pid}`), { recursive: true, force: true })
+        },
+      }
+    },
+  }
+}
+
+interface Row { op: string, stats: Stats, floorName: string, floor: Stats, target: string, ok: (s: Stats, f: Stats) => boolean }
+
+async function benchOn(target: Target) {
+  const prepared = await target.prepare()
+  // The floor of the two queries: the same SQL through the driver, before the server holds the database.
+  const direct = await prepared.open()
   const counts = (await direct.db.execute<{ welders: number, tests: number, continuity: number }>(sql`select
     (select count(*) from welders)::int as welders, (select count(*) from welder_tests)::int as tests, (select count(*) from continuity_entries)::int as continuity`)).rows[0]!
+  await analyzeTables(direct.db) // as the server does at start-up on PGlite (a PostgreSQL server keeps its own statistics)
   const floors = await sqlFloors(direct.db)
   const packetProject = (await direct.db.execute<{ id: number }>(sql`select id from projects where number = 'LP-0001'`)).rows[0]?.id
   const sheetTest = (await direct.db.execute<{ id: number }>(sql`select id from welder_tests where status = 'certified' order by id limit 1`)).rows[0]?.id
@@ -150,7 +224,7 @@ async function main() {
   const port = await freePort()
   const base = `http://127.0.0.1:${port}`
   const server = spawn(process.execPath, [join(output, 'server/index.mjs')], {
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: join(work, 'db'), DATABASE_URL: '', AUTH_ORIGIN: `${base}/api/auth`, AUTH_SECRET: 'bench-secret-for-rootface-load-measurements' },
+    env: { ...process.env, ...prepared.env, PORT: String(port), HOST: '127.0.0.1', AUTH_ORIGIN: `${base}/api/auth`, AUTH_SECRET: 'bench-secret-for-rootface-load-measurements' },
     stdio: ['ignore', 'ignore', 'inherit'],
   })
   try {
@@ -164,15 +238,14 @@ async function main() {
     }
     const supervisor = await signedIn(base, 'supervisor')
     const welder = await signedIn(base, 'welder')
-    const joint = '/api/coverage?process=GMAW&pNumber=1&thickness=0.25&form=plate&weld=groove&position=V&fNumber=6'
 
-    const rows: { op: string, stats: Stats, floorName: string, floor: Stats, target: string, ok: (s: Stats, f: Stats) => boolean }[] = []
-    const push = (op: string, stats: Stats, floorName: string, floor: Stats, target: string, ok: (s: Stats, f: Stats) => boolean) => {
-      rows.push({ op, stats, floorName, floor, target, ok })
-      console.error(`measured ${op}`)
+    const rows: Row[] = []
+    const push = (op: string, stats: Stats, floorName: string, floor: Stats, targetText: string, ok: (s: Stats, f: Stats) => boolean) => {
+      rows.push({ op, stats, floorName, floor, target: targetText, ok })
+      console.error(`${target.name}: measured ${op}`)
     }
     const health = await measure(get(supervisor, '/api/health'))
-    push('who can weld this joint? (GET /api/coverage)', await measure(get(supervisor, joint)), 'its SQL alone', floors.coverage, 'p95 ≤ 25 ms and ≤ 2× SQL', (s, f) => s.p95 <= 25 && s.p95 <= 2 * f.p95)
+    push('who can weld this joint? (GET /api/coverage)', await measure(get(supervisor, `/api/coverage?${jointQuery}`)), 'its SQL alone', floors.coverage, 'p95 ≤ 25 ms and ≤ 2× SQL', (s, f) => s.p95 <= 25 && s.p95 <= 2 * f.p95)
     push('lapse list, next 30 days (GET /api/continuity/lapses)', await measure(get(supervisor, `/api/continuity/lapses?days=30`)), 'its SQL alone', floors.lapses, 'p95 ≤ 25 ms and ≤ 2× SQL', (s, f) => s.p95 <= 25 && s.p95 <= 2 * f.p95)
     if (registerProject && registerFloor) {
       push('weld register, 25 of 1,000 joints, filtered and sorted (GET /api/projects/:id/joints)', await measure(get(supervisor, `/api/projects/${registerProject}/joints?${registerQuery}`)), 'its SQL alone', registerFloor, 'p95 ≤ 50 ms', s => s.p95 <= 50)
@@ -186,38 +259,64 @@ async function main() {
     const reads = await signedInReads(readers, [
       '/api/welders?pageSize=50&sort=name&dir=asc', '/api/continuity/lapses?days=30', '/api/tests?pageSize=50', '/api/procedures?pageSize=50',
     ], seconds)
-    console.error('measured 20 connections of signed-in reads')
+    console.error(`${target.name}: measured 20 connections of signed-in reads`)
     if (sheetTest) {
       push('one WPQ sheet (PDF)', await measure(get(supervisor, `/api/sheets/tests/${sheetTest}`, 'application/pdf'), { warmup: 3, forSeconds: 3 }), 'GET /api/health', health, 'median ≤ 150 ms', s => s.median <= 150)
     }
     const packet = packetProject ? await packetSeconds(supervisor, packetProject).catch((e: Error) => ({ seconds: Number.NaN, pages: 0, error: e.message })) : null
-    const js = await firstLoadJs(welder, '/me')
-    const cookie = (c: Client) => c.cookieHeader
-    const scores = process.env.BENCH_LIGHTHOUSE === 'false'
-      ? { me: Number.NaN, dashboard: Number.NaN }
-      : { me: lighthouse(`${base}/me`, cookie(welder)), dashboard: lighthouse(`${base}/dashboard`, cookie(supervisor)) }
-
-    const f = (n: number) => (Number.isNaN(n) ? '—' : n < 10 ? n.toFixed(2) : n.toFixed(1))
-    const lines = [
-      `Rootface bench, ${new Date().toISOString().slice(0, 16)}Z, ${counts.welders} welders, ${counts.tests} welder tests, ${counts.continuity} continuity entries; ${seconds} s per run`,
-      '',
-      '| operation | median ms | p95 ms | req/s @1 | req/s @10 | floor | floor median | floor p95 | target | met |',
-      '| --- | ---: | ---: | ---: | ---: | --- | ---: | ---: | --- | --- |',
-      ...rows.map(r => `| ${r.op} | ${f(r.stats.median)} | ${f(r.stats.p95)} | ${f(r.stats.rps1)} | ${f(r.stats.rps10)} | ${r.floorName} | ${f(r.floor.median)} | ${f(r.floor.p95)} | ${r.target} | ${r.ok(r.stats, r.floor) ? 'yes' : 'NO'} |`),
-      `| 20 connections of signed-in reads (lists, lapse list): median and **p99** | ${f(reads.median)} | p99 ${f(reads.p99)} | | ${f(reads.rps)} @20 | | | | p99 ≤ 1100 ms | ${reads.p99 <= 1100 ? 'yes' : 'NO'} |`,
-      packet ? `| packet PDF, ${packet.pages} pages (build + download) | ${f(packet.seconds * 1000)} | | | | | | | ≤ 3 s for 100 sheets | ${packet.seconds <= 3 ? 'yes' : 'NO'} |` : '| packet | not measured | | | | | | | | |',
-      `| welder page first-load JavaScript, ${js.files} files | ${(js.bytes / 1024).toFixed(1)} KB gzip | | | | | | | ≤ 200 KB gzip | ${js.bytes <= 200 * 1024 ? 'yes' : 'NO'} |`,
-      `| Lighthouse performance, mobile: /me | ${f(scores.me)} | | | | | | | ≥ 95 | ${scores.me >= 95 ? 'yes' : 'NO'} |`,
-      `| Lighthouse performance, mobile: /dashboard | ${f(scores.dashboard)} | | | | | | | ≥ 95 | ${scores.dashboard >= 95 ? 'yes' : 'NO'} |`,
-    ]
-    console.log(lines.join('\n'))
-    if (process.env.BENCH_WRITE) writeFileSync(process.env.BENCH_WRITE, `${lines.join('\n')}\n`)
+    // Page weight and Lighthouse measure the pages, not the database: once, on the first database.
+    const pages = target.name === 'PGlite'
+      ? {
+          js: await firstLoadJs(welder, '/me'),
+          scores: process.env.BENCH_LIGHTHOUSE === 'false'
+            ? { me: Number.NaN, dashboard: Number.NaN }
+            : { me: lighthouse(`${base}/me`, welder.cookieHeader), dashboard: lighthouse(`${base}/dashboard`, supervisor.cookieHeader) },
+        }
+      : null
+    return { name: target.name, counts, rows, reads, packet, pages }
   }
   finally {
     server.kill('SIGTERM')
     await new Promise(r => server.once('exit', r))
-    rmSync(work, { recursive: true, force: true })
+    await prepared.cleanup()
   }
+}
+
+async function main() {
+  run('build', 'npx', ['nuxt', 'build'], { NUXT_BUILD_DIR: '.nuxt-bench', NUXT_OUTPUT_DIR: output })
+  const results = []
+  for (const target of [pglite(), ...(serverUrl ? [postgres(serverUrl)] : [])]) results.push(await benchOn(target))
+
+  const f = (n: number) => (Number.isNaN(n) ? '—' : n < 10 ? n.toFixed(2) : n.toFixed(1))
+  const first = results[0]!
+  const lines = [
+    `Rootface bench, ${new Date().toISOString().slice(0, 16)}Z, scale ${scale}: ${first.counts.welders} welders, ${first.counts.tests} welder tests, ${first.counts.continuity} continuity entries; ${seconds} s per run; ${results.map(r => r.name).join(' and ')}`,
+    '',
+    '| operation | database | median ms | p95 ms | req/s @1 | req/s @10 | floor | floor median | floor p95 | target | met |',
+    '| --- | --- | ---: | ---: | ---: | ---: | --- | ---: | ---: | --- | --- |',
+  ]
+  for (let i = 0; i < first.rows.length; i++) {
+    for (const r of results) {
+      const row = r.rows[i]
+      if (row) lines.push(`| ${row.op} | ${r.name} | ${f(row.stats.median)} | ${f(row.stats.p95)} | ${f(row.stats.rps1)} | ${f(row.stats.rps10)} | ${row.floorName} | ${f(row.floor.median)} | ${f(row.floor.p95)} | ${row.target} | ${row.ok(row.stats, row.floor) ? 'yes' : 'NO'} |`)
+    }
+  }
+  for (const r of results) {
+    lines.push(`| 20 connections of signed-in reads (lists, lapse list): median and **p99** | ${r.name} | ${f(r.reads.median)} | p99 ${f(r.reads.p99)} | | ${f(r.reads.rps)} @20 | | | | p99 ≤ 1100 ms | ${r.reads.p99 <= 1100 ? 'yes' : 'NO'} |`)
+  }
+  for (const r of results) {
+    lines.push(r.packet ? `| packet PDF, ${r.packet.pages} pages (build + download) | ${r.name} | ${f(r.packet.seconds * 1000)} | | | | | | | ≤ 3 s for 100 sheets | ${r.packet.seconds <= 3 ? 'yes' : 'NO'} |` : `| packet | ${r.name} | not measured | | | | | | | | |`)
+  }
+  const pages = first.pages
+  if (pages) {
+    lines.push(
+      `| welder page first-load JavaScript, ${pages.js.files} files | | ${(pages.js.bytes / 1024).toFixed(1)} KB gzip | | | | | | | ≤ 200 KB gzip | ${pages.js.bytes <= 200 * 1024 ? 'yes' : 'NO'} |`,
+      `| Lighthouse performance, mobile: /me | | ${f(pages.scores.me)} | | | | | | | ≥ 95 | ${pages.scores.me >= 95 ? 'yes' : 'NO'} |`,
+      `| Lighthouse performance, mobile: /dashboard | | ${f(pages.scores.dashboard)} | | | | | | | ≥ 95 | ${pages.scores.dashboard >= 95 ? 'yes' : 'NO'} |`,
+    )
+  }
+  console.log(lines.join('\n'))
+  if (process.env.BENCH_WRITE) writeFileSync(process.env.BENCH_WRITE, `${lines.join('\n')}\n`)
 }
 
 await main()

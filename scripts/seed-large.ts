@@ -10,6 +10,7 @@ import { openDatabase, type Db } from '../server/database/client'
 import * as t from '../server/database/schema'
 import { seedDemoShop } from '../server/database/seed/demo'
 import { refreshStandings } from '../server/database/standings'
+import { analyzeTables, recomputeStaleQualifiedRanges } from '../server/database/qualified-ranges'
 import { qualifiedRangesOf } from '../shared/qualification/test-ranges'
 import { seedLargeJoints } from './seed-large-joints'
 
@@ -40,7 +41,14 @@ async function batches<T>(rows: T[], size: number, insert: (chunk: T[]) => Promi
   for (let i = 0; i < rows.length; i += size) await insert(rows.slice(i, i + size))
 }
 
-export async function seedLargeShop(db: Db, today = new Date()) {
+/** The shop's sizes at a scale (1: the sizes above; 10: 20,000 welders, 100,000 tests, 2,000,000 continuity entries). */
+export function shopAt(scale: number) {
+  const n = (v: number) => Math.max(1, Math.round(v * scale))
+  return { welders: n(largeShop.welders), tests: n(largeShop.tests), continuity: n(largeShop.continuity), procedures: n(largeShop.procedures), pqrs: n(largeShop.pqrs), projects: n(largeShop.projects) }
+}
+
+export async function seedLargeShop(db: Db, today = new Date(), scale = 1) {
+  const size = shopAt(scale)
   const day = (daysAgo: number) => format(subDays(today, daysAgo), 'yyyy-MM-dd')
   await seedDemoShop(db, today)
   const [supervisor] = await db.select().from(t.accounts).limit(1)
@@ -48,14 +56,14 @@ export async function seedLargeShop(db: Db, today = new Date()) {
   const [filler] = await db.select().from(t.fillerMetals).limit(1)
 
   await db.transaction(async (tx) => {
-    const welderRows = Array.from({ length: largeShop.welders }, (_, i) => ({
+    const welderRows = Array.from({ length: size.welders }, (_, i) => ({
       name: `${pick(first)} ${pick(last)}`, stamp: `LG-${String(i + 1).padStart(4, '0')}`, employeeNumber: `L-${20000 + i}`,
       status: rand() < 0.95 ? 'active' : 'inactive', email: `welder${i + 1}@large.rootface.test`,
     }))
     const welderIds: number[] = []
     await batches(welderRows, 500, async chunk => welderIds.push(...(await tx.insert(t.welders).values(chunk).returning({ id: t.welders.id })).map(r => r.id)))
 
-    const pqrRows = Array.from({ length: largeShop.pqrs }, (_, i) => {
+    const pqrRows = Array.from({ length: size.pqrs }, (_, i) => {
       const process = pick(processes)
       return {
         number: `PQR-L${String(i + 1).padStart(4, '0')}`, testDate: day(int(60, 2000)), code: 'asme-ix', edition: '2023', unit: 'in', process,
@@ -65,7 +73,7 @@ export async function seedLargeShop(db: Db, today = new Date()) {
     }).map(row => ({ ...row, layers: pqrLayersOf({ ...row, layers: [], depositThickness: null, actuals: {} }) }))
     const pqrIds = (await tx.insert(t.pqrs).values(pqrRows).returning({ id: t.pqrs.id })).map(r => r.id)
 
-    const procedureRows = Array.from({ length: largeShop.procedures }, (_, i) => {
+    const procedureRows = Array.from({ length: size.procedures }, (_, i) => {
       const process = pick(processes)
       const max = pick([0.1875, 0.75, 1.5, 2, 8])
       return {
@@ -79,7 +87,7 @@ export async function seedLargeShop(db: Db, today = new Date()) {
     await batches(procedureRows, 250, async chunk => procedureIds.push(...(await tx.insert(t.procedures).values(chunk).returning({ id: t.procedures.id })).map(r => r.id)))
     await batches(procedureIds.map((id, i) => ({ procedureId: id, pqrId: pqrIds[i % pqrIds.length]! })), 500, chunk => tx.insert(t.procedurePqrs).values(chunk))
 
-    const testRows = Array.from({ length: largeShop.tests }, (_, i) => {
+    const testRows = Array.from({ length: size.tests }, (_, i) => {
       const welderId = welderIds[i % welderIds.length]!
       const process = pick(processes)
       const form = rand() < 0.6 ? 'plate' as const : 'pipe' as const
@@ -100,7 +108,7 @@ export async function seedLargeShop(db: Db, today = new Date()) {
     await batches(testRows, 500, chunk => tx.insert(t.welderTests).values(chunk))
 
     // Continuity: per welder a few processes, entries spread over the last 14 months; some stop early so they lapse.
-    const continuityRows = Array.from({ length: largeShop.continuity }, (_, i) => {
+    const continuityRows = Array.from({ length: size.continuity }, (_, i) => {
       const welderId = welderIds[i % welderIds.length]!
       const stopsEarly = welderId % 7 === 0
       return { welderId, process: processes[(i >> 3) % processes.length]!, weldedOn: day(int(stopsEarly ? 190 : 0, 420)), reference: `Job L-${int(1000, 9999)}`, recordedBy: supervisor!.id }
@@ -108,7 +116,7 @@ export async function seedLargeShop(db: Db, today = new Date()) {
     await batches(continuityRows, 2000, chunk => tx.insert(t.continuityEntries).values(chunk))
 
     const [customer] = await tx.insert(t.customers).values({ name: 'Large shop customer (invented)' }).returning()
-    const projectRows = Array.from({ length: largeShop.projects }, (_, i) => ({
+    const projectRows = Array.from({ length: size.projects }, (_, i) => ({
       customerId: customer!.id, number: `LP-${String(i + 1).padStart(4, '0')}`, name: `Invented project ${i + 1}`, startsOn: day(int(200, 400)),
     }))
     const projectIds = (await tx.insert(t.projects).values(projectRows).returning({ id: t.projects.id })).map(r => r.id)
@@ -122,16 +130,20 @@ export async function seedLargeShop(db: Db, today = new Date()) {
 
 const isMain = process.argv[1] && resolve(process.argv[1]).endsWith('seed-large.ts')
 if (isMain) {
+  // DATABASE_URL: an empty PostgreSQL database instead of the embedded one (the bench makes a fresh one).
+  const databaseUrl = process.env.DATABASE_URL || undefined
   const dataDir = resolve(process.env.NUXT_DATA_DIR ?? '.data/large/db')
-  rmSync(dataDir, { recursive: true, force: true })
+  if (!databaseUrl) rmSync(dataDir, { recursive: true, force: true })
   const started = Date.now()
-  const database = await openDatabase({ dataDir, holder: 'npm run seed:large' })
+  const database = await openDatabase({ databaseUrl, dataDir, holder: 'npm run seed:large' })
   try {
-    await seedLargeShop(database.db)
+    await seedLargeShop(database.db, new Date(), Number(process.env.BENCH_SCALE ?? 1))
     await refreshStandings(database.db) // so the first request is not the one that computes 8,000 chains
+    await recomputeStaleQualifiedRanges(database.db) // and not the one that derives 10,000 tests' ranges
+    await analyzeTables(database.db) // the planner's statistics (PGlite runs no autovacuum)
   }
   finally {
     await database.close()
   }
-  console.log(`Seeded the large shop into ${dataDir} in ${((Date.now() - started) / 1000).toFixed(1)} s`)
+  console.log(`Seeded the large shop into ${databaseUrl ? 'the PostgreSQL database' : dataDir} in ${((Date.now() - started) / 1000).toFixed(1)} s`)
 }

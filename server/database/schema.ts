@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm'
 import {
-  type AnyPgColumn, boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
+  type AnyPgColumn, bigint, boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
 } from 'drizzle-orm/pg-core'
 
 // Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
@@ -879,3 +879,43 @@ export const issuedRegisters = pgTable('issued_registers', {
   check('issued_registers_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
 ])
 // ---- end weld-log ----
+
+// ---- perf ----
+// What each certified welder test qualifies per process, derived from the rules' own ranges output
+// (shared/qualification/qualified-ranges.ts) and stamped with the rules version that derived it. A trigger on
+// welder_tests marks a test in qualified_ranges_refresh; the next read (and start-up, for a new rules version)
+// derives it again. "Who can weld it?" filters on these columns in SQL, then runs the rules on the survivors.
+// Lengths are micro-units of the test's unit (the rules compare in them exactly).
+export const qualifiedRanges = pgTable('qualified_ranges', {
+  testId: integer('test_id').notNull().references(() => welderTests.id, { onDelete: 'cascade' }),
+  process: text('process').notNull(),
+  welderId: integer('welder_id').notNull(),
+  code: text('code').notNull(),
+  edition: text('edition').notNull(),
+  unit: unit(),
+  rulesVersion: integer('rules_version').notNull(),
+  // False when the rules could not derive the ranges: the test then stays a candidate for every joint.
+  derived: boolean('derived').notNull(),
+  weld: text('weld').notNull(),
+  positionsGroove: text('positions_groove').array(),
+  positionsGroovePipe: text('positions_groove_pipe').array(),
+  positionsFillet: text('positions_fillet').array(),
+  depositMaxMicro: bigint('deposit_max_micro', { mode: 'number' }),
+  thicknessMinMicro: bigint('thickness_min_micro', { mode: 'number' }),
+  thicknessMaxMicro: bigint('thickness_max_micro', { mode: 'number' }),
+  diameterMinMicro: bigint('diameter_min_micro', { mode: 'number' }),
+  fNumbers: integer('f_numbers').array(),
+  fWithoutBacking: boolean('f_without_backing'),
+  backing: boolean('backing'),
+  transfer: text('transfer'),
+  progression: text('progression'),
+}, t => [
+  primaryKey({ columns: [t.testId, t.process] }),
+  index('qualified_ranges_process_idx').on(t.process, t.welderId),
+  index('qualified_ranges_rules_idx').on(t.rulesVersion),
+])
+
+export const qualifiedRangesRefresh = pgTable('qualified_ranges_refresh', {
+  testId: integer('test_id').primaryKey(),
+})
+// ---- end perf ----

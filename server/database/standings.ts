@@ -2,10 +2,11 @@ import { and, asc, between, desc, eq, ilike, inArray, or, sql } from 'drizzle-or
 import type { Db } from './client'
 import { accounts, continuityEntries, isoValidityRecords, procedures, processStandings, qualificationRevocations, standingRefresh, welders, welderTests } from './schema'
 import { allOf, containsPattern } from '../utils/list'
-import { lapseWeeks } from '../../shared/qualification/lapse-weeks'
+import type { LapseWeek, LapseWeeks } from '../../shared/qualification/lapse-weeks'
+import { addDays, format, parseISO } from 'date-fns'
 import { renewalOf } from '../../shared/qualification/renewal'
 import type { StandingsQuery } from '../../shared/schemas/list-queries'
-import { continuityChain, standingOn, type Chain, type ProcessStanding } from '../../shared/qualification/process-standing'
+import { continuityChain, lapsingSoonDays, standingOn, type Chain, type ProcessStanding } from '../../shared/qualification/process-standing'
 import type { CodeId } from '../../shared/rules/types'
 import { isoChain, sameFamily } from '../../shared/qualification/iso-standing'
 import type { IsoRoute, IsoValidityRecord } from '../../shared/rules/iso-9606-1/validity'
@@ -168,28 +169,73 @@ const listLimit = 200
 
 /** The staff dashboard: who lapses in the next 30/60/90 days, who has lapsed, the lapse timeline, tests awaiting certification. */
 export async function dashboard(db: Db, today: string) {
-  const [board, awaiting, [waiting]] = await Promise.all([
-    activeRosterStandings(db, today),
-    db.select({
-      id: welderTests.id, testDate: welderTests.testDate, process: welderTests.process, positions: welderTests.positions, form: welderTests.form,
-      weld: welderTests.weld, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp, procedureNumber: procedures.number,
-    }).from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
-      .where(eq(welderTests.status, 'recorded')).orderBy(asc(welderTests.testDate)).limit(100),
-    db.select({ n: sql<number>`count(*)::int` }).from(welderTests).where(eq(welderTests.status, 'recorded')),
-  ])
-  const rows = board.sort((a, b) => a.lapsesOn.localeCompare(b.lapsesOn) || a.welderName.localeCompare(b.welderName))
+  await refreshStandings(db)
+  const weeksBack = 13
+  const weeksAhead = 26
+  const start = format(addDays(parseISO(today), -weeksBack * 7), 'yyyy-MM-dd')
+  // Standing words by days left, as standingOn (shared/qualification/process-standing.ts) decides them.
+  const days = sql`(${processStandings.lapsesOn} - ${today}::date)`
+  const active = and(eq(welders.status, 'active'))
+  // Counts and the week buckets in one aggregate pass over the kept standings; the lists are the first rows only.
+  const [counts] = await db.select({
+    lapsed: sql<number>`count(*) filter (where ${days} <= 0)::int`,
+    in30: sql<number>`count(*) filter (where ${days} > 0 and ${days} <= 30)::int`,
+    in60: sql<number>`count(*) filter (where ${days} > 0 and ${days} <= 60)::int`,
+    in90: sql<number>`count(*) filter (where ${days} > 0 and ${days} <= 90)::int`,
+    current: sql<number>`count(*) filter (where ${days} > 30)::int`,
+    before: sql<number>`count(*) filter (where ${processStandings.lapsesOn} < ${start}::date)::int`,
+    after: sql<number>`count(*) filter (where ${processStandings.lapsesOn} >= ${start}::date + ${(weeksBack + weeksAhead) * 7}::int)::int`,
+  }).from(processStandings).innerJoin(welders, eq(welders.id, processStandings.welderId)).where(active)
+  const buckets = await db.execute<{ week: number, lapsed: number, lapsing: number, current: number, sample: string[] | string | null }>(sql`
+    with b as (
+      select ((s.lapses_on - ${start}::date) / 7)::int as week, s.lapses_on - ${today}::date as days_left,
+             row_number() over (partition by (s.lapses_on - ${start}::date) / 7 order by s.lapses_on, w.name, w.stamp, s.process) as n,
+             w.stamp || ' ' || s.process as label
+      from process_standings s join welders w on w.id = s.welder_id and w.status = 'active'
+      where s.lapses_on >= ${start}::date and s.lapses_on < ${start}::date + ${(weeksBack + weeksAhead) * 7}::int)
+    select week, count(*) filter (where days_left <= 0)::int as lapsed,
+           count(*) filter (where days_left > 0 and days_left <= ${lapsingSoonDays})::int as lapsing,
+           count(*) filter (where days_left > ${lapsingSoonDays})::int as current,
+           array_agg(label order by n) filter (where n <= 5) as sample
+    from b group by week order by week`)
+  const columns = { standing: processStandings, welderName: welders.name, welderStamp: welders.stamp }
+  const listed = (rows: { standing: typeof processStandings.$inferSelect, welderName: string, welderStamp: string }[]) =>
+    rows.map(r => ({ ...standingOn(chainOf(r.standing), today), welderId: r.standing.welderId, welderName: r.welderName, welderStamp: r.welderStamp }))
+  const join = eq(welders.id, processStandings.welderId)
   // Most recently lapsed first: the ones a renewal test can still catch up with soonest
-  const lapsed = rows.filter(r => r.daysLeft <= 0).reverse()
-  const upcoming = rows.filter(r => r.daysLeft > 0 && r.daysLeft <= 90)
+  const lapsed = listed(await db.select(columns).from(processStandings).innerJoin(welders, join)
+    .where(and(active, sql`${days} <= 0`))
+    .orderBy(desc(processStandings.lapsesOn), desc(welders.name), desc(welders.stamp), desc(processStandings.process)).limit(listLimit))
+  const upcoming = listed(await db.select(columns).from(processStandings).innerJoin(welders, join)
+    .where(and(active, sql`${days} > 0 and ${days} <= 90`))
+    .orderBy(asc(processStandings.lapsesOn), asc(welders.name), asc(welders.stamp), asc(processStandings.process)).limit(listLimit))
+  const awaiting = await db.select({
+    id: welderTests.id, testDate: welderTests.testDate, process: welderTests.process, positions: welderTests.positions, form: welderTests.form,
+    weld: welderTests.weld, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp, procedureNumber: procedures.number,
+  }).from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
+    .where(eq(welderTests.status, 'recorded')).orderBy(asc(welderTests.testDate)).limit(100)
+  const [waiting] = await db.select({ n: sql<number>`count(*)::int` }).from(welderTests).where(eq(welderTests.status, 'recorded'))
+  const byWeek = new Map(buckets.rows.map(b => [Number(b.week), b]))
+  const weeks: LapseWeek[] = Array.from({ length: weeksBack + weeksAhead }, (_, i) => {
+    const b = byWeek.get(i)
+    const sample = b?.sample ? (Array.isArray(b.sample) ? b.sample : parseTextArray(b.sample)) : []
+    return { from: format(addDays(parseISO(start), i * 7), 'yyyy-MM-dd'), lapsed: Number(b?.lapsed ?? 0), lapsing: Number(b?.lapsing ?? 0), current: Number(b?.current ?? 0), sample }
+  })
   return {
     today,
-    lapsed: lapsed.slice(0, listLimit).map(r => ({ ...r, renewal: r.revoked ? null : renewalOf[r.code] })),
-    lapsedCount: lapsed.length,
-    upcoming: upcoming.slice(0, listLimit),
-    upcomingCounts: { 30: upcoming.filter(r => r.daysLeft <= 30).length, 60: upcoming.filter(r => r.daysLeft <= 60).length, 90: upcoming.length },
-    currentCount: rows.filter(r => r.daysLeft > 30).length,
-    timeline: lapseWeeks(rows, today),
+    lapsed: lapsed.map(r => ({ ...r, renewal: r.revoked ? null : renewalOf[r.code] })),
+    lapsedCount: Number(counts?.lapsed ?? 0),
+    upcoming,
+    upcomingCounts: { 30: Number(counts?.in30 ?? 0), 60: Number(counts?.in60 ?? 0), 90: Number(counts?.in90 ?? 0) },
+    currentCount: Number(counts?.current ?? 0),
+    timeline: { from: start, weeksBack, weeks, before: Number(counts?.before ?? 0), after: Number(counts?.after ?? 0) } satisfies LapseWeeks,
     awaitingCertification: waiting?.n ?? 0,
     awaiting,
   }
+}
+
+/** A text[] literal ('{"KB-03 SMAW",...}') as a list, for drivers that return it as text. */
+function parseTextArray(value: string): string[] {
+  if (!value || value === '{}') return []
+  return value.replace(/^\{|\}$/g, '').split(',').map(s => s.replace(/^"|"$/g, ''))
 }

@@ -4,6 +4,8 @@ import { Worker } from 'node:worker_threads'
 import { renderDefinition } from './fonts'
 import { packetDefinition, type PacketDocumentInput } from './packet-document'
 import { fontBuffers } from './pdf'
+import type { SheetModel } from './model'
+import { sheetDefinition } from './sheet-document'
 
 /** The render worker, bundled beside the built server entry (see nuxt.config.ts); absent in `nuxt dev`. */
 function workerFile() {
@@ -19,15 +21,24 @@ export interface RenderedPacket { pdf: Buffer, pageCount: number }
  * in a worker thread: the server keeps answering, the progress polling included.
  */
 export async function renderPacket(input: PacketDocumentInput, progress: (fraction: number) => void | Promise<void>): Promise<RenderedPacket> {
+  return inWorker({ input }, () => packetDefinition(input), progress)
+}
+
+/** One sheet, laid out and rendered off the request thread (a signed sheet at signing, before anyone asks for it). */
+export async function renderSheetInWorker(sheet: SheetModel): Promise<RenderedPacket> {
+  return inWorker({ sheet }, () => sheetDefinition(sheet), () => {})
+}
+
+async function inWorker(data: { input?: PacketDocumentInput, sheet?: SheetModel }, here: () => { definition: Record<string, unknown>, tracker: { total: number } }, progress: (fraction: number) => void | Promise<void>): Promise<RenderedPacket> {
   const fonts = await fontBuffers()
   const file = workerFile()
   if (!file) {
-    const { definition, tracker } = packetDefinition(input)
+    const { definition, tracker } = here()
     const pdf = await renderDefinition(definition, f => void progress(f))
     return { pdf, pageCount: tracker.total }
   }
   return new Promise((resolve, reject) => {
-    const worker = new Worker(file, { workerData: { input, fonts } })
+    const worker = new Worker(file, { workerData: { ...data, fonts } })
     worker.on('message', (message: { progress?: number, pdf?: Uint8Array, pageCount?: number, error?: string }) => {
       if (message.progress !== undefined) void progress(message.progress)
       else if (message.error) reject(new Error(message.error))

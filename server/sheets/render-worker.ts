@@ -1,13 +1,15 @@
 import { parentPort, workerData } from 'node:worker_threads'
 import { installFonts, renderDefinition, type FontBuffers } from './fonts'
+import type { SheetModel } from './model'
 import { packetDefinition, type PacketDocumentInput } from './packet-document'
+import { sheetDefinition } from './sheet-document'
 
-// Entry of the packet render worker (bundled to sheet-worker.cjs at build time): data in, PDF bytes out.
-const { input, fonts } = workerData as { input: PacketDocumentInput, fonts: FontBuffers }
+// Entry of the render worker (bundled to sheet-worker.cjs at build time): a packet or one sheet, data in, PDF bytes out.
+const { input, sheet, fonts } = workerData as { input?: PacketDocumentInput, sheet?: SheetModel, fonts: FontBuffers }
 
 async function main() {
   installFonts(fonts)
-  const { definition, tracker } = packetDefinition(input)
+  const { definition, tracker } = sheet ? sheetDefinition(sheet) : packetDefinition(input!)
   let last = -1
   const pdf = await renderDefinition(definition, (fraction) => {
     const step = Math.floor(fraction * 50)

@@ -5,7 +5,8 @@ import type { SessionUser } from '../utils/auth'
 import { loadContinuityLog, type Period } from './continuity-log'
 import { continuitySheet } from './continuity-sheet'
 import { verifyUrl } from './common'
-import { documentBase, labelled, PageTracker, sheetSection } from './layout'
+import { labelled } from './layout'
+import { sheetDefinition } from './sheet-document'
 import { sheetReference, type SheetModel } from './model'
 import { renderPdf } from './pdf'
 import { pqrSheet } from './pqr'
@@ -77,12 +78,9 @@ export async function continuityLogSheet(db: Db, welderId: number, period: Perio
 
 /** The period of a project, closed at today when it is still open. */
 export async function renderSheet(sheet: SheetModel) {
-  const tracker = new PageTracker()
+  const { definition, tracker } = sheetDefinition(sheet)
   const started = performance.now()
-  const pdf = await renderPdf({
-    ...documentBase(`${sheet.kindTitle} ${sheetReference(sheet)}`, sheet.shopName),
-    content: [sheetSection(sheet, 0, tracker, { shopName: sheet.shopName, documentLine: null })],
-  })
+  const pdf = await renderPdf(definition)
   return { pdf, pageCount: tracker.total, ms: Math.round(performance.now() - started) }
 }
 

@@ -7,7 +7,7 @@ export interface WelderAnswer { id: number, name: string, stamp: string, covered
 export interface CoverageAnswer {
   today: string
   joint: Joint & { gaugeNote?: string }
-  timing: { queryMs: number, rulesMs: number, candidates: number }
+  timing: { queryMs: number, rulesMs: number, candidates: number, ruledOut: number }
   procedures: { id: number, number: string, revision: number, title: string, code: string, covered: boolean, reasons: Finding[] }[]
   welders: {
     able: WelderAnswer[]

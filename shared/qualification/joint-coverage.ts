@@ -94,6 +94,9 @@ const variablesOf = (t: TestRow) => ({
   progression: t.progression,
 })
 
+/** The rules input of one stored test as "Who can weld it?" judges it (also what its stored ranges are derived from). */
+export const coverageTestInput = (t: TestRow) => welderRangesInput(variablesOf(t)) as unknown as WelderTestInput
+
 /**
  * For each welder: where the process stands today (the newest certified test starts the chain, continuity keeps it),
  * and whether one of their certified tests of the process covers the joint (the rules' covers check takes a set of
@@ -105,7 +108,7 @@ export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: 
   type Verdict = { covered: boolean, answer: CoverAnswer, record: string[], reasons: CoverReason[] }
   const verdicts = new Map<string, Verdict>()
   const judge = (t: TestRow): Verdict => {
-    const test = welderRangesInput(variablesOf(t)) as unknown as WelderTestInput
+    const test = coverageTestInput(t)
     const key = `${t.code}|${t.edition}|${t.unit}|${JSON.stringify(test)}`
     const known = verdicts.get(key)
     if (known) return known

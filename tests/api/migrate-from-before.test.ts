@@ -88,7 +88,13 @@ describe.each(fixtures)('$name: a database made before the current migrations (P
     // Read the migrated database directly (PGlite has one process), then serve it again for the HTTP checks.
     const reader = new PGlite(dataDir)
     const after = await snapshot(sql => reader.query(sql))
+    // Migration 0010 (perf): every certified test has its qualified ranges derived, or waits in the queue start-up derives.
+    const certified = await reader.query<{ n: number }>(`select count(*)::int as n from welder_tests where status = 'certified'`)
+    const unranged = await reader.query<{ n: number }>(`select count(*)::int as n from welder_tests t where t.status = 'certified'
+      and not exists (select 1 from qualified_ranges r where r.test_id = t.id) and not exists (select 1 from qualified_ranges_refresh q where q.test_id = t.id)`)
     await reader.close()
+    expect(Number(certified.rows[0]!.n)).toBeGreaterThan(0)
+    expect(Number(unranged.rows[0]!.n)).toBe(0)
 
     server = await startServer({ dataDir: root, env: { NUXT_SEED_DEMO: 'false' } })
     await checkMigrated(server, before, after)
