@@ -10,7 +10,7 @@ import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
 import { tensileOf } from '#shared/qualification/tensile-acceptance'
-import { psiToMpa, totalDeposit, type PqrLayer, type PqrResults } from '#shared/schemas/pqr'
+import { psiToMpa, totalDeposit, type PqrActuals, type PqrLayer, type PqrResults } from '#shared/schemas/pqr'
 import type { CodeId, Unit } from '#shared/rules/types'
 
 import { pqrColumns, pqrDraftOf, pqrLayersOf, type PqrRow } from './pqr-columns'
@@ -55,6 +55,7 @@ export async function supportPqrs(db: Db, ids: number[]): Promise<(SupportPqr & 
     return byProcess.map((group) => {
       const first = group[0]!
       const deposit = totalDeposit(group)
+      const actuals = (pqr.actuals ?? {}) as PqrActuals
       return {
         id: pqr.id, number: byProcess.length > 1 ? `${pqr.number} (${first.process})` : pqr.number, code: pqr.code, edition: pqr.edition,
         unit: pqr.unit as Unit, process: first.process, transfer: first.transfer,
@@ -62,6 +63,7 @@ export async function supportPqrs(db: Db, ids: number[]): Promise<(SupportPqr & 
         heatInput: layerHeatInput(pqr, first), fNumber: fillers.find(f => f.id === first.fillerMetalId)?.fNumber ?? null,
         pNumber: pNumber ?? null, pNumberB: pNumberB ?? pNumber ?? null, status: pqr.status,
         resultsPass: t.length > 0 && b.length > 0 && t.every(s => s.accepted) && b.every(s => s.accepted),
+        preheat: actuals.preheat ?? null, pwht: actuals.pwht ?? null, pwhtTemperature: actuals.pwhtTemperature ?? null, testPosition: actuals.position ?? null,
       }
     })
   })

@@ -13,6 +13,7 @@ import { evaluate } from '#shared/rules'
 import type { ProcedureDraft, ProcedurePatch } from '#shared/schemas/procedure'
 import type { Reading } from '#shared/schemas/reading'
 import type { Unit } from '#shared/rules/types'
+import { handCheckNeeded } from '#shared/qualification/procedure-support'
 
 async function checkPqrsExist(db: Db, ids: number[]) {
   if (!ids.length) return
@@ -83,7 +84,7 @@ export async function updateDraft(db: Db, id: number, patch: ProcedurePatch, use
 /** A WPS backed by PQRs: approvable when they support it, or by hand for a code whose support rules are not carried. */
 async function supportGate(tx: Db, row: ProcedureRow) {
   const { check } = await supportOf(tx, row, await supportingPqrIdsOf(tx, row.id))
-  const byHand = check.rulesMissing && check.violations.every(v => v.clause === 'rules')
+  const byHand = handCheckNeeded(check)
   if (check.blockers.length || (!check.supported && !byHand)) {
     const reasons = [...check.blockers, ...check.violations.map(v => `${v.clause}: ${v.text}`)]
     throw refused('Not supported', `${row.number} rev. ${row.revision} cannot be approved: ${reasons.join(' ')}`, { blockers: check.blockers, violations: check.violations })
@@ -118,7 +119,7 @@ export async function approveProcedure(db: Db, id: number, version: number, user
         if (!handCheck || handCheck.length < 10) {
           throw fieldFailure('handCheck', row.prequalified
             ? 'Some prequalification limits are not carried here: say how you checked them by hand (at least 10 characters)'
-            : 'This code\'s support rules are not carried here: say how the ranges were checked against the PQRs (at least 10 characters)')
+            : 'Some of this code\'s support variables are not compared here: say how they were checked against the PQRs (at least 10 characters)')
         }
         // The statement is part of what the signature covers.
         await tx.update(procedures).set({ variables: { ...(row.variables as Record<string, unknown>), handCheck } }).where(eq(procedures.id, id))

@@ -204,10 +204,12 @@ function supportBlock(record: ProcedureRecord, draft: ReturnType<typeof draftOf>
           ? 'Not checked: the rules could not compare this WPS with its PQRs.'
           : check.supported
             ? 'Every variable checked lies within what the PQRs qualify; variables not listed were not checked.'
-            : 'At least one variable lies outside what the PQRs qualify (marked "not met").',
+            : check.violations.every(v => v.byHand)
+              ? 'Every variable compared lies within what the PQRs qualify; those marked "by hand" were checked by the supervisor, as stated.'
+              : 'At least one variable lies outside what the PQRs qualify (marked "not met").',
   ]
   return {
     heading, notes,
-    table: { columns: ['Clause', 'Finding', 'Result'], rows: check.findings.map(f => [f.clause, printable(f.text), f.met ? 'met' : 'not met']), widths: [90, '*', 48] },
+    table: { columns: ['Clause', 'Finding', 'Result'], rows: check.findings.map(f => [f.clause, printable(f.text), f.byHand ? 'by hand' : f.met ? 'met' : 'not met']), widths: [90, '*', 48] },
   }
 }

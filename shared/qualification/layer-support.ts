@@ -8,11 +8,11 @@ const layerFields: Record<string, string> = { 'process': 'process', 'transfer': 
  * several): its process, transfer, deposit, heat input and filler against every PQR process; the coupon thickness,
  * toughness and base metals once for the whole WPS. A finding about a layer names the layer and its form field.
  */
-export function layeredSupport(draft: Pick<ProcedureDraft, 'code' | 'edition' | 'unit' | 'thickness' | 'toughnessRequired' | 'baseMetals' | 'layers'> & Partial<Pick<ProcedureDraft, 'diameter'>>, pqrs: SupportPqr[]): SupportCheck {
+export function layeredSupport(draft: Pick<ProcedureDraft, 'code' | 'edition' | 'unit' | 'thickness' | 'toughnessRequired' | 'baseMetals' | 'layers'> & Partial<Pick<ProcedureDraft, 'diameter' | 'preheatMin' | 'pwht' | 'positions'>>, pqrs: SupportPqr[]): SupportCheck {
   const runs = draft.layers.map((layer, i) => ({ layer, i, check: supportCheck({
     code: draft.code, edition: draft.edition, unit: draft.unit, process: layer.process, transfer: layer.transfer, thickness: draft.thickness,
     depositMax: layer.depositMax, toughnessRequired: draft.toughnessRequired, baseMetals: draft.baseMetals, fillers: layer.fillers,
-    electrical: { heatInputMax: layer.heatInputMax },
+    electrical: { heatInputMax: layer.heatInputMax }, preheatMin: draft.preheatMin, pwht: draft.pwht, positions: draft.positions,
   }, pqrs) }))
   const first = runs[0]!.check
   const findings: SupportFinding[] = []

@@ -28,6 +28,11 @@ export interface SupportPqr {
   pNumberB?: string | null
   /** Charpy results and the acceptance values entered: a toughness WPS is supported only when they are recorded and accepted. */
   toughnessResults?: ToughnessResults | null
+  /** The coupon as welded (AWS D1.1 compares them): preheat, PWHT as written, and the test position (1G, 3G...). */
+  preheat?: number | null
+  pwht?: string | null
+  pwhtTemperature?: number | null
+  testPosition?: string | null
 }
 
 /** The WPS variables the support check reads; a half-filled form is fine. */
@@ -43,6 +48,9 @@ export interface SupportWps {
   baseMetals?: { a?: { pNumber?: string | null }, b?: { pNumber?: string | null } }
   fillers?: { fNumber?: string | null }[]
   electrical?: { heatInputMax?: number | null }
+  preheatMin?: number | null
+  pwht?: { required?: boolean } | null
+  positions?: ('F' | 'H' | 'V' | 'O')[] | null
 }
 
 export interface SupportFinding {
@@ -52,6 +60,8 @@ export interface SupportFinding {
   basis: Basis
   /** The form field the finding is about (dot path), so the clause can sit beside the value. */
   field: string | null
+  /** A variable of the code's table that Rootface does not compare: the supervisor states how it was checked. */
+  byHand?: boolean
 }
 
 export interface PqrQualifies {
@@ -99,7 +109,7 @@ function inUnit(value: number, from: Unit, to: Unit) {
 }
 
 /** The PQR as a rules record, its lengths converted exactly (25.4 mm/in) into the WPS's unit. */
-function pqrRecord(pqr: SupportPqr, unit: Unit) {
+function pqrRecord(pqr: SupportPqr, unit: Unit, code?: string) {
   const fNumber = pqr.fNumber !== null && /^\d+$/.test(pqr.fNumber) ? Number(pqr.fNumber) : undefined
   const transfer = pqr.transfer && ['short-circuit', 'globular', 'spray', 'pulse'].includes(pqr.transfer) ? pqr.transfer : undefined
   // Heat input per length: J/in ÷ 25.4 = J/mm.
@@ -110,7 +120,22 @@ function pqrRecord(pqr: SupportPqr, unit: Unit) {
     toughness: pqr.toughnessTested, heatInput: heat, fNumber,
     baseMetals: pqr.pNumber ? { a: { pNumber: pqr.pNumber }, ...(pqr.pNumberB ? { b: { pNumber: pqr.pNumberB } } : {}) } : undefined,
     toughnessResults: pqr.toughnessResults ?? undefined,
+    ...(code === 'aws-d1.1' ? d11Actuals(pqr) : {}),
   })
+}
+
+/** The coupon's preheat, PWHT and test position for AWS D1.1 (a PWHT written as none or as-welded is none; unwritten is not recorded). */
+function d11Actuals(pqr: SupportPqr) {
+  const text = pqr.pwht?.trim() ?? ''
+  const none = /^(none|no|n\/?a|as[- ]?welded|-)$/i.test(text)
+  const pwht = text === '' && !isNumber(pqr.pwhtTemperature) ? undefined : { condition: none && !isNumber(pqr.pwhtTemperature) ? 'none' as const : 'between' as const }
+  return strip({ preheat: isNumber(pqr.preheat) ? pqr.preheat : undefined, pwht, testPositions: pqr.testPosition?.trim() ? [pqr.testPosition.trim()] : undefined })
+}
+
+/** The support check needs the supervisor's signed statement: the code's rules are not carried, or its table lists variables not compared. */
+export function handCheckNeeded(check: Pick<SupportCheck, 'rulesMissing' | 'violations'>): boolean {
+  const byHand = (v: SupportFinding) => v.clause === 'rules' || v.byHand === true
+  return (check.rulesMissing || check.violations.some(v => v.byHand)) && check.violations.every(byHand)
 }
 
 function strip<T extends Record<string, unknown>>(o: T): T {
@@ -173,7 +198,8 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
   }
 
   const groove = wps.thickness?.groove ?? {}
-  const fNumbers = [...new Set((wps.fillers ?? []).map(f => f.fNumber?.trim()).filter((f): f is string => !!f))]
+  const d11 = wps.code === 'aws-d1.1'
+  const fNumbers = d11 ? [] : [...new Set((wps.fillers ?? []).map(f => f.fNumber?.trim()).filter((f): f is string => !!f))]
   const runs: (number | undefined)[] = fNumbers.length ? [] : [undefined]
   for (const f of fNumbers) {
     if (/^\d+$/.test(f)) runs.push(Number(f))
@@ -191,8 +217,9 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
           depositMax: isNumber(wps.depositMax) ? wps.depositMax : undefined, toughness: wps.toughnessRequired ?? false,
           heatInputMax: isNumber(wps.electrical?.heatInputMax) ? wps.electrical.heatInputMax : undefined, fNumber,
           baseMetals: baseMetalsOf(wps),
+          ...(d11 ? d11Wps(wps) : {}),
         }),
-        pqrs: sameCode.map(p => pqrRecord(p, wps.unit)),
+        pqrs: sameCode.map(p => pqrRecord(p, wps.unit, wps.code)),
       },
     })
     if ('error' in evaluated) {
@@ -200,15 +227,36 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
       return result(false, null)
     }
     caution = String((evaluated as { caution?: string }).caution ?? '')
-    for (const r of (evaluated as unknown as { reasons: { met: boolean, clause: string, text: string, basis: Basis }[] }).reasons) {
+    for (const r of (evaluated as unknown as { reasons: { met: boolean, clause: string, text: string, basis: Basis, variable?: string }[] }).reasons) {
       const key = `${r.clause}|${r.text}`
       if (seen.has(key)) continue
       seen.add(key)
-      findings.push({ ...r, field: fieldOf(r.clause) })
+      findings.push({ ...r, field: d11 ? d11Field(r) : fieldOf(r.clause) })
+    }
+    // AWS D1.1: the table's variables not compared go to the signed hand-check statement (never a silent yes).
+    for (const r of d11 ? (evaluated as unknown as { byHand: { clause: string, text: string, basis: Basis }[] }).byHand : []) {
+      const key = `${r.clause}|${r.text}`
+      if (seen.has(key)) continue
+      seen.add(key)
+      findings.push({ met: false, clause: r.clause, text: r.text, basis: r.basis, field: null, byHand: true, state: 'not-checked' } as SupportFinding)
     }
   }
   if (wps.code === 'asme-ix') findings.push(...unlimitedFindings(wps))
   return result(true, caution)
+}
+
+/** The WPS preheat, PWHT and positions as the AWS D1.1 rules read them. */
+function d11Wps(wps: SupportWps) {
+  return strip({
+    preheatMin: isNumber(wps.preheatMin) ? wps.preheatMin : undefined,
+    pwht: wps.pwht ? { condition: wps.pwht.required ? 'between' as const : 'none' as const } : undefined,
+    positions: wps.positions?.length ? wps.positions : undefined,
+  })
+}
+
+const d11Fields: Record<string, string> = { 'process': 'process', 'transfer': 'transfer', 'thickness': 'thickness.groove', 'preheat': 'preheatMin', 'pwht': 'pwht', 'positions': 'positions', 'toughness': 'toughnessRequired', 'heat-input': 'electrical.heatInputMax' }
+function d11Field(r: { variable?: string }): string | null {
+  return (r.variable && d11Fields[r.variable]) ?? null
 }
 
 /** The WPS base metals for QW-424.1 (the rules compare them with each PQR's A and B), when both are given. */

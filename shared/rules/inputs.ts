@@ -217,6 +217,8 @@ export interface WpsDraft {
   /** Maximum interpass temperature (QW-406.3, supplementary with toughness). */
   interpassMax?: number
   pwht?: Pwht
+  /** Welding positions of the WPS (F, H, V, O); compared by AWS D1.1 with the PQR test positions. */
+  positions?: ('F' | 'H' | 'V' | 'O')[]
 }
 
 /** One process layer of a PQR, with the values actually used. */
@@ -271,6 +273,8 @@ export interface PqrRecord extends Omit<ProcedureRangesInput, 'process'> {
   interpassMax?: number
   pwht?: Pwht
   toughnessResults?: ToughnessResults
+  /** Test positions of the coupon (1G, 3G...), as recorded. */
+  testPositions?: string[]
 }
 
 export interface WpsSupportInput {

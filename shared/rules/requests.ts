@@ -267,6 +267,7 @@ export const pqrSchema = procedureRangesSchema.extend({
   interpassMax: temperature('interpassMax').optional(),
   pwht: pwhtSchema.optional(),
   toughnessResults: toughnessSchema.optional(),
+  testPositions: z.array(z.string().min(1).max(10)).optional(),
 }).strict().superRefine((v, ctx) => {
   if (v.process === undefined && v.layers === undefined) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['process'], message: 'process is required (or layers, for a multi-process PQR)' })
   if (v.process !== undefined && v.layers !== undefined) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['layers'], message: 'give process or layers, not both' })
@@ -286,6 +287,7 @@ export const wpsSupportSchema = z.object({
     preheatMin: temperature('preheatMin').optional(),
     interpassMax: temperature('interpassMax').optional(),
     pwht: pwhtSchema.optional(),
+    positions: z.array(z.enum(['F', 'H', 'V', 'O'], { errorMap: () => ({ message: 'positions are F, H, V or O' }) })).optional(),
   }).strict().superRefine((v, ctx) => {
     if (v.process === undefined && v.layers === undefined) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['process'], message: 'process is required (or layers, for a multi-process WPS)' })
     if (v.process !== undefined && v.layers !== undefined) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['layers'], message: 'give process or layers, not both' })

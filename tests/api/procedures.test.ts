@@ -250,13 +250,14 @@ describe('discarding a draft', () => {
   })
 })
 
-describe('a code whose support rules are not carried', () => {
-  it('approves only with a statement of how the ranges were checked, which the signature covers', async () => {
+describe('an AWS D1.1 WPS qualified by test', () => {
+  it('is compared with its PQR variable by variable; what is not compared needs the signed statement', async () => {
     const bases = await supervisor.json<{ id: number, specification: string, grade: string }[]>('/api/catalogue/base-metals')
     const fillers = await supervisor.json<{ id: number, classification: string }[]>('/api/catalogue/filler-metals')
+    // A 3/8 in SMAW plate tested 3G at 60 °F, as welded (values invented).
     const pqr = await send(supervisor, 'POST', '/api/pqrs', {
       number: 'PQR-D11', testDate: '2026-05-04', code: 'aws-d1.1', edition: '2020', unit: 'in',
-      couponThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id, actuals: {},
+      couponThickness: 0.375, baseMetalId: bases.body.find(b => b.specification === 'SA-36')!.id, actuals: { preheat: 60, pwht: 'none', position: '3G' },
       layers: [{ name: 'all passes', process: 'SMAW', fillerMetalId: fillers.body.find(f => f.classification === 'E7018')!.id, depositThickness: 0.375 }],
     })
     expect(pqr.status).toBe(201)
@@ -268,14 +269,26 @@ describe('a code whose support rules are not carried', () => {
     expect(results.status).toBe(200)
     expect((await send(inspector, 'POST', `/api/pqrs/${pqr.body.id}/certify`, { version: results.body.version })).body.status).toBe('certified')
     const w02 = await detail(supervisor, (await byNumber('KB-W02', 1)).id)
-    const created = await send(supervisor, 'POST', '/api/procedures', { ...w02.body.draft, number: 'KB-S11', code: 'aws-d1.1', edition: '2020', supportingPqrIds: [pqr.body.id] })
+    // D1.1:2015 Table 4.2 (from memory): a 3/8 in plate qualifies 1/8 to 3/4 in; a 3G test qualifies vertical (each test its own position).
+    const draft = { ...w02.body.draft, code: 'aws-d1.1', edition: '2020', supportingPqrIds: [pqr.body.id], thickness: { ...w02.body.draft.thickness, groove: { min: 0.125, max: 0.75 } }, positions: ['V'], progression: 'uphill', preheatMin: 60, pwht: { ...w02.body.draft.pwht, required: false } }
+    const overhead = await send(supervisor, 'POST', '/api/procedures', { ...draft, number: 'KB-S10', positions: ['V', 'O'] })
+    expect(overhead.status).toBe(201)
+    const outside = (await detail(supervisor, overhead.body.id)).body.support as { checked: boolean, violations: { clause: string, byHand?: boolean }[] }
+    expect(outside.checked).toBe(true)
+    expect(outside.violations.filter(v => !v.byHand).map(v => v.clause)).toEqual(['Clause 6 WPS positions table (Table 4.1 in 2015)'])
+    expect((await send(supervisor, 'POST', `/api/procedures/${overhead.body.id}/approve`, { version: 1, handCheck: 'Checked the rest by hand against PQR-D11' })).status).toBe(422)
+
+    const created = await send(supervisor, 'POST', '/api/procedures', { ...draft, number: 'KB-S11' })
     expect(created.status).toBe(201)
     const { body } = await detail(supervisor, created.body.id)
-    expect(body.support).toMatchObject({ checked: false, supported: false, rulesMissing: true, blockers: [] })
+    expect(body.support).toMatchObject({ checked: true, supported: false, rulesMissing: false, blockers: [] })
+    const support = body.support as { violations: { clause: string, byHand?: boolean }[] }
+    expect(support.violations.length).toBeGreaterThan(0)
+    expect(support.violations.every(v => v.byHand && v.clause === 'Table 6.5')).toBe(true)
     const unstated = await send(supervisor, 'POST', `/api/procedures/${created.body.id}/approve`, { version: 1 })
     expect(unstated.status).toBe(400)
     expect((unstated.body as Errors).data!.fieldErrors.handCheck).toBeDefined()
-    const approved = await send(supervisor, 'POST', `/api/procedures/${created.body.id}/approve`, { version: 1, handCheck: 'Ranges checked by hand against the D1.1 procedure tables for PQR-D11' })
+    const approved = await send(supervisor, 'POST', `/api/procedures/${created.body.id}/approve`, { version: 1, handCheck: 'Filler, electrical, gas and joint checked by hand against PQR-D11' })
     expect(approved.status).toBe(200)
     expect((await detail(supervisor, created.body.id)).body.procedure.status).toBe('approved')
   })

@@ -11,6 +11,7 @@ import { radiography } from './radiography'
 import { d11DefaultEdition, d11Editions, d11Tables } from './editions'
 import { specimens } from './specimens'
 import { welderRanges } from './welder-ranges'
+import { wpsSupport } from './wps-support'
 
 /** AWS D1.1 Structural Welding Code — Steel: welder qualification. */
 export const awsD11: RuleSet = {
@@ -20,6 +21,7 @@ export const awsD11: RuleSet = {
   defaultEdition: d11DefaultEdition,
   units: ['in', 'mm'],
   procedureRanges,
+  wpsSupport,
   welderRanges,
   covers,
   bend,

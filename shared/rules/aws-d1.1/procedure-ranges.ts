@@ -24,7 +24,7 @@ export function d11ProcedureTables(edition: string) {
 const processes = ['SMAW', 'SAW', 'GMAW', 'FCAW', 'GTAW']
 const letters = ['F', 'H', 'V', 'O'] as const
 /** A plate or pipe groove test position qualifies its own position for the WPS (from memory; the least Table 4.1 can mean). */
-const positionOf: Record<string, string[]> = { '1G': ['F'], '2G': ['H'], '3G': ['V'], '4G': ['O'], '5G': ['F', 'V', 'O'], '6G': ['F', 'H', 'V', 'O'], '6GR': ['F', 'H', 'V', 'O'] }
+export const positionOf: Record<string, string[]> = { '1G': ['F'], '2G': ['H'], '3G': ['V'], '4G': ['O'], '5G': ['F', 'V', 'O'], '6G': ['F', 'H', 'V', 'O'], '6GR': ['F', 'H', 'V', 'O'] }
 
 /** Changes that need a new PQR (Tables 4.5/4.6 in 2015), from memory: listed for the WPS writer, not computed. */
 export const d11Requalification = [

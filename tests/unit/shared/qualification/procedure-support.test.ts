@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { findingsFor, pqrQualifies, supportCheck, type SupportPqr, type SupportWps } from '../../../../shared/qualification/procedure-support'
+import { findingsFor, handCheckNeeded, pqrQualifies, supportCheck, type SupportPqr, type SupportWps } from '../../../../shared/qualification/procedure-support'
 
 // A 10 ga (0.1345 in) short-circuit GMAW coupon, P-No. 1, F-No. 6, welded to the 2019 edition.
 const coupon = (over: Partial<SupportPqr> = {}): SupportPqr => ({
@@ -91,5 +91,38 @@ describe('ranges a groove PQR does not limit (from memory)', () => {
     const check = supportCheck(draft, [coupon()])
     expect(check.supported).toBe(true)
     expect(check.findings.filter(f => f.met).map(f => f.clause)).toEqual(expect.arrayContaining(['QW-202.2(c)', 'QW-403']))
+  })
+})
+
+describe('supportCheck for an AWS D1.1 WPS qualified by test (values invented; tables from memory)', () => {
+  // A 3/8 in SMAW plate tested 3G at 50 °F, as welded: D1.1:2015 Table 4.2 (from memory) qualifies 1/8 to 3/4 in.
+  const d11Pqr = (over: Partial<SupportPqr> = {}) => coupon({ code: 'aws-d1.1', edition: '2020', process: 'SMAW', transfer: null, couponThickness: 0.375, depositThickness: 0.375, fNumber: null, pNumber: null, preheat: 50, pwht: 'none', testPosition: '3G', ...over })
+  const d11Wps = (over: Partial<SupportWps> = {}) => wps({ code: 'aws-d1.1', edition: '2020', process: 'SMAW', transfer: null, thickness: { groove: { min: 0.125, max: 0.75 } }, baseMetals: undefined, fillers: [{ fNumber: '4' }], preheatMin: 50, pwht: { required: false }, positions: ['V'], ...over })
+
+  it('compared variables met: nothing outside support, the rest is left to the signed hand check', () => {
+    const check = supportCheck(d11Wps(), [d11Pqr()])
+    expect(check.checked).toBe(true)
+    expect(check.rulesMissing).toBe(false)
+    expect(check.violations.filter(v => !v.byHand)).toEqual([])
+    expect(check.violations.some(v => v.byHand && v.clause === 'Table 6.5')).toBe(true)
+    expect(check.supported).toBe(false)
+    expect(handCheckNeeded(check)).toBe(true)
+  })
+
+  it('a preheat more than 25 °F under the PQR (D1.1:2015 Table 4.5, from memory) sits on the preheat field and blocks approval', () => {
+    const check = supportCheck(d11Wps({ preheatMin: 20 }), [d11Pqr()])
+    expect(findingsFor(check, 'preheatMin').map(f => f.clause)).toEqual(['Table 6.5'])
+    expect(handCheckNeeded(check)).toBe(false)
+  })
+
+  it('overhead is not qualified by a 3G test (each test its own position, from memory); PWHT written as a temperature is PWHT', () => {
+    expect(findingsFor(supportCheck(d11Wps({ positions: ['V', 'O'] }), [d11Pqr()]), 'positions')).toHaveLength(1)
+    expect(findingsFor(supportCheck(d11Wps(), [d11Pqr({ pwht: null, pwhtTemperature: 1150 })]), 'pwht')).toHaveLength(1)
+  })
+
+  it('a PQR that does not record its test position: cannot tell, not approvable by statement', () => {
+    const check = supportCheck(d11Wps(), [d11Pqr({ testPosition: null })])
+    expect(findingsFor(check, 'positions')[0]!.text).toContain('not recorded')
+    expect(handCheckNeeded(check)).toBe(false)
   })
 })
