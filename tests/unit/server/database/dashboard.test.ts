@@ -6,11 +6,10 @@ import { eq } from 'drizzle-orm'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { openDatabase, type Database } from '../../../../server/database/client'
 import { processStandings, welders } from '../../../../server/database/schema'
-import { dashboard, refreshStandings } from '../../../../server/database/standings'
+import { chainOf, dashboard, refreshStandings } from '../../../../server/database/standings'
 import { seedLargeShop } from '../../../../scripts/seed-large'
 import { lapseWeeks } from '../../../../shared/qualification/lapse-weeks'
 import { standingOn } from '../../../../shared/qualification/process-standing'
-import type { CodeId } from '../../../../shared/rules/types'
 
 // The dashboard's counts, week buckets and lists come from aggregate queries over the kept standings; they must say what
 // the shared rules say when every standing is read and judged one by one (standingOn, lapseWeeks).
@@ -36,7 +35,7 @@ describe('dashboard from aggregate queries', () => {
     const all = await database.db.select({ s: processStandings, name: welders.name, stamp: welders.stamp, status: welders.status })
       .from(processStandings).innerJoin(welders, eq(welders.id, processStandings.welderId))
     const rows = all.filter(r => r.status === 'active')
-      .map(r => ({ ...standingOn({ ...r.s, code: r.s.code as CodeId }, today), welderId: r.s.welderId, welderName: r.name, welderStamp: r.stamp }))
+      .map(r => ({ ...standingOn(chainOf(r.s), today), welderId: r.s.welderId, welderName: r.name, welderStamp: r.stamp }))
       .sort((a, b) => a.lapsesOn.localeCompare(b.lapsesOn) || a.welderName.localeCompare(b.welderName) || a.welderStamp.localeCompare(b.welderStamp) || a.process.localeCompare(b.process))
     const answer = await dashboard(database.db, today)
     // Days left cross-checked with dayjs, not the date library the code uses.
