@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest'
-import { judgeProcedures, judgeWelders, resolveJoint, type CandidateRow, type TestRow } from '../../../../shared/qualification/joint-coverage'
+import { judgeProcedures, judgeWelders, resolveJoint, type CandidateRow, type ResolvedJoint, type TestRow } from '../../../../shared/qualification/joint-coverage'
 import { continuityChain } from '../../../../shared/qualification/process-standing'
 
 // "Who can weld it?" for welders: each welder's certified tests against one joint, and where the process stands.
 // Positions: ASME BPVC IX Table QW-461.9 (docs/sources.md §A3: 1G plate → F; 3G plate → F, V groove); P-No.: QW-423.1
 // (§A6); lapse: QW-322.1(a) with the §A4 date convention; 14 ga = 0.0747 in (Manufacturers' Standard Gauge, §D).
 // Conversions at 25.4 mm per inch exactly. All records here are invented for the test.
-const joint = { process: 'SMAW', unit: 'in' as const, form: 'plate' as const, weld: 'groove' as const, position: 'V' as const, thickness: 0.5, pNumber: '1', fNumber: 4, backing: true }
+const joint: ResolvedJoint = { process: 'SMAW', unit: 'in', form: 'plate', weld: 'groove', position: 'V', thickness: 0.5, pNumber: '1', fNumber: 4, backing: true }
 const test = (id: number, positions: string[], extra: Partial<TestRow> = {}): TestRow => ({
   id, test_date: '2026-01-10', code: 'asme-ix', edition: '2023', unit: 'in', process: 'SMAW', transfer: null, form: 'plate', weld: 'groove',
   coupon_thickness: 0.375, deposit_thickness: null, layers: null, outside_diameter: null, p_number: '1', f_number: '4', backing: true, positions, ...extra,

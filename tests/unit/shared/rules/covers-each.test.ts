@@ -38,4 +38,10 @@ describe('a set of tests against one weld', () => {
     const no = covers(t(['1G'])) as unknown as R
     expect([no.answer, no.record, no.undetermined]).toEqual(['not-covered', [], []])
   })
+  it('the order of the tests does not matter: the first test covering, or the first one that cannot tell, decides alike', () => {
+    const first = covers([t(['3G']), t(['1G'])]) as unknown as R
+    expect([first.covered, first.answer]).toEqual([true, 'covered'])
+    const telling = covers([t(['3G'], { pNumber: undefined }), t(['1G'])]) as unknown as R
+    expect([telling.answer, telling.record]).toEqual(['cannot-tell', ['test.pNumber']])
+  })
 })
