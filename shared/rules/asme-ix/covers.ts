@@ -1,3 +1,4 @@
+import { codeName } from '../caution'
 import type { CoversInput, FillerForm, ProcessVariables, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
@@ -197,7 +198,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
 
   if (production.code !== undefined) {
     const same = production.code === 'asme-ix'
-    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'QW-301', same ? 'The joint is welded to ASME IX.' : `The joint is welded to ${production.code}; an ASME IX test does not qualify it.`, 'convention'))
+    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'QW-301', same ? 'The joint is welded to ASME IX.' : `The joint is welded to ${codeName(production.code)}; an ASME IX test does not qualify it.`, 'convention'))
   }
   const isGroove = test.weld === 'groove'
   if (production.weld === 'groove') {

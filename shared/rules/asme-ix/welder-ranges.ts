@@ -120,7 +120,7 @@ export function welderRanges(input: WelderTestInput, context: RuleContext): Weld
     else {
       result.fNumbers = qw433(fLayer.fNumber, input.backing, context.edition)
     }
-    reasons.push({ clause: 'QW-433, QW-402.4', text: `F-No. ${fLayer.fNumber}${layers.length > 1 ? ` (${fLayer.process})` : ''} ${input.backing === undefined ? 'with backing not recorded' : input.backing ? 'with' : 'without'} backing qualifies F-No. ${result.fNumbers.numbers.join(', ')} ${result.fNumbers.withoutBacking ? 'with and without backing' : 'with backing only'}.`, basis: 'memory' })
+    reasons.push({ clause: 'QW-433, QW-402.4', text: `F-No. ${fLayer.fNumber}${layers.length > 1 ? ` (${fLayer.process})` : ''} ${input.backing === undefined ? '(backing not recorded)' : input.backing ? 'with backing' : 'without backing'} qualifies F-No. ${result.fNumbers.numbers.join(', ')} ${result.fNumbers.withoutBacking ? 'with and without backing' : 'with backing only'}.`, basis: 'memory' })
   }
   if (input.pNumber !== undefined) {
     const p = qw4231(input.pNumber, context.edition)

@@ -1,3 +1,4 @@
+import { codeName } from '../caution'
 import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
@@ -32,7 +33,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
 
   if (production.code !== undefined) {
     const same = production.code === 'aws-d1.1'
-    reasons.push(reason(same ? 'met' : 'not-met', 'code', tables.essentials, same ? 'The joint is welded to AWS D1.1.' : `The joint is welded to ${production.code}; an AWS D1.1 test does not qualify it.`, 'convention'))
+    reasons.push(reason(same ? 'met' : 'not-met', 'code', tables.essentials, same ? 'The joint is welded to AWS D1.1.' : `The joint is welded to ${codeName(production.code)}; an AWS D1.1 test does not qualify it.`, 'convention'))
   }
 
   // Process (GMAW-S is a process of its own for welders), then the variables of that process.

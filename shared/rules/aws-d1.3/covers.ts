@@ -1,3 +1,4 @@
+import { codeName } from '../caution'
 import type { CoversInput, ProductionWeld, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
@@ -24,7 +25,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   })
   if (production.code !== undefined) {
     const same = production.code === 'aws-d1.3'
-    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'D1.3 4.7', same ? 'The joint is welded to AWS D1.3.' : `The joint is welded to ${production.code}; an AWS D1.3 test does not qualify it.`, 'convention'))
+    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'D1.3 4.7', same ? 'The joint is welded to AWS D1.3.' : `The joint is welded to ${codeName(production.code)}; an AWS D1.3 test does not qualify it.`, 'convention'))
   }
   if (production.thickness !== undefined && !withinD13Scope(production.thickness, u)) {
     reasons.push(reason('not-met', 'scope', 'D1.3 scope', scopeText(production.thickness, u), 'verified'))

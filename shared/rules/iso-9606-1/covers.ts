@@ -1,3 +1,4 @@
+import { codeName } from '../caution'
 import type { CoversInput, ProductionWeld, WeldSides, WelderTestInput } from '../inputs'
 import type { CoverReason, CoversResult } from '../results'
 import type { RuleContext } from '../types'
@@ -34,7 +35,7 @@ function one(test: WelderTestInput, production: ProductionWeld, context: RuleCon
   const positions = productionPositions(production).map(p => p.toUpperCase())
   if (production.code !== undefined) {
     const same = production.code === 'iso-9606-1'
-    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'ISO 9606-1, 1', same ? 'The joint is welded to ISO 9606-1.' : `The joint is welded to ${production.code}; an ISO 9606-1 test does not qualify it.`, 'convention'))
+    reasons.push(reason(same ? 'met' : 'not-met', 'code', 'ISO 9606-1, 1', same ? 'The joint is welded to ISO 9606-1.' : `The joint is welded to ${codeName(production.code)}; an ISO 9606-1 test does not qualify it.`, 'convention'))
   }
   const tLayers = testLayers(test)
   const named = productionLayers(production)

@@ -74,3 +74,76 @@ describe('ASME IX coverage answers, variable by variable', () => {
     ])
   })
 })
+
+// [variable, state, clause, text, record] of each finding, for the shorter cases below.
+const rows = (r: Record<string, unknown>) => (r.reasons as { variable: string, state: string, clause: string, text: string, record?: string }[]).map(x => [x.variable, x.state, x.clause, x.text, x.record ?? ''])
+
+describe('ASME IX coverage answers: fillet tests, other codes, other processes, missing values', () => {
+  const fillet = { process: 'SMAW', form: 'plate', weld: 'fillet', testPositions: ['2F'], couponThickness: 0.125 }
+  it('a 1/8 in fillet test qualifies base metal T to 2T (QW-452.5, from memory): 1/4 in yes, 0.26 in no, unstated: record it', () => {
+    const at = (thickness?: number) => covers(fillet, { process: 'SMAW', form: 'plate', weld: 'fillet', position: 'H', ...(thickness === undefined ? {} : { thickness }) })
+    expect(rows(at(0.25))).toEqual([
+      ['position', 'met', 'QW-461.9', 'Fillet H: the test qualifies F, H.', ''], // 2F row
+      ['thickness', 'met', 'QW-452.5', 'Base metal 0.25 in: qualified 1/8 in to 1/4 in.', ''],
+      ['process', 'met', 'QW-350', 'SMAW was tested.', ''],
+    ])
+    expect(at(0.25).covered).toBe(true)
+    expect(rows(at(0.26))[1]).toEqual(['thickness', 'not-met', 'QW-452.5', 'Base metal 0.26 in: qualified 1/8 in to 1/4 in.', ''])
+    expect(rows(at())[1]).toEqual(['thickness', 'not-recorded', 'QW-452.5', 'The test qualifies base metal 1/8 in to 1/4 in; the production thickness is not given.', 'production.thickness'])
+    expect(at().record).toEqual(['production.thickness'])
+  })
+  it('a 3/16 in fillet test qualifies every thickness; an unrecorded coupon thickness asks for it', () => {
+    const thick = covers({ ...fillet, couponThickness: 0.1875 }, { process: 'SMAW', form: 'plate', weld: 'fillet', position: 'F', thickness: 2 })
+    expect(rows(thick)[1]).toEqual(['thickness', 'met', 'QW-452.5', 'A fillet test coupon of 3/16 in or more qualifies all base metal thicknesses and fillet sizes.', ''])
+    const unknown = covers({ ...fillet, couponThickness: undefined }, { process: 'SMAW', form: 'plate', weld: 'fillet', position: 'F', thickness: 2 })
+    expect(rows(unknown)[1]).toEqual(['thickness', 'not-recorded', 'QW-452.5', 'The fillet test coupon thickness was not recorded.', 'test.couponThickness'])
+  })
+  it('a fillet test on a groove weld to another code: each refusal named, the code in its full name', () => {
+    const r = covers({ ...fillet, couponThickness: 0.1875 }, { process: 'SMAW', form: 'pipe', weld: 'groove', position: 'F', outsideDiameter: 3, code: 'aws-d1.1' })
+    expect(r.answer).toBe('not-covered')
+    expect(rows(r).slice(0, 4)).toEqual([
+      ['code', 'not-met', 'QW-301', 'The joint is welded to AWS D1.1; an ASME IX test does not qualify it.', ''],
+      ['weld', 'not-met', 'QW-452.5', 'A fillet test qualifies fillet welds only, not groove welds.', ''],
+      ['position', 'not-met', 'QW-461.9', 'Groove F on pipe of 24 in OD or less: the test qualifies none; not F.', ''],
+      ['diameter', 'met', 'QW-461.9 †', 'OD 3 in: qualified 2-7/8 in to unlimited.', ''],
+    ])
+  })
+  it('a groove test on a fillet weld of unnamed process: qualified in size and diameter, the process asked for', () => {
+    const r = covers({ process: 'SMAW', form: 'plate', weld: 'groove', testPositions: ['3G'], couponThickness: 0.375 }, { form: 'pipe', weld: 'fillet', position: 'V' })
+    expect([r.answer, r.record]).toEqual(['cannot-tell', ['production.process']])
+    expect(rows(r)).toEqual([
+      ['weld', 'met', 'QW-452.6, QW-303.1', 'A groove test qualifies fillet welds of all sizes, thicknesses and diameters.', ''],
+      ['position', 'met', 'QW-461.9', 'Fillet V: the test qualifies F, H, V.', ''], // 3G row, column C
+      ['diameter', 'met', 'QW-452.6', 'A groove test qualifies fillet welds of all sizes, thicknesses and diameters.', ''],
+      ['process', 'not-recorded', 'QW-350', 'Production does not name its process: cannot tell, state it; the test was SMAW (its other variables are compared as for that process).', 'production.process'],
+      ['process', 'met', 'QW-350', 'SMAW was tested.', ''],
+    ])
+  })
+  it('another process needs its own test; pipe of unknown OD: V only in column A, so cannot tell', () => {
+    const r = covers({ process: 'SMAW', form: 'plate', weld: 'groove', testPositions: ['3G'], couponThickness: 0.375 }, { process: 'GTAW', form: 'pipe', weld: 'groove', positions: ['F', 'V'] })
+    expect(rows(r)).toEqual([
+      ['weld', 'met', 'QW-303.1', 'A groove test qualifies groove welds.', ''],
+      ['position', 'not-recorded', 'QW-461.9', 'Groove V on pipe is qualified only over 24 in OD (column A); the pipe OD is not given.', 'production.outsideDiameter'],
+      ['diameter', 'not-recorded', 'QW-403.16', 'The pipe OD is not given.', 'production.outsideDiameter'],
+      ['process', 'not-met', 'QW-350', 'The test was SMAW; GTAW needs its own test.', ''],
+    ])
+  })
+  it('a combination coupon (QW-306): each production process within its own deposit; a pipe test without its OD asks for it', () => {
+    const r = covers(
+      { form: 'pipe', weld: 'groove', testPositions: ['5G'], couponThickness: 0.5, processes: [{ process: 'GTAW', depositThickness: 0.125 }, { process: 'SMAW', depositThickness: 0.375, layers: 3 }] },
+      { form: 'pipe', weld: 'groove', position: 'V', outsideDiameter: 4, processes: [{ process: 'GTAW', depositThickness: 0.1 }, { process: 'SMAW', depositThickness: 0.5 }], code: 'asme-ix' },
+    )
+    expect([r.answer, r.record]).toEqual(['cannot-tell', ['test.outsideDiameter']])
+    expect(rows(r)).toEqual([
+      ['code', 'met', 'QW-301', 'The joint is welded to ASME IX.', ''],
+      ['weld', 'met', 'QW-303.1', 'A groove test qualifies groove welds.', ''],
+      ['position', 'met', 'QW-461.9', 'Groove V on pipe of 24 in OD or less: the test qualifies F, V, O.', ''], // 5G row, column B
+      ['diameter', 'not-recorded', 'QW-452.3', 'The test pipe OD was not recorded.', 'test.outsideDiameter'],
+      ['process', 'met', 'QW-350', 'GTAW was tested in the combination coupon (QW-306; each process within its own deposit).', ''],
+      ['deposit', 'met', 'QW-404.30, QW-452.1(b)', 'GTAW deposit 0.1 in: qualified up to 1/4 in.', ''], // 2 × 1/8 in
+      ['process', 'met', 'QW-350', 'SMAW was tested in the combination coupon (QW-306; each process within its own deposit).', ''],
+      ['deposit', 'met', 'QW-404.30, QW-452.1(b)', 'SMAW deposit 0.5 in: qualified up to 3/4 in.', ''], // 3/8 in < 1/2 in: 2t
+      ['backing', 'met', 'QW-402.4', 'Production with backing: qualified by the test (with backing).', ''], // a later layer is welded on the earlier deposit
+    ])
+  })
+})

@@ -73,4 +73,27 @@ describe('ASME IX welder test answers, reason by reason', () => {
     expect(r.reasons).toEqual([{ clause: 'QW-461.9', text: 'Fillet welds: all positions (F, H, V, O). A fillet test qualifies no groove welds.', basis: 'memory' }])
     for (const key of ['thickness', 'diameter', 'depositMax', 'bendSpecimens', 'fNumbers']) expect(r).not.toHaveProperty(key)
   })
+  it('a combination coupon (QW-306, from memory): each process its own deposit, and the combined deposit', () => {
+    const combo = (processes: unknown[]) => wr({ form: 'pipe', weld: 'groove', testPositions: ['6G'], outsideDiameter: 6.625, couponThickness: 0.75, processes })
+    const unlimited = combo([{ process: 'GTAW', depositThickness: 0.125 }, { process: 'SMAW', depositThickness: 0.5, layers: 4 }])
+    expect(unlimited.deposits).toEqual([{ process: 'GTAW', depositMax: 0.25, clause: 'QW-452.1(b)' }, { process: 'SMAW', depositMax: null, clause: 'QW-452.1(b)' }]) // 2t; 1/2 in in 3+ layers: maximum
+    expect(unlimited.combinedDepositMax).toBeNull()
+    expect(unlimited.bendSpecimens).toEqual({ face: 0, root: 0, side: 4, total: 4 }) // 5/8 in of weld metal, 6G: 4 side (QW-452.1(a))
+    expect((unlimited.reasons as { clause: string, text: string }[]).slice(0, 3).map(x => x.text)).toEqual([
+      'GTAW: Deposit of 1/8 in: up to 2t = 1/4 in.',
+      'SMAW: Deposit of 1/2 in (1/2 in or more) in 4 layers: the maximum to be welded.',
+      'The combination: each process within its own deposit (GTAW 1/4 in, SMAW maximum to be welded); the combined deposit up to the maximum to be welded.',
+    ])
+    const limited = combo([{ process: 'GTAW', depositThickness: 0.125, fNumber: 6 }, { process: 'GMAW', transfer: 'short-circuit', depositThickness: 0.25 }])
+    expect(limited.deposits).toEqual([{ process: 'GTAW', depositMax: 0.25, clause: 'QW-452.1(b)' }, { process: 'GMAW', transfer: 'short-circuit', depositMax: 0.275, clause: 'QW-404.32' }]) // 1.1t
+    expect(limited.combinedDepositMax).toBe(0.525) // 1/4 + 0.275 in
+    expect(limited.reasons).toContainEqual({ clause: 'QW-306', text: 'The combination: each process within its own deposit (GTAW 1/4 in, GMAW 0.275 in); the combined deposit up to 0.525 in.', basis: 'memory' })
+    expect(limited.reasons).toContainEqual({ clause: 'QW-433, QW-402.4', text: 'F-No. 6 (GTAW) (backing not recorded) qualifies F-No. 6 with backing only.', basis: 'memory' })
+    expect(limited.undetermined).toEqual([{ field: 'backing', needed: 'QW-433, QW-402.4: whether the test had backing says whether the F-Nos. are qualified without backing (given here with backing only)' }])
+    const open = combo([{ process: 'GTAW', depositThickness: 0.125 }, { process: 'SMAW' }])
+    expect(open.deposits).toEqual([{ process: 'GTAW', depositMax: 0.25, clause: 'QW-452.1(b)' }, { process: 'SMAW', clause: 'QW-452.1(b) Note 1' }])
+    expect(open).not.toHaveProperty('combinedDepositMax')
+    expect(open.undetermined).toEqual([{ field: 'processes[1].depositThickness', needed: 'QW-452.1(b) Note 1: the SMAW deposit gives the deposit that process qualifies' }])
+    expect(open.bendSpecimens).toEqual({ face: 0, root: 0, side: 4, total: 4 }) // the coupon's 3/4 in stands in for the unknown sum
+  })
 })
