@@ -62,9 +62,9 @@ describe('reading PQRs', () => {
   it('lists PQRs for staff only, filtered on the server', async () => {
     const all = await inspector.json<{ total: number, items: { number: string, status: string }[] }>('/api/pqrs?sort=number')
     expect(all.status).toBe(200)
-    expect(all.body.items.map(p => p.number)).toEqual(['PQR-K101', 'PQR-K102', 'PQR-K103', 'PQR-K104', 'PQR-K105'])
+    expect(all.body.items.map(p => p.number)).toEqual(['PQR-K101', 'PQR-K102', 'PQR-K103', 'PQR-K104', 'PQR-K105', 'WPQR-ISO-07'])
     const recorded = await inspector.json<{ items: { number: string }[] }>('/api/pqrs?status=recorded')
-    expect(recorded.body.items.map(p => p.number)).toEqual(['PQR-K104'])
+    expect(recorded.body.items.map(p => p.number)).toEqual(['PQR-K104', 'WPQR-ISO-07'])
     expect((await welder.fetch('/api/pqrs')).status).toBe(403)
     expect((await auditor.fetch('/api/pqrs')).status).toBe(403)
     expect((await inspector.fetch('/api/pqrs?status=lost')).status).toBe(400)
