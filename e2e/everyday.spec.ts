@@ -192,7 +192,7 @@ test('the sheet gauge picker clears when the thickness is typed by hand', async 
   await page.goto('/procedures/new')
   await expect(page.getByRole('button', { name: 'Save draft' })).toBeEnabled()
   await page.getByRole('combobox', { name: 'Add a supporting PQR' }).fill('PQR-K')
-  await page.getByRole('option').first().click()
+  await page.getByRole('listbox', { name: 'Add a supporting PQR' }).getByRole('option').first().click()
   await page.getByRole('button', { name: /^Fill from PQR-/ }).first().click()
   const gauge = page.getByLabel('Sheet gauge, thickest')
   await gauge.selectOption('10')
