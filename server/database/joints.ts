@@ -596,7 +596,8 @@ export async function registerProjects(db: Db, user: SessionUser) {
   if (granted && !granted.length) return []
   return db.select({
     id: projects.id, number: projects.number, name: projects.name,
-    joints: sql<number>`(select count(*)::int from joints j where j.project_id = ${projects.id})`,
-    welded: sql<number>`(select count(*)::int from joints j where j.project_id = ${projects.id} and j.welded_on is not null)`,
+    // Qualified by hand: inside the subquery an interpolated column would render as a bare "id" and name the joint's own id.
+    joints: sql<number>`(select count(*)::int from joints j where j.project_id = "projects"."id")`,
+    welded: sql<number>`(select count(*)::int from joints j where j.project_id = "projects"."id" and j.welded_on is not null)`,
   }).from(projects).where(granted ? inArray(projects.id, granted) : undefined).orderBy(asc(projects.number))
 }

@@ -35,6 +35,18 @@ beforeAll(async () => {
 afterAll(async () => server?.stop())
 
 describe('the weld register', () => {
+  it('lists each project\'s register with the count of its own joints, as its own list reports them', async () => {
+    const { status, body } = await supervisor.json<{ id: number, joints: number, welded: number }[]>('/api/registers')
+    expect(status).toBe(200)
+    expect(body.length, 'a check over an empty list proves nothing').toBeGreaterThan(0)
+    for (const p of body) {
+      const all = await supervisor.json<{ total: number }>(`/api/projects/${p.id}/joints?pageSize=1`)
+      expect(p.joints, `project ${p.id}`).toBe(all.body.total)
+      expect(p.welded).toBeLessThanOrEqual(p.joints)
+    }
+    expect(body.some(p => p.joints > 1), 'the demo registers hold several joints each').toBe(true)
+  })
+
   it('refuses an assignment the coverage rules do not cover, with the reasons, and stores nothing', async () => {
     // KB-06 holds no GTAW test at all; KB-W02 has no GTAW layer (ASME BPVC IX, QW-301 and QW-401: from memory)
     const res = await send(supervisor, `${project}/joints`, seam('T-REFUSED', [{ welderId: idOf('KB-06'), process: 'GTAW', fNumber: 6 }]))

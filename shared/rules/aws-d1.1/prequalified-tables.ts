@@ -54,7 +54,7 @@ export interface BaseMetalRow {
 
 const t3_4 = printed('3/4', 20)
 
-const read2015 = 'D1.1:2015 Table 3.1 and Table 3.3, read on public copies (pdfcoffee, scribd)'
+const read2015 = 'D1.1:2015 Table 3.1 and Table 3.3, read in a copy of the 2015 edition (docs/sources.md)'
 
 /** A subset of the approved base metals (Table 3.1 in 2015, Table 5.3 from 2020) with their group and preheat categories. */
 export const baseMetalRows: BaseMetalRow[] = [
