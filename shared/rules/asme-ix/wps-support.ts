@@ -2,6 +2,7 @@ import type { PqrLayer, PqrRecord, WpsLayer, WpsSupportInput } from '../inputs'
 import type { CoverReason, LayerSupport, WpsSupportResult } from '../results'
 import type { RuleContext } from '../types'
 import { pqrLayers, wpsLayers } from '../layers'
+import { pqrLabel, union, type Interval } from '../pqr-pool'
 import { refuse } from '../refusal'
 import { toughness as judgeToughness } from '../toughness'
 import { formatLength, formatRange, scale, toMicro } from '../units'
@@ -10,21 +11,7 @@ import { asmeProcess, isShortCircuit } from './processes'
 import { procedureRanges } from './procedure-ranges'
 import { qw4241 } from './qw-424'
 
-type Interval = [number, number]
-
-/** Join intervals that overlap or touch. */
-function union(intervals: Interval[]): Interval[] {
-  const sorted = [...intervals].sort((a, b) => a[0] - b[0])
-  const joined: Interval[] = []
-  for (const [low, high] of sorted) {
-    const last = joined[joined.length - 1]
-    if (last && low <= last[1]) last[1] = Math.max(last[1], high)
-    else joined.push([low, high])
-  }
-  return joined
-}
-
-const label = (pqr: PqrRecord, i: number) => pqr.id ?? `PQR ${i + 1}`
+const label = pqrLabel
 
 /** Supplementary essential variables (with toughness) and essential variables Rootface does not compare, per process (QW-250 series, from memory). */
 const byHandRows: { clause: string, text: string, processes?: string[], toughness?: boolean }[] = [

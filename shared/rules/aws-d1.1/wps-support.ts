@@ -1,15 +1,14 @@
-import type { PqrRecord, WpsSupportInput } from '../inputs'
+import type { WpsSupportInput } from '../inputs'
 import type { CoverReason, LayerSupport, WpsSupportResult } from '../results'
 import type { RuleContext } from '../types'
 import { pqrLayers, wpsLayers } from '../layers'
+import { pqrLabel, union, type Interval } from '../pqr-pool'
 import { refuse } from '../refusal'
 import { toughness as judgeToughness } from '../toughness'
 import { formatRange, toMicro } from '../units'
 import { answerOf, reason, recordOf, undeterminedOf } from '../variables'
 import { clause4 } from './editions'
 import { d11ProcedureTables, positionOf, procedureRanges } from './procedure-ranges'
-
-type Interval = [number, number]
 
 const processes = ['SMAW', 'SAW', 'GMAW', 'FCAW', 'GTAW']
 
@@ -32,18 +31,7 @@ export const preheatDrop = { in: 25, mm: 15 } as const
 /** With CVN testing, heat input may rise at most 10 % above the PQR's (Table 4.6 in 2015, from memory). */
 export const heatInputRise = 1.1
 
-function union(intervals: Interval[]): Interval[] {
-  const sorted = [...intervals].sort((a, b) => a[0] - b[0])
-  const joined: Interval[] = []
-  for (const [low, high] of sorted) {
-    const last = joined[joined.length - 1]
-    if (last && low <= last[1]) last[1] = Math.max(last[1], high)
-    else joined.push([low, high])
-  }
-  return joined
-}
-
-const label = (pqr: PqrRecord, i: number) => pqr.id ?? `PQR ${i + 1}`
+const label = pqrLabel
 const isShort = (transfer?: string) => transfer === 'short-circuit'
 
 /** Essential variables of the D1.1 table the WPS record does not hold, so Rootface does not compare them: check by hand. */
