@@ -2,6 +2,8 @@ import { count, getTableColumns, is, sql } from 'drizzle-orm'
 import { getTableConfig, PgTable } from 'drizzle-orm/pg-core'
 import type { Db } from './client'
 import * as schema from './schema'
+import { recordAudit } from './audit'
+import type { SessionUser } from '../utils/auth'
 
 // The way out: every record of the shop as tables of rows (CSV or XLSX per table), and one JSON archive of every table
 // with the uploaded files inside, which loads into an empty database with nothing lost (scripts/db-import-records.ts).
@@ -137,4 +139,17 @@ export async function loadArchive(db: Db, archive: RecordsArchive, writeFile: (k
     files++
   }
   return { tables: loaded, files }
+}
+
+/** The quality manager's export of every record as one archive, audited. */
+export async function exportArchive(db: Db, user: Pick<SessionUser, 'id'>, readFile: (key: string) => Promise<Buffer | null>): Promise<RecordsArchive> {
+  await recordAudit(db, { accountId: user.id, action: 'export.archive', recordType: 'shop' })
+  return buildArchive(db, readFile)
+}
+
+/** One table's rows for a CSV or XLSX export, audited (null: no such table). */
+export async function exportTable(db: Db, user: Pick<SessionUser, 'id'>, name: string, format: string) {
+  const table = await tableRows(db, name)
+  if (table) await recordAudit(db, { accountId: user.id, action: 'export.table', recordType: 'shop', after: { table: name, format, rows: table.rows.length } })
+  return table
 }

@@ -1,5 +1,4 @@
-import { buildArchive } from '../../database/records-archive'
-import { recordAudit } from '../../database/audit'
+import { exportArchive } from '../../database/records-archive'
 import { readStoredFile } from '../../utils/storage'
 
 /**
@@ -8,9 +7,7 @@ import { readStoredFile } from '../../utils/storage'
  */
 export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
-  const db = await useDb()
-  await recordAudit(db, { accountId: user.id, action: 'export.archive', recordType: 'shop' })
-  const archive = await buildArchive(db, readStoredFile)
+  const archive = await exportArchive(await useDb(), user, readStoredFile)
   setResponseHeaders(event, {
     'content-type': 'application/json; charset=utf-8',
     'content-disposition': `attachment; filename="rootface-records-${archive.exportedAt.slice(0, 10)}.json"`,

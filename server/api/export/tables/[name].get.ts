@@ -1,6 +1,5 @@
 import { exportTableParamSchema, exportTableQuerySchema } from '#shared/schemas/records'
-import { tableRows } from '../../../database/records-archive'
-import { recordAudit } from '../../../database/audit'
+import { exportTable } from '../../../database/records-archive'
 import { toCsv, toXlsx } from '../../../utils/spreadsheets'
 
 /** GET /api/export/tables/:name?format=csv|xlsx: every row of one table, as stored (quality manager) */
@@ -8,10 +7,8 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['supervisor'])
   const { name } = await validParams(event, exportTableParamSchema)
   const { format } = await validQuery(event, exportTableQuerySchema)
-  const db = await useDb()
-  const table = await tableRows(db, name)
+  const table = await exportTable(await useDb(), user, name, format)
   if (!table) throw httpError(missing('Table'))
-  await recordAudit(db, { accountId: user.id, action: 'export.table', recordType: 'shop', after: { table: name, format, rows: table.rows.length } })
   const body = format === 'csv' ? `\uFEFF${toCsv(table.columns, table.rows)}` : await toXlsx(name, table.columns, table.rows)
   setResponseHeaders(event, {
     'content-type': format === 'csv' ? 'text/csv; charset=utf-8' : 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
