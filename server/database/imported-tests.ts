@@ -2,6 +2,7 @@ import { and, asc, desc, eq } from 'drizzle-orm'
 import type { Db } from './client'
 import { accounts, importedTests } from './schema'
 import { recordAudit } from './audit'
+import { mayReadWelder } from './welders'
 import type { SessionUser } from '../utils/auth'
 import type { ImportedTestRow } from '../../shared/schemas/imported-test'
 import { conflict, missing } from '../../shared/types/outcome'
@@ -24,7 +25,9 @@ export async function storeImportedTests(db: Db, rows: NewImported[], user: Sess
 }
 
 /** A welder's imported history, newest first, with who confirmed each (the caller has checked who may read the welder). */
-export async function importedTestsOf(db: Db, welderId: number) {
+/** A welder's imported test history as `user` may read it (a welder their own; another's is missing). */
+export async function importedTestsOf(db: Db, user: SessionUser, welderId: number) {
+  if (!await mayReadWelder(db, user, welderId)) return missing('Welder')
   return db.select({
     id: importedTests.id, code: importedTests.code, edition: importedTests.edition, process: importedTests.process, testDate: importedTests.testDate,
     positions: importedTests.positions, thickness: importedTests.thickness, diameter: importedTests.diameter, otherRanges: importedTests.otherRanges,

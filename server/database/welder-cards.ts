@@ -5,6 +5,8 @@ import { attachments, welders, welderTests } from './schema'
 import { standingsOf } from './standings'
 import { depositsOf, variablesOf } from './welder-test-columns'
 import { recordAudit } from './audit'
+import { mayReadWelder } from './welders'
+import { shopNameOf } from './mail'
 import type { SessionUser } from '../utils/auth'
 import { qualifiedRangesOf } from '../../shared/qualification/test-ranges'
 import { cardLines, type CardTest } from '../../shared/qualification/id-card'
@@ -35,7 +37,9 @@ async function linesOf(db: Db, welderId: number, today: string) {
 }
 
 /** Everything the card prints, for staff (and the welder for their own card). */
-export async function cardOf(db: Db, welderId: number, today: string) {
+/** The welder's card as `user` may read it: staff any welder's, a welder their own (another's is missing, as on every welder record). */
+export async function cardOf(db: Db, user: SessionUser, welderId: number, today: string) {
+  if (!await mayReadWelder(db, user, welderId)) return missing('Welder')
   const [welder] = await db.select({ id: welders.id, name: welders.name, stamp: welders.stamp, status: welders.status, cardToken: welders.cardToken, cardPublic: welders.cardPublic })
     .from(welders).where(eq(welders.id, welderId)).limit(1)
   if (!welder) return missing('Welder')
@@ -46,6 +50,7 @@ export async function cardOf(db: Db, welderId: number, today: string) {
   return {
     welder: who, today, lines: await linesOf(db, welderId, today), photo: photo ?? null,
     link: { public: cardPublic && !!cardToken, token: cardPublic ? cardToken : null },
+    shopName: await shopNameOf(db),
   }
 }
 
