@@ -1,6 +1,6 @@
 import { z } from 'zod'
 import { equipmentKinds, equipmentStates } from '../vocabulary/equipment-kinds'
-import { calendarDate, optionalText, requiredText } from './fields'
+import { calendarDate, optionalText, requiredText, versionSchema } from './fields'
 import { listQuerySchema } from './list'
 
 /** One welding machine or meter in the shop's register, with its calibration. */
@@ -20,7 +20,7 @@ export type EquipmentInput = z.input<typeof equipmentSchema>
 export type Equipment = z.infer<typeof equipmentSchema>
 
 export const equipmentPatchSchema = equipmentSchema.extend({
-  version: z.number({ required_error: 'version is required', invalid_type_error: 'version must be a number' }).int().positive(),
+  version: versionSchema,
 })
 export type EquipmentPatch = z.infer<typeof equipmentPatchSchema>
 

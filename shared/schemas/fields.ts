@@ -102,7 +102,7 @@ export function windowOf(what: string) {
 
 export const idSchema = z.number({ invalid_type_error: 'must be a record id' }).int('must be a record id').positive('must be a record id').max(2_147_483_647)
 export const versionSchema = z.number({ required_error: 'Send the version you edited', invalid_type_error: 'version must be a whole number' })
-  .int('version must be a whole number').positive('version must be a whole number')
+  .int('version must be a whole number').positive('version must be a whole number').max(2_147_483_647, 'version is too large')
 export const codeIdSchema = z.enum(codeIds, { errorMap: () => ({ message: 'Pick a code' }) })
 export const unitIdSchema = z.enum(['in', 'mm'], { errorMap: () => ({ message: 'Pick in or mm' }) })
 export const transferIdSchema = z.enum(['short-circuit', 'globular', 'spray', 'pulse'], { errorMap: () => ({ message: 'Pick a transfer mode' }) })

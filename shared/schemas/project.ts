@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { versionSchema } from './fields'
 import { isoDay } from './sheet'
 
 const id = (what: string) => z.coerce.number({ invalid_type_error: `Choose ${what}` }).int(`Choose ${what}`).positive(`Choose ${what}`).max(2_147_483_647)
@@ -27,7 +28,7 @@ const periodIssue = { message: 'The end must not be before the start', path: ['e
 export const projectSchema = z.object(projectFields).strict().refine(periodRule, periodIssue)
 export type ProjectInput = z.infer<typeof projectSchema>
 
-const version = z.number({ required_error: 'version is required', invalid_type_error: 'version must be a number' }).int().positive()
+const version = versionSchema
 
 /** An edit names the version of the row it was made on, so a stale edit is refused (409). */
 export const projectPatchSchema = z.object({ ...projectFields, version })

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { versionSchema } from './fields'
 import { codeSchema, unitSchema } from '../rules/requests'
 import { getRuleSet } from '../rules'
 import { processIds } from '../vocabulary/records'
@@ -204,7 +205,7 @@ export const welderTestSchema = z.object(variables).superRefine(consistent)
 export type WelderTestInput = z.infer<typeof welderTestSchema>
 
 /** An edit sends the whole record back with the version it was read at (409 when stale). */
-export const welderTestPatchSchema = z.object({ ...variables, version: z.number({ required_error: 'version is required' }).int().positive() })
+export const welderTestPatchSchema = z.object({ ...variables, version: versionSchema })
   .superRefine(consistent)
 export type WelderTestPatch = z.infer<typeof welderTestPatchSchema>
 

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { versionSchema } from './fields'
 
 const text = (what: string, max: number) => z.string({ required_error: `${what} is required`, invalid_type_error: `${what} must be text` })
   .trim().min(1, `${what} is required`).max(max, `At most ${max} characters`)
@@ -17,6 +18,6 @@ export type WelderInput = z.infer<typeof welderSchema>
 
 /** An edit carries the version it was read at; a stale one is refused (409). */
 export const welderPatchSchema = welderSchema.partial().extend({
-  version: z.number({ required_error: 'version is required', invalid_type_error: 'version must be a number' }).int().positive(),
+  version: versionSchema,
 })
 export type WelderPatch = z.infer<typeof welderPatchSchema>
