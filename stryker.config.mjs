@@ -6,6 +6,7 @@ const slices = {
   'aws-d1.1': ['shared/rules/aws-d1.1/**/*.ts'],
   'aws-d1.3': ['shared/rules/aws-d1.3/**/*.ts'],
   'iso-9606-1': ['shared/rules/iso-9606-1/**/*.ts'],
+  'iso-15614-1': ['shared/rules/iso-15614-1/**/*.ts'],
   'rules': ['shared/rules/*.ts'],
   'qualification': ['shared/qualification/**/*.ts'],
 }
