@@ -122,6 +122,9 @@ test('the welder\'s phone page: fewest days left first, only WPSs of processes t
   const shown = await page.locator('[data-testid^="process-"]').evaluateAll(els => els.map(e => e.getAttribute('data-testid')))
   expect(shown).toEqual(mine.standings.map(s => `process-${s.process}`))
   const current = new Set(mine.standings.filter(s => s.standing !== 'lapsed').map(s => s.process))
+  // Guard the checks below: with no procedure (or no current process) they would pass on an empty answer.
+  expect(current.size).toBeGreaterThan(0)
+  expect(mine.procedures.length).toBeGreaterThan(0)
   for (const p of mine.procedures) {
     expect(p.processes.length).toBeGreaterThan(0)
     expect(p.processes.every(process => current.has(process)), `${p.number}: ${p.processes.join(' + ')}`).toBe(true)
