@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest'
+import dayjs from 'dayjs'
+import { welderRanges } from '../../../../../shared/rules/aws-d1.3/welder-ranges'
 import { ok, refused } from '../helpers'
 
 // AWS D1.3 sheet steel, whole answers and each limit below, at and above. docs/sources.md §B5 (D1.3 welder guide,
@@ -154,5 +156,23 @@ describe('AWS D1.3 coverage (§B5), 2008 clause numbers', () => {
     const mm = cv({ ...test, couponThickness: 2 }, { ...joint, thickness: 4 }, 'mm')
     expect(row(mm, 'thickness')).toEqual([['thickness', 'met', 'D1.3 4.7.2', 'Sheet 4 mm: qualified 1 mm to 4 mm.', '']])
     expect(rows(cv({ ...test, couponThickness: 2 }, { ...joint, thickness: 4.9 }, 'mm'))[0]![3]).toContain('over 4.8 mm')
+  })
+})
+
+describe('AWS D1.3 period of effectiveness and Table 4.4 spellings (§B6: six months, as D1.1; partly read)', () => {
+  it('last use 2026-01-15: current through the six-month anniversary, lapsed the day after (dates cross-checked with dayjs)', () => {
+    const r = ok({ code: 'aws-d1.3', check: 'continuity', unit: 'in', input: { lastUse: '2026-01-15', on: '2026-02-01' } })
+    const anniversary = dayjs('2026-01-15').add(6, 'month')
+    expect([r.current, r.lastCurrentDay, r.lapsesOn]).toEqual([true, anniversary.format('YYYY-MM-DD'), anniversary.add(1, 'day').format('YYYY-MM-DD')])
+    expect(r.rule).toBe('A welder\'s qualification remains in effect unless the welder has not engaged in the process for a period exceeding six months.')
+    expect(r.reasons).toContainEqual({ clause: 'D1.3 period of effectiveness', text: r.rule, basis: 'partial' })
+    expect(ok({ code: 'aws-d1.3', check: 'continuity', unit: 'in', input: { lastUse: '2026-01-15', on: anniversary.add(1, 'day').format('YYYY-MM-DD') } }).current).toBe(false)
+  })
+  it('test positions are read whole: 12G, 1GR and G1 are refused; lower case is accepted', () => {
+    for (const p of ['12G', '1GR', 'G1']) expect(no(square(0.0747, { testPositions: [p] }))).toBe(`testPositions: ${p} is not a square-groove test position of AWS D1.3 Table 4.4`)
+    expect((wr(square(0.0747, { testPositions: ['2g'] })).positions as { groove: string[] }).groove).toEqual(['F', 'H'])
+  })
+  it('an empty position list is refused by the rule itself too (the request schema refuses it first)', () => {
+    expect(() => welderRanges(square(0.0747, { testPositions: [] }) as never, { code: 'aws-d1.3', edition: '2008', unit: 'in' })).toThrow('testPositions: give at least one test position')
   })
 })
