@@ -138,6 +138,7 @@ describe('AWS D1.3 coverage (§B5), 2008 clause numbers', () => {
   it('process and joint type: another process or joint needs its own test', () => {
     expect(row(cv(test, { ...joint, process: 'GMAW' }), 'process')).toEqual([['process', 'not-met', 'D1.3 4.7 (process)', 'The test was SMAW; GMAW needs its own test.', '']])
     expect(row(cv(test, { ...joint, process: 'smaw' }), 'process')[0]![1]).toBe('met')
+    expect((cv(test, { ...joint, process: 'GMAW' }).reasons as { variable: string, process?: string }[]).filter(x => x.variable === 'process').map(x => x.process)).toEqual(['GMAW'])
     expect(row(cv(test, { ...joint, joint: 'flare-groove' }), 'joint')).toEqual([['joint', 'not-met', 'D1.3 4.7 (joint type)', 'The test was square-groove; flare-groove is a different joint type and needs its own test.', '']])
   })
   it('a fillet test: the fillet row of Table 4.4 and the sheet up to the scope; a groove joint gets the groove row (none)', () => {
