@@ -88,9 +88,10 @@ describe('imported test history, confirmed by the inspector, keeps the standing 
     const old = '2023-02-10'
     const { id, history } = await importedHistory('RC-02', [`RC-02,SMAW,AWS D1.1,2020,${old},"1G, 2G",unlimited,C-201`])
     expect((await send(inspector, 'POST', `/api/imported-tests/${history[0]!.id}/confirm`)).status).toBe(200)
-    // AWS D1.1:2020 6.2.3.1 (from memory): 6 months without welding with the process; 2023-02-10 + 6 months, by dayjs
+    // AWS D1.1:2020 6.2.3 ("a period exceeding six months", SOURCES B): still qualified on the six-month anniversary,
+    // lapsed from the next day; 2023-02-10 + 6 months + 1 day, by dayjs
     const [s] = await standingsOf(id)
-    expect(s).toMatchObject({ process: 'SMAW', lapsesOn: day(dayjs(old).add(6, 'month')), standing: 'lapsed' })
+    expect(s).toMatchObject({ process: 'SMAW', lapsesOn: day(dayjs(old).add(6, 'month').add(1, 'day')), standing: 'lapsed' })
 
     const fresh = day(dayjs(today).subtract(20, 'day'))
     const second = await importedHistory('RC-03', [`RC-03,SMAW,ASME IX,2019,${fresh},1G,"up to 1/2 in",C-301`])
