@@ -23,7 +23,8 @@ export default defineConfig({
     command: `rm -rf ${dataRoot} && node ${output}/server/index.mjs`,
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
-    timeout: 60_000,
+    // A busy machine seeds the demo shop slowly: E2E_SERVER_TIMEOUT (ms) gives it longer.
+    timeout: Number(process.env.E2E_SERVER_TIMEOUT ?? 60_000),
     env: {
       PORT: String(port), HOST: '127.0.0.1', NUXT_DATA_DIR: `${dataRoot}/db`, DATABASE_URL: '',
       AUTH_ORIGIN: `http://127.0.0.1:${port}/api/auth`, AUTH_SECRET: 'e2e-secret-for-rootface-browser-tests',

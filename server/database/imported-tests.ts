@@ -1,6 +1,6 @@
 import { and, asc, desc, eq } from 'drizzle-orm'
 import type { Db } from './client'
-import { accounts, importedTests } from './schema'
+import { accounts, importedTests, standingRefresh } from './schema'
 import { recordAudit } from './audit'
 import { mayReadWelder } from './welders'
 import type { SessionUser } from '../utils/auth'
@@ -24,7 +24,6 @@ export async function storeImportedTests(db: Db, rows: NewImported[], user: Sess
   })
 }
 
-/** A welder's imported history, newest first, with who confirmed each (the caller has checked who may read the welder). */
 /** A welder's imported test history as `user` may read it (a welder their own; another's is missing). */
 export async function importedTestsOf(db: Db, user: SessionUser, welderId: number) {
   if (!await mayReadWelder(db, user, welderId)) return missing('Welder')
@@ -36,7 +35,10 @@ export async function importedTestsOf(db: Db, user: SessionUser, welderId: numbe
     .where(eq(importedTests.welderId, welderId)).orderBy(desc(importedTests.testDate), asc(importedTests.id))
 }
 
-/** The inspector confirms an imported test against the original record; a confirmed one stays confirmed (409). */
+/**
+ * The inspector confirms an imported test against the original record; a confirmed one stays confirmed (409). Once
+ * confirmed it keeps the welder's standing for its process and continuity like a certified test; before, it never does.
+ */
 export async function confirmImportedTest(db: Db, user: SessionUser, id: number) {
   const [row] = await db.select().from(importedTests).where(eq(importedTests.id, id)).limit(1)
   if (!row) return missing('Imported test')
@@ -45,6 +47,8 @@ export async function confirmImportedTest(db: Db, user: SessionUser, id: number)
     const [saved] = await tx.update(importedTests).set({ state: 'confirmed', confirmedBy: user.id, confirmedAt: new Date() })
       .where(and(eq(importedTests.id, id), eq(importedTests.state, 'imported'))).returning()
     if (!saved) return conflict('This imported test is confirmed already.')
+    // From now on it feeds the kept standing of its process like a certified test (server/database/standings.ts).
+    await tx.insert(standingRefresh).values({ welderId: saved.welderId, process: saved.process }).onConflictDoNothing()
     await recordAudit(tx as unknown as Db, { accountId: user.id, action: 'confirm', recordType: 'imported-test', recordId: id, before: { state: row.state }, after: { state: 'confirmed' } })
     return saved
   })

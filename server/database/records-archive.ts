@@ -1,5 +1,6 @@
 import { count, getTableColumns, is, sql } from 'drizzle-orm'
 import { getTableConfig, PgTable } from 'drizzle-orm/pg-core'
+import { refreshStandings } from './standings'
 import type { Db } from './client'
 import * as schema from './schema'
 import { recordAudit } from './audit'
@@ -86,6 +87,9 @@ export interface RecordsArchive {
 
 /** Every exported table and every uploaded file (read through `readFile`: disk or bucket). A file that is gone is listed with an empty body. */
 export async function buildArchive(db: Db, readFile: (key: string) => Promise<Buffer | null>): Promise<RecordsArchive> {
+  // The kept standings go out as they stand now: a change marked for recompute (standing_refresh is not exported) is
+  // applied first, so the archive never carries a standing older than its own tests, confirmations and revocations.
+  await refreshStandings(db)
   const out: RecordsArchive = { format: archiveFormat, formatVersion: archiveFormatVersion, exportedAt: new Date().toISOString(), tables: {}, files: [] }
   for (const { name } of exportedTables()) out.tables[name] = (await tableRows(db, name))!.rows
   for (const a of out.tables.attachments ?? []) {

@@ -696,8 +696,9 @@ export const readingEquipment = pgTable('reading_equipment', {
 ])
 
 // Welder test history brought in from a shop's own records: the ranges exactly as recorded there, kept "imported, not
-// recomputed" (no rule has looked at them) until an inspector confirms them against the original. They do not feed
-// standings or coverage: those stay with the tests recorded in Rootface.
+// recomputed" (no rule has looked at them) until an inspector confirms them against the original. Once confirmed a
+// test keeps the standing of its process (process_standings) like a certified test; never before. Coverage stays with
+// the tests recorded in Rootface (the imported ranges are text, not computed).
 export const importedTests = pgTable('imported_tests', {
   id: serial('id').primaryKey(),
   welderId: integer('welder_id').notNull().references(() => welders.id),

@@ -1,6 +1,6 @@
 import { and, asc, between, desc, eq, ilike, inArray, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
-import { accounts, continuityEntries, isoValidityRecords, procedures, processStandings, qualificationRevocations, standingRefresh, welders, welderTests } from './schema'
+import { accounts, continuityEntries, importedTests, isoValidityRecords, procedures, processStandings, qualificationRevocations, standingRefresh, welders, welderTests } from './schema'
 import { allOf, containsPattern } from '../utils/list'
 import type { LapseWeek, LapseWeeks } from '../../shared/qualification/lapse-weeks'
 import { addDays, format, parseISO } from 'date-fns'
@@ -45,8 +45,15 @@ async function recompute(tx: Db, marked: { welderId: number, process: string }[]
   // A combination coupon counts for each of its processes (ASME IX QW-452.1(b)); older tests list none and count for their one.
   // A welding operator's test is kept under its own key (standingKey), apart from the same person's manual qualification.
   // A test counts only for processes of its own code family (ISO 4063 numbers for ISO 9606-1, names otherwise).
-  const tests = certified.flatMap(({ processes, qualifiedAs, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process: standingKey(process, qualifiedAs) })))
-    .filter(t => sameFamily(t.code, processOfKey(t.process)))
+  // Imported test history counts once an inspector has confirmed it against the original record, like a certified test
+  // (never before). Its ids are negated so they never meet a welder test's id (a revocation's basis is a welder test).
+  const confirmed = await tx.select({ id: importedTests.id, welderId: importedTests.welderId, process: importedTests.process, code: importedTests.code, edition: importedTests.edition, testDate: importedTests.testDate })
+    .from(importedTests).where(and(inArray(importedTests.welderId, ids), eq(importedTests.state, 'confirmed')))
+  const tests = [
+    ...certified.flatMap(({ processes, qualifiedAs, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process: standingKey(process, qualifiedAs) }))),
+    ...confirmed.map(t => ({ ...t, id: -t.id, iso: null as unknown })),
+  ].filter(t => sameFamily(t.code, processOfKey(t.process)))
+    .sort((a, b) => b.testDate.localeCompare(a.testDate) || b.id - a.id)
   const isoIds = [...new Set(tests.filter(t => t.code === 'iso-9606-1').map(t => t.id))]
   const isoRecords = isoIds.length
     ? await tx.select({ testId: isoValidityRecords.testId, kind: isoValidityRecords.kind, on: isoValidityRecords.on }).from(isoValidityRecords).where(inArray(isoValidityRecords.testId, isoIds))

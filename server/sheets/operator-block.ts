@@ -13,7 +13,7 @@ export function operatorBlocks(t: { code: string, process: string, backing: bool
   const v = t.operator as OperatorVariables | null
   const result = operatorRangesOf({ ...t, operator: v })
   const variables: SheetBlock = {
-    heading: 'Welding operator (machine or automatic welding)', clause: t.code === 'asme-ix' ? 'QW-361' : undefined,
+    heading: 'Welding operator (machine or automatic welding)', clause: t.code === 'asme-ix' ? 'QW-361' : t.code === 'aws-d1.1' ? 'AWS D1.1 Clause 6' : undefined,
     fields: v
       ? [
           { label: 'Welding', value: operatorWords.mode[v.mode] },
@@ -26,6 +26,6 @@ export function operatorBlocks(t: { code: string, process: string, backing: bool
       : [{ label: 'Operator variables', value: 'not recorded' }],
   }
   return [variables, result.ranges
-    ? reasonsBlock('Qualified as a welding operator', result.ranges.reasons, 'QW-361')
+    ? reasonsBlock('Qualified as a welding operator', result.ranges.reasons, t.code === 'asme-ix' ? 'QW-361' : 'AWS D1.1 Clause 6')
     : { heading: 'Qualified as a welding operator', fields: [{ label: 'Ranges', value: result.byHand ?? 'check by hand' }] }]
 }

@@ -119,3 +119,37 @@ export function signoffRequestMail(input: {
     subject: `${words.subject}: ${input.notice.record.label}`, ...body,
   }
 }
+
+/**
+ * A revocation (ASME IX QW-322.1(b) and its like): the welder, when they have an account, and each quality manager hear
+ * of it at once, in plain words: what was revoked, by whom, why, and what restores it.
+ */
+export function revocationMail(input: {
+  revocation: { id: number, process: string, revokedOn: string, reason: string, clause: string, restore: string }
+  welder: { id: number, name: string, stamp: string }
+  recipient: { id: number, name: string, email: string, isWelder: boolean }
+  revokedBy: string
+  link: string
+  shopName: string
+}): OutgoingMail {
+  const r = input.revocation
+  const w = input.welder
+  const paragraphs = input.recipient.isWelder
+    ? [`${input.revokedBy} revoked your ${r.process} qualification (stamp ${w.stamp}) on ${r.revokedOn}.`,
+        `The reason given: “${r.reason}”`,
+        `From today you may not weld with ${r.process} on work that needs this qualification. It comes back when you pass a new test (${r.restore}).`]
+    : [`${input.revokedBy} revoked the ${r.process} qualification of ${w.name} (stamp ${w.stamp}) on ${r.revokedOn}.`,
+        `The reason given: “${r.reason}”`,
+        `It lapsed at once on every list, welder page, reminder and packet. A new certified test restores it (${r.restore}); until then, plan the work without this welder for ${r.process}.`]
+  const body = renderLetter({
+    greeting: `Hello ${input.recipient.name},`,
+    paragraphs,
+    action: { label: input.recipient.isWelder ? 'See your qualifications' : 'Open the welder\'s page', href: input.link },
+    closing: input.recipient.isWelder ? ['If you think this is a mistake, speak to your inspector or quality manager.'] : [],
+    footnotes: [`Revoked under ${r.clause}. Rootface records the revocation; the inspector and your shop's quality manual decide.`],
+  }, input.shopName)
+  return {
+    dedupeKey: `revocation:${r.id}:${input.recipient.id}`, kind: 'revocation', to: input.recipient.email,
+    subject: input.recipient.isWelder ? `Your ${r.process} qualification was revoked` : `${w.stamp} ${w.name}: ${r.process} qualification revoked`, ...body,
+  }
+}

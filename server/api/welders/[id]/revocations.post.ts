@@ -7,7 +7,7 @@ export default defineEventHandler(async (event) => {
   const user = await requireRole(event, ['inspector'])
   const { id } = await validParams(event, idParamSchema)
   const input = await validBody(event, revocationSchema)
-  const row = orThrow(await revokeQualification(await useDb(), user, id, input))
+  const row = orThrow(await revokeQualification(await useDb(), user, id, input, appUrl(event)))
   setResponseStatus(event, 201)
   return row
 })
