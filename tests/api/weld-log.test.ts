@@ -189,6 +189,9 @@ describe('the weld register', () => {
     expect(register).toContain(squeeze('Customer concession CC-17'))
     const code = /verify\/([A-Z0-9]{10})/.exec(register)?.[1]
     expect(code).toBeTruthy()
+    // Reading the PDF keeps this process busy for seconds, past the server's keep-alive; let the pooled sockets the
+    // server closed meanwhile be dropped before the next request (otherwise fetch may reuse one: "other side closed").
+    await new Promise(r => setTimeout(r, 100))
     const verified = await (await fetch(`${server.url}/api/verify/${code}`)).json() as { state: string, sheet: string }
     expect(verified).toMatchObject({ state: 'unchanged', sheet: 'Weld register' })
     // A result added afterwards changes the register: the printed code now says so
