@@ -1,7 +1,7 @@
 import { and, asc, count, desc, eq, ilike, inArray, lte, max, or, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import {
-  auditorGrants, continuityEntries, issuedRegisters, issuedSheets, jointExaminations, jointOverrides, jointRepairs, jointWelders, joints, procedures, projectProcedures, projectWelders, projects,
+  auditEvents, auditorGrants, continuityEntries, issuedSheets, jointExaminations, jointOverrides, jointRepairs, jointWelders, joints, procedures, projectProcedures, projectWelders, projects,
   signatures, welders,
 } from './schema'
 import { recordAudit } from './audit'
@@ -71,58 +71,113 @@ export async function assignedProcedure(db: Db, procedureId: number | null): Pro
   return { id: p.id, number: p.number, revision: p.revision, status: p.status, code: p.code as CodeId, processes: processList, rows }
 }
 
+type TestFact = TestRow & { welder_id: number, name: string, stamp: string }
+
+/** What the check needs to know of welders' history: their certified tests and continuity uses per welder × process. */
+export interface CandidateFacts {
+  /** `welderId|process` → the certified tests of that process made on or before the last day asked, newest first */
+  tests: Map<string, TestFact[]>
+  /** `welderId|process` → the days of the continuity entries of that process up to the last day asked */
+  uses: Map<string, string[]>
+}
+
+const factKey = (welderId: number, process: string) => `${welderId}|${process}`
+
 /**
- * Each welder's certified tests of a process made on or before `on`, and the continuity chain of that process as it
- * stood on `on` (the newest such test starts it, uses up to that day keep it): where the welder stood that day.
+ * Every certified test and continuity use of these welders for these processes up to `upTo`, in two queries however many
+ * welders, processes and days the caller then asks about (candidatesFrom picks a day).
  */
-export async function candidatesOn(db: Db, welderIds: number[], process: string, on: string): Promise<Map<number, CandidateRow>> {
-  const result = new Map<number, CandidateRow>()
-  if (!welderIds.length) return result
+export async function candidateFacts(db: Db, welderIds: number[], processes: string[], upTo: string): Promise<CandidateFacts> {
+  const facts: CandidateFacts = { tests: new Map(), uses: new Map() }
+  const ids = [...new Set(welderIds)]
+  const list = [...new Set(processes)]
+  if (!ids.length || !list.length) return facts
+  const idList = sql.join(ids.map(id => sql`${id}`), sql`, `)
+  const processList = sql.join(list.map(process => sql`${process}`), sql`, `)
   const tests = await db.execute(sql`
-    select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, ${process}::text as process,
+    select t.id, t.welder_id, t.test_date::text as test_date, t.code, t.edition, t.unit, p.process::text as process,
            case when d.e is null then t.transfer else d.e->>'transfer' end as transfer, t.form, t.weld, t.coupon_thickness,
            case when d.e is null then t.deposit_thickness else (d.e->>'depositThickness')::float8 end as deposit_thickness, t.layers,
            t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions, t.progression, w.name, w.stamp
     from welder_tests t
       join welders w on w.id = t.welder_id
-      left join lateral (select e from jsonb_array_elements(t.deposits) e where e->>'process' = ${process} limit 1) d on true
-    where t.status = 'certified' and (t.process = ${process} or ${process} = any(t.processes)) and t.test_date <= ${on}::date
-      and t.welder_id in (${sql.join(welderIds.map(id => sql`${id}`), sql`, `)})
-    order by t.test_date desc, t.id desc`) as unknown as { rows: (TestRow & { welder_id: number, name: string, stamp: string })[] }
-  const uses = await db.select({ welderId: continuityEntries.welderId, weldedOn: continuityEntries.weldedOn }).from(continuityEntries)
-    .where(and(inArray(continuityEntries.welderId, welderIds), eq(continuityEntries.process, process), lte(continuityEntries.weldedOn, on)))
+      join (select unnest(array[${processList}]::text[]) as process) p on t.process = p.process or p.process = any(t.processes)
+      left join lateral (select e from jsonb_array_elements(t.deposits) e where e->>'process' = p.process limit 1) d on true
+    where t.status = 'certified' and t.test_date <= ${upTo}::date and t.welder_id in (${idList})
+    order by t.test_date desc, t.id desc`) as unknown as { rows: TestFact[] }
   for (const row of tests.rows) {
-    const { welder_id: welderId, name, stamp, ...test } = row
-    const id = Number(welderId)
-    let candidate = result.get(id)
-    if (!candidate) {
-      // The newest test on or before the day starts the chain (QW-322.2(a) renewal restores the process).
-      const chain = continuityChain({ process, code: test.code as CodeId, edition: test.edition, testDate: test.test_date, uses: uses.filter(u => u.welderId === id).map(u => u.weldedOn) }, on)
-      candidate = { id, name, stamp, tests: [], chain }
-      result.set(id, candidate)
-    }
-    candidate.tests.push({ ...test, positions: Array.isArray(test.positions) ? test.positions : String(test.positions).replace(/^\{|\}$/g, '').split(',').filter(Boolean) })
+    const key = factKey(Number(row.welder_id), row.process)
+    const positions = Array.isArray(row.positions) ? row.positions : String(row.positions).replace(/^\{|\}$/g, '').split(',').filter(Boolean)
+    facts.tests.set(key, [...(facts.tests.get(key) ?? []), { ...row, positions }])
+  }
+  const uses = await db.select({ welderId: continuityEntries.welderId, process: continuityEntries.process, weldedOn: continuityEntries.weldedOn }).from(continuityEntries)
+    .where(and(inArray(continuityEntries.welderId, ids), inArray(continuityEntries.process, list), lte(continuityEntries.weldedOn, upTo)))
+  for (const use of uses) {
+    const key = factKey(use.welderId, use.process)
+    facts.uses.set(key, [...(facts.uses.get(key) ?? []), use.weldedOn])
+  }
+  return facts
+}
+
+/**
+ * Each welder's certified tests of a process made on or before `on`, and the continuity chain of that process as it
+ * stood on `on` (the newest such test starts it, uses up to that day keep it): where the welder stood that day.
+ */
+export function candidatesFrom(facts: CandidateFacts, welderIds: number[], process: string, on: string): Map<number, CandidateRow> {
+  const result = new Map<number, CandidateRow>()
+  for (const id of new Set(welderIds)) {
+    const tests = (facts.tests.get(factKey(id, process)) ?? []).filter(t => t.test_date <= on)
+    const newest = tests[0]
+    if (!newest) continue
+    const uses = (facts.uses.get(factKey(id, process)) ?? []).filter(day => day <= on)
+    // The newest test on or before the day starts the chain (QW-322.2(a) renewal restores the process).
+    const chain = continuityChain({ process, code: newest.code as CodeId, edition: newest.edition, testDate: newest.test_date, uses }, on)
+    result.set(id, { id, name: newest.name, stamp: newest.stamp, tests: tests.map(({ welder_id: _w, name: _n, stamp: _s, ...test }) => test), chain })
   }
   return result
 }
 
-/** The check of a joint's WPS and welders on a day (assignment: today; completion and repair: the weld date). */
-export async function checkAssignment(db: Db, joint: RegisterJoint, procedureId: number | null, crew: JointWelderInput[], on: string): Promise<JointCheck> {
-  const procedure = await assignedProcedure(db, procedureId)
-  const ids = [...new Set(crew.map(c => c.welderId))]
-  const roster = ids.length ? await db.select({ id: welders.id, stamp: welders.stamp, status: welders.status }).from(welders).where(inArray(welders.id, ids)) : []
-  const byProcess = new Map<string, Map<number, CandidateRow>>()
-  for (const process of new Set(crew.map(c => c.process))) {
-    byProcess.set(process, await candidatesOn(db, crew.filter(c => c.process === process).map(c => c.welderId), process, on))
+/** Where each of these welders stood in a process on a day (see candidatesFrom). */
+export async function candidatesOn(db: Db, welderIds: number[], process: string, on: string): Promise<Map<number, CandidateRow>> {
+  return candidatesFrom(await candidateFacts(db, welderIds, [process], on), welderIds, process, on)
+}
+
+/** What a check reads from the database, fetched once for many joints (a weld log import) or for one. */
+export interface CheckContext {
+  procedures: Map<number, AssignedProcedure | null>
+  roster: Map<number, { stamp: string, status: string }>
+  facts: CandidateFacts
+}
+
+/** The WPSs, the welders and their history that checks of these crews up to `upTo` need: a handful of queries in all. */
+export async function checkContext(db: Db, procedureIds: (number | null)[], crews: JointWelderInput[][], upTo: string): Promise<CheckContext> {
+  const procedureMap = new Map<number, AssignedProcedure | null>()
+  for (const id of new Set(procedureIds)) {
+    if (id !== null) procedureMap.set(id, await assignedProcedure(db, id))
   }
+  const all = crews.flat()
+  const ids = [...new Set(all.map(c => c.welderId))]
+  const rows = ids.length ? await db.select({ id: welders.id, stamp: welders.stamp, status: welders.status }).from(welders).where(inArray(welders.id, ids)) : []
+  const facts = await candidateFacts(db, ids, all.map(c => c.process), upTo)
+  return { procedures: procedureMap, roster: new Map(rows.map(r => [r.id, r])), facts }
+}
+
+/** The check of one joint from a fetched context (no query). */
+export function checkWith(context: CheckContext, joint: RegisterJoint, procedureId: number | null, crew: JointWelderInput[], on: string): JointCheck {
+  const procedure = procedureId === null ? null : context.procedures.get(procedureId) ?? null
   const assignments: Assignment[] = crew.map((c) => {
-    const w = roster.find(r => r.id === c.welderId)
+    const w = context.roster.get(c.welderId)
     return {
       welderId: c.welderId, stamp: w?.stamp ?? `#${c.welderId}`, active: w?.status === 'active', process: c.process, layer: c.layer,
-      fNumber: c.fNumber, candidate: byProcess.get(c.process)?.get(c.welderId) ?? null,
+      fNumber: c.fNumber, candidate: candidatesFrom(context.facts, [c.welderId], c.process, on).get(c.welderId) ?? null,
     }
   })
   return checkJoint({ joint, procedure, assignments, on })
+}
+
+/** The check of a joint's WPS and welders on a day (assignment: today; completion and repair: the weld date). */
+export async function checkAssignment(db: Db, joint: RegisterJoint, procedureId: number | null, crew: JointWelderInput[], on: string): Promise<JointCheck> {
+  return checkWith(await checkContext(db, [procedureId], [crew], on), joint, procedureId, crew, on)
 }
 
 /** A refused check passes only with a supervisor's written reason; it is kept with the joint (printed) and audited. */
@@ -440,26 +495,28 @@ export async function registerForPacket(db: Db, projectId: number) {
 }
 export type PacketRegister = Awaited<ReturnType<typeof registerForPacket>>
 
-/** The issue of a register with this content: the same project and content keep one code; a changed register gets a new one. */
+/**
+ * The issue of a register with this content (an issued sheet of kind 'weld-register'): the same project and content
+ * keep one code; a changed register gets a new one (the old code then verifies as changed).
+ */
 export async function issueRegister(db: Db, projectId: number, sha256: string, user: Pick<SessionUser, 'id' | 'name'>) {
-  const match = and(eq(issuedRegisters.projectId, projectId), eq(issuedRegisters.sha256, sha256))
-  const [known] = await db.select().from(issuedRegisters).where(match).limit(1)
+  const match = and(eq(issuedSheets.kind, 'weld-register'), eq(issuedSheets.projectId, projectId), eq(issuedSheets.sha256, sha256))
+  const [known] = await db.select().from(issuedSheets).where(match).limit(1)
   if (known) return known
   for (;;) {
     const code = newVerifyCode()
     const [a] = await db.select({ id: signatures.id }).from(signatures).where(eq(signatures.verifyCode, code)).limit(1)
     const [b] = await db.select({ id: issuedSheets.id }).from(issuedSheets).where(eq(issuedSheets.verifyCode, code)).limit(1)
     if (a || b) continue
-    const [row] = await db.insert(issuedRegisters).values({ projectId, sha256, verifyCode: code, issuedBy: user.id, issuerName: user.name }).onConflictDoNothing().returning()
+    const [row] = await db.insert(issuedSheets).values({ kind: 'weld-register', projectId, sha256, verifyCode: code, issuedBy: user.id, issuerName: user.name }).onConflictDoNothing().returning()
     if (row) return row
   }
 }
 
-/** The issued register a code names, with its project, if any. */
-export async function registerIssueByCode(db: Db, code: string) {
-  const [issue] = await db.select({ issue: issuedRegisters, number: projects.number, name: projects.name }).from(issuedRegisters)
-    .innerJoin(projects, eq(projects.id, issuedRegisters.projectId)).where(eq(issuedRegisters.verifyCode, code)).limit(1)
-  return issue
+/** The project of an issued weld register (the issued sheet of kind 'weld-register' its code names). */
+export async function registerProjectOf(db: Db, projectId: number) {
+  const [project] = await db.select({ number: projects.number, name: projects.name }).from(projects).where(eq(projects.id, projectId)).limit(1)
+  return project
 }
 
 /** How many joints a project's register holds. */
@@ -501,10 +558,23 @@ export async function importWeldLog(db: Db, user: SessionUser, projectId: number
   const marks = [...new Set(rows.map(r => r.mark))]
   const found = marks.length ? await db.select().from(joints).where(and(eq(joints.projectId, projectId), inArray(joints.mark, marks))) : []
   const reference = await referenceOf(db, projectId, '')
-  const plan: { joint: JointRow, weldedOn: string, crew: JointWelderInput[], check: JointCheck, lines: number[] }[] = []
+  // The register's crews of every joint named, in one query; then the WPSs, welders and their history, once for all
+  const open = found.filter(j => !j.weldedOn)
+  const assignedRows = open.length
+    ? await db.select({ jointId: jointWelders.jointId, welderId: jointWelders.welderId, process: jointWelders.process, layer: jointWelders.layer, fNumber: jointWelders.fNumber })
+        .from(jointWelders).where(and(inArray(jointWelders.jointId, open.map(j => j.id)), eq(jointWelders.repair, 0))).orderBy(asc(jointWelders.id))
+    : []
+  const assignedOf = new Map<number, JointWelderInput[]>()
+  for (const { jointId, ...w } of assignedRows) {
+    assignedOf.set(jointId, [...(assignedOf.get(jointId) ?? []), { ...w, process: w.process as JointWelderInput['process'], layer: w.layer as JointWelderInput['layer'] }])
+  }
+  const byMark = new Map(found.map(j => [j.mark, j]))
+  const linesOf = new Map<string, typeof rows>()
+  for (const r of rows) linesOf.set(r.mark, [...(linesOf.get(r.mark) ?? []), r])
+  const checked: { joint: JointRow, weldedOn: string, crew: JointWelderInput[], lines: number[] }[] = []
   for (const mark of marks) {
-    const lines = rows.filter(r => r.mark === mark)
-    const joint = found.find(j => j.mark === mark)
+    const lines = linesOf.get(mark)!
+    const joint = byMark.get(mark)
     const first = lines[0]!
     if (!joint) {
       errors.push({ line: first.line, field: 'mark', message: `No joint ${mark} in this project's register`, value: mark })
@@ -526,18 +596,24 @@ export async function importWeldLog(db: Db, user: SessionUser, projectId: number
     const unknown = lines.filter(l => !byStamp.has(l.stamp.toLowerCase()))
     for (const l of unknown) errors.push({ line: l.line, field: 'stamp', message: `No welder with stamp ${l.stamp} on the roster`, value: l.stamp })
     if (unknown.length) continue
-    const assigned = await crewOf(db, joint.id, 0)
+    const assigned = assignedOf.get(joint.id) ?? []
     const crew = lines.map((l) => {
       const welderId = byStamp.get(l.stamp.toLowerCase())!
       const known = assigned.find(a => a.welderId === welderId && a.process === l.process)
       return { welderId, process: l.process, layer: l.layer ?? known?.layer ?? null, fNumber: l.fNumber ?? known?.fNumber ?? null }
     })
-    const check = await checkAssignment(db, registerJoint(joint), joint.procedureId, crew, first.weldedOn)
+    checked.push({ joint, weldedOn: first.weldedOn, crew, lines: lines.map(l => l.line) })
+  }
+  const lastDay = checked.reduce((day, c) => (c.weldedOn > day ? c.weldedOn : day), '0000-01-01')
+  const context = await checkContext(db, checked.map(c => c.joint.procedureId), checked.map(c => c.crew), lastDay)
+  const plan: { joint: JointRow, weldedOn: string, crew: JointWelderInput[], check: JointCheck, lines: number[] }[] = []
+  for (const c of checked) {
+    const check = checkWith(context, registerJoint(c.joint), c.joint.procedureId, c.crew, c.weldedOn)
     if (!check.ok) {
-      for (const line of refusalLines(check.refusals)) errors.push({ line: first.line, field: 'check', message: `${mark}: ${line}` })
+      for (const line of refusalLines(check.refusals)) errors.push({ line: c.lines[0]!, field: 'check', message: `${c.joint.mark}: ${line}` })
       continue
     }
-    plan.push({ joint, weldedOn: first.weldedOn, crew, check, lines: lines.map(l => l.line) })
+    plan.push({ ...c, check })
   }
   errors.sort((a, b) => a.line - b.line)
   const preview = plan.slice(0, 200).map(p => ({ mark: p.joint.mark, weldedOn: p.weldedOn, welders: p.crew.map(c => `${roster.find(r => r.id === c.welderId)?.stamp} ${c.process}`).join(', ') }))
@@ -545,11 +621,19 @@ export async function importWeldLog(db: Db, user: SessionUser, projectId: number
   if (!commit) return { ...summary, stored: 0 }
   if (errors.length) return invalid('body', [`${errors.length} row error${errors.length === 1 ? '' : 's'}: nothing was imported`], {}, errors)
   const stored = await db.transaction(async (tx) => {
-    for (const p of plan) {
-      await tx.update(joints).set({ weldedOn: p.weldedOn, completionCheck: summaryOf(p.check), version: p.joint.version + 1, updatedAt: new Date() }).where(eq(joints.id, p.joint.id))
-      await tx.delete(jointWelders).where(and(eq(jointWelders.jointId, p.joint.id), eq(jointWelders.repair, 0)))
-      await tx.insert(jointWelders).values(p.crew.map(c => ({ ...c, jointId: p.joint.id, repair: 0 })))
-      await postContinuity(asTx(tx), user, p.joint.id, p.crew, p.weldedOn, `${reference}${p.joint.mark}`)
+    // In slices of 250 joints, a few statements each: the joints, their crews, the continuity each posts, the audit
+    for (let i = 0; i < plan.length; i += 250) {
+      const slice = plan.slice(i, i + 250)
+      const ids = slice.map(p => p.joint.id)
+      const values = sql.join(slice.map(p => sql`(${p.joint.id}::int, ${p.weldedOn}::date, ${JSON.stringify(summaryOf(p.check))}::jsonb, ${p.joint.version + 1}::int)`), sql`, `)
+      await tx.execute(sql`update joints set welded_on = v.welded_on, completion_check = v.completion_check, version = v.version, updated_at = now()
+        from (values ${values}) as v(id, welded_on, completion_check, version) where joints.id = v.id`)
+      await tx.delete(jointWelders).where(and(inArray(jointWelders.jointId, ids), eq(jointWelders.repair, 0)))
+      await tx.insert(jointWelders).values(slice.flatMap(p => p.crew.map(c => ({ ...c, jointId: p.joint.id, repair: 0 }))))
+      const posted = slice.map(p => ({ p, uses: [...new Map(p.crew.map(c => [`${c.welderId}|${c.process}`, { welderId: c.welderId, process: c.process }])).values()] }))
+      await tx.insert(continuityEntries).values(posted.flatMap(({ p, uses }) => uses.map(u => ({ ...u, weldedOn: p.weldedOn, reference: `${reference}${p.joint.mark}`, jointId: p.joint.id, recordedBy: user.id }))))
+      // The same audit row per joint as marking it welded by hand (postContinuity), written together
+      await tx.insert(auditEvents).values(posted.map(({ p, uses }) => ({ accountId: user.id, action: 'from-joint', recordType: 'continuity', recordId: null, before: null, after: { jointId: p.joint.id, weldedOn: p.weldedOn, uses } })))
     }
     await recordAudit(asTx(tx), { accountId: user.id, action: 'import', recordType: 'joint', recordId: null, after: { projectId, joints: plan.map(p => p.joint.id) } })
     return plan.length
@@ -582,8 +666,11 @@ export async function jointTag(db: Db, user: SessionUser, jointId: number, today
   const [project] = await db.select({ id: projects.id, number: projects.number, name: projects.name }).from(projects).where(eq(projects.id, joint.projectId))
   const [wps] = joint.procedureId === null ? [] : await db.select({ id: procedures.id, number: procedures.number, revision: procedures.revision, title: procedures.title, status: procedures.status }).from(procedures).where(eq(procedures.id, joint.procedureId))
   const stamps = assigned.length ? await db.select({ id: welders.id, stamp: welders.stamp }).from(welders).where(inArray(welders.id, assigned.map(a => a.welderId))) : []
+  // The results recorded so far (the inspector records the visual result from the tag itself)
+  const examinations = await db.select({ id: jointExaminations.id, repair: jointExaminations.repair, method: jointExaminations.method, reportNumber: jointExaminations.reportNumber, examinedOn: jointExaminations.examinedOn, accepted: jointExaminations.accepted })
+    .from(jointExaminations).where(eq(jointExaminations.jointId, jointId)).orderBy(asc(jointExaminations.examinedOn), asc(jointExaminations.id))
   return {
-    today, project: project!, procedure: wps ?? null,
+    today, project: project!, procedure: wps ?? null, examinations,
     joint: { id: joint.id, mark: joint.mark, jointType: joint.jointType, weld: joint.weld, unit: joint.unit, pNumberA: joint.pNumberA, pNumberB: joint.pNumberB, thickness: joint.thickness, outsideDiameter: joint.outsideDiameter, positions: joint.positions, progression: joint.progression, weldedOn: joint.weldedOn, rtPercent: joint.rtPercent, utPercent: joint.utPercent },
     welders: assigned.map(a => ({ ...a, stamp: stamps.find(s => s.id === a.welderId)?.stamp ?? '' })),
     check,

@@ -462,14 +462,16 @@ export const packetFiles = pgTable('packet_files', {
   content: bytea('content').notNull(),
 })
 
-// Sheets that are issued rather than signed (a welder's continuity log for a period): the hash of the content
-// as printed and the code of its QR, so the verification page can tell whether the log has changed since.
+// Documents that are issued rather than signed: a welder's continuity log for a period, a project's weld register as
+// its packet prints it. The hash of the content as printed and the code of its QR, so the verification page can tell
+// whether the document has changed since. One table for every kind (the weld register moved here from its own table).
 export const issuedSheets = pgTable('issued_sheets', {
   id: serial('id').primaryKey(),
   kind: text('kind').notNull(),
-  welderId: integer('welder_id').notNull().references(() => welders.id),
-  periodFrom: date('period_from', { mode: 'string' }).notNull(),
-  periodTo: date('period_to', { mode: 'string' }).notNull(),
+  welderId: integer('welder_id').references(() => welders.id),
+  periodFrom: date('period_from', { mode: 'string' }),
+  periodTo: date('period_to', { mode: 'string' }),
+  projectId: integer('project_id').references(() => projects.id, { onDelete: 'cascade' }),
   sha256: text('sha256').notNull(),
   verifyCode: text('verify_code').notNull(),
   issuedBy: integer('issued_by').references(() => accounts.id),
@@ -478,7 +480,11 @@ export const issuedSheets = pgTable('issued_sheets', {
 }, t => [
   uniqueIndex('issued_sheets_verify_code_key').on(t.verifyCode),
   index('issued_sheets_subject_idx').on(t.kind, t.welderId, t.periodFrom, t.periodTo, t.sha256),
-  check('issued_sheets_kind_check', sql`${t.kind} in ('continuity-log')`),
+  index('issued_sheets_project_idx').on(t.kind, t.projectId, t.sha256),
+  check('issued_sheets_kind_check', sql`${t.kind} in ('continuity-log', 'weld-register')`),
+  // What each kind is issued for: a continuity log names its welder and period, a weld register its project.
+  check('issued_sheets_subject_check', sql`(${t.kind} = 'continuity-log' and ${t.welderId} is not null and ${t.periodFrom} is not null and ${t.periodTo} is not null)
+    or (${t.kind} = 'weld-register' and ${t.projectId} is not null)`),
   check('issued_sheets_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
 ])
 
@@ -864,21 +870,6 @@ export const apiTokens = pgTable('api_tokens', {
   windowCount: integer('window_count').notNull().default(0),
 }, t => [uniqueIndex('api_tokens_hash_key').on(t.tokenHash)])
 
-// The joint register as printed in a project's packet: the hash of its content and the code of its QR, so the public
-// verification page can tell whether the register has changed since it was issued.
-export const issuedRegisters = pgTable('issued_registers', {
-  id: serial('id').primaryKey(),
-  projectId: integer('project_id').notNull().references(() => projects.id, { onDelete: 'cascade' }),
-  sha256: text('sha256').notNull(),
-  verifyCode: text('verify_code').notNull(),
-  issuedBy: integer('issued_by').references(() => accounts.id),
-  issuerName: text('issuer_name').notNull(),
-  issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
-}, t => [
-  uniqueIndex('issued_registers_verify_code_key').on(t.verifyCode),
-  index('issued_registers_project_idx').on(t.projectId, t.sha256),
-  check('issued_registers_sha_check', sql`${t.sha256} ~ '^[0-9a-f]{64}$'`),
-])
 // ---- end weld-log ----
 
 // ---- perf ----
@@ -920,3 +911,7 @@ export const qualifiedRangesRefresh = pgTable('qualified_ranges_refresh', {
   testId: integer('test_id').primaryKey(),
 })
 // ---- end perf ----
+
+// ---- weldlog ----
+// issued_registers is folded into issued_sheets (kind 'weld-register', project_id): no table of its own.
+// ---- end weldlog ----

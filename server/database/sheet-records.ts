@@ -264,7 +264,7 @@ export async function signatureByCode(db: Db, code: string) {
   return signature
 }
 
-/** The issued (unsigned) sheet a code names, if any: a continuity log. */
+/** The issued (unsigned) sheet a code names, if any: a continuity log or a weld register. */
 export async function issuedSheetByCode(db: Db, code: string) {
   const [issue] = await db.select().from(issuedSheets).where(eq(issuedSheets.verifyCode, code)).limit(1)
   return issue

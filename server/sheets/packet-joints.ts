@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto'
 import type { Db } from '../database/client'
-import { issueRegister, registerForPacket, registerIssueByCode, type PacketRegister } from '../database/joints'
+import { issueRegister, registerForPacket, registerProjectOf, type PacketRegister } from '../database/joints'
+import type { issuedSheets } from '../database/schema'
 import type { SessionUser } from '../utils/auth'
 import { repairName } from '#shared/vocabulary/joints'
 import type { SheetBlock, SheetModel } from './model'
@@ -94,14 +95,15 @@ export async function jointRegisterSheet(db: Db, plan: PacketPlan, user: Pick<Se
   }
 }
 
-/** The verification page for a register's code: unchanged while the register still hashes to the issued value. */
-export async function verifyRegister(db: Db, code: string): Promise<Verification | null> {
-  const found = await registerIssueByCode(db, code)
-  if (!found) return null
-  const current = registerHash(await registerForPacket(db, found.issue.projectId))
+/** The verification page for an issued weld register: unchanged while the register still hashes to the issued value. */
+export async function verifyRegister(db: Db, issue: typeof issuedSheets.$inferSelect): Promise<Verification | null> {
+  if (issue.projectId === null) return null
+  const project = await registerProjectOf(db, issue.projectId)
+  if (!project) return null
+  const current = registerHash(await registerForPacket(db, issue.projectId))
   return {
-    code, sheet: 'Weld register', number: `WR-${found.number}`, revision: null, subject: `${found.number} ${found.name}`, status: 'issued',
-    signers: [{ meaning: 'issued', name: found.issue.issuerName, at: found.issue.issuedAt.toISOString() }],
-    state: current === found.issue.sha256 ? 'unchanged' : 'changed', signedSha256: found.issue.sha256,
+    code: issue.verifyCode, sheet: 'Weld register', number: `WR-${project.number}`, revision: null, subject: `${project.number} ${project.name}`, status: 'issued',
+    signers: [{ meaning: 'issued', name: issue.issuerName, at: issue.issuedAt.toISOString() }],
+    state: current === issue.sha256 ? 'unchanged' : 'changed', signedSha256: issue.sha256,
   }
 }

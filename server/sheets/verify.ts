@@ -31,7 +31,9 @@ export async function verifyCode(db: Db, code: string): Promise<Outcome<Verifica
   const signature = await signatureByCode(db, code)
   if (signature) return await verifySigned(db, code, signature) ?? missing('Sheet with this code')
   const issue = await issuedSheetByCode(db, code)
-  if (!issue) return await verifyRegister(db, code) ?? missing('Sheet with this code')
+  if (!issue) return missing('Sheet with this code')
+  if (issue.kind === 'weld-register') return await verifyRegister(db, issue) ?? missing('Sheet with this code')
+  if (issue.welderId === null || issue.periodFrom === null || issue.periodTo === null) return missing('Sheet with this code')
   const welder = await welderOf(db, issue.welderId)
   const log = await loadContinuityLog(db, issue.welderId, { from: issue.periodFrom, to: issue.periodTo })
   return {

@@ -7,13 +7,14 @@ import { afterAll, describe, expect, it } from 'vitest'
 import { Client, demo, removeDir, startServer, type TestServer } from './harness'
 
 /**
- * Migrations never lose data: each database made before a round of migrations (tests/fixtures/demo-at-0007.sql and
- * demo-at-0009.sql, the invented demo shop at migrations 0000-0007 and 0000-0009 with signed and issued sheets) is loaded into PGlite and, when
+ * Migrations never lose data: each database made before a round of migrations (tests/fixtures/demo-at-0007.sql,
+ * demo-at-0009.sql and demo-at-0017.sql, the invented demo shop at migrations 0000-0007, 0000-0009 and 0000-0017 with signed
+ * and issued sheets; the 0017 one with weld registers issued in their own table, since folded into issued_sheets) is loaded into PGlite and, when
  * TEST_DATABASE_URL is set, into a PostgreSQL server; the current server migrates it at start-up. Every row of the
  * old tables is still there, every sheet signed or issued before still verifies "unchanged", and the old accounts
  * still sign in with their passwords.
  */
-const fixtures = ['demo-at-0007.sql', 'demo-at-0009.sql']
+const fixtures = ['demo-at-0007.sql', 'demo-at-0009.sql', 'demo-at-0017.sql']
   .map(name => ({ name, sql: readFileSync(join(import.meta.dirname, '../fixtures', name), 'utf8') }))
 
 /** Tables of the fixture whose rows must all survive (a migration may add columns or tables, never drop rows). */
@@ -25,24 +26,38 @@ const keptTables = [
 
 interface Query { (sql: string): Promise<{ rows: Record<string, unknown>[] }> }
 
-/** Row counts and verification codes read straight from the fixture, before any migration. */
+/**
+ * Row counts and verification codes read straight from the fixture, before any migration. Issued documents are counted
+ * together: weld registers issued in their own table (issued_registers, 0016-0017) now live in issued_sheets.
+ */
 async function snapshot(query: Query) {
   const counts: Record<string, number> = {}
   for (const table of keptTables) {
     const { rows } = await query(`select count(*)::int as n from public.${table}`)
     counts[table] = Number(rows[0]!.n)
   }
+  const ownTable = (await query(`select to_regclass('public.issued_registers') is not null as present`)).rows[0]!.present === true
+  const registers = ownTable
+    ? (await query('select verify_code as code from public.issued_registers')).rows.map(r => String(r.code))
+    : (await query(`select verify_code as code from public.issued_sheets where kind = 'weld-register'`)).rows.map(r => String(r.code))
+  if (ownTable) counts.issued_sheets! += registers.length
   const codes = (await query('select verify_code as code from public.signatures union all select verify_code from public.issued_sheets'))
     .rows.map(r => String(r.code))
   const migrations = Number((await query('select count(*)::int as n from drizzle.__drizzle_migrations')).rows[0]!.n)
-  return { counts, codes, migrations }
+  return { counts, codes: [...new Set([...codes, ...registers])], registers, migrations }
 }
+
+const issuedRegisters = (migrations: number) => (migrations >= 18 ? 3 : 0)
 
 type Snapshot = Awaited<ReturnType<typeof snapshot>>
 
 async function checkMigrated(server: TestServer, before: Snapshot, after: Snapshot) {
   // Every row of every old table is still there, and the later migrations were applied.
   expect(after.counts).toEqual(before.counts)
+  // Every weld register issued before is an issued sheet now, under its old code (the 0017 fixture holds three, one per
+  // demo project's packet; the older fixtures predate the register)
+  expect(before.registers.length).toBe(issuedRegisters(before.migrations))
+  expect(after.registers.sort()).toEqual(before.registers.sort())
   expect(after.migrations).toBeGreaterThan(before.migrations - 1)
 
   // Every sheet signed or issued before the migration still verifies unchanged.
@@ -52,6 +67,10 @@ async function checkMigrated(server: TestServer, before: Snapshot, after: Snapsh
     const { status, body } = await anonymous.json<{ state: string }>(`/api/verify/${code}`)
     expect(status, code).toBe(200)
     expect(body.state, code).toBe('unchanged')
+  }
+  for (const code of before.registers) {
+    const { body } = await anonymous.json<{ sheet: string, state: string }>(`/api/verify/${code}`)
+    expect(body, code).toMatchObject({ sheet: 'Weld register', state: 'unchanged' })
   }
 
   // The old accounts sign in with their old password hashes and read their records.

@@ -189,6 +189,9 @@ describe('the weld register', () => {
     expect(register).toContain(squeeze('Customer concession CC-17'))
     const code = /verify\/([A-Z0-9]{10})/.exec(register)?.[1]
     expect(code).toBeTruthy()
+    // Reading the PDF keeps this process busy for seconds, past the server's keep-alive; let the pooled sockets the
+    // server closed meanwhile be dropped before the next request (otherwise fetch may reuse one: "other side closed").
+    await new Promise(r => setTimeout(r, 100))
     const verified = await (await fetch(`${server.url}/api/verify/${code}`)).json() as { state: string, sheet: string }
     expect(verified).toMatchObject({ state: 'unchanged', sheet: 'Weld register' })
     // A result added afterwards changes the register: the printed code now says so
@@ -230,6 +233,36 @@ describe('API tokens for other shop systems', () => {
     expect((await supervisor.fetch(`/api/tokens/${id}`, { method: 'DELETE' })).status).toBe(200)
     expect((await call('/api/ext/joints/welded', token, welded)).status).toBe(401)
     expect((await supervisor.fetch(`/api/tokens/${id}`, { method: 'DELETE' })).status).toBe(404)
+  })
+
+  it('a token holds only its scopes, is no session, is made and revoked only by the quality manager, and a revoked one is refused for every scope', async () => {
+    const both = await newToken(['joints:write', 'continuity:write'])
+    const logOnly = await newToken(['continuity:write'])
+    const entry = { stamp: 'KB-07', process: 'GTAW', weldedOn: yesterday, reference: 'line 3 system, scope check' }
+    const welded = { project: 'KB-2611', mark: 'T-SCOPE', weldedOn: yesterday, welders: [{ stamp: 'KB-04', process: 'SMAW' }] }
+    // A continuity token may not report joints
+    const refused = await call('/api/ext/joints/welded', logOnly.token, welded)
+    expect(refused.status).toBe(403)
+    expect(JSON.stringify(await refused.json())).toContain('joints:write')
+    // A token opens only the routes for other systems, never a session's
+    expect((await fetch(`${server.url}/api/projects`, { headers: { authorization: `Bearer ${both.token}` } })).status).toBe(401)
+    expect((await fetch(`${server.url}/api/tokens`, { headers: { authorization: `Bearer ${both.token}` } })).status).toBe(401)
+    // Only the quality manager makes, lists or revokes tokens
+    expect((await send(inspector, '/api/tokens', { name: 'inspector key', scopes: ['joints:write'] })).status).toBe(403)
+    expect((await inspector.fetch('/api/tokens')).status).toBe(403)
+    expect((await inspector.fetch(`/api/tokens/${both.id}`, { method: 'DELETE' })).status).toBe(403)
+    expect((await auditor.fetch(`/api/tokens/${both.id}`, { method: 'DELETE' })).status).toBe(403)
+    expect((await call('/api/ext/continuity', both.token, entry)).status).toBe(201)
+    // Revoked: refused for each of its scopes; listed as revoked; the revocation audited; another token still works
+    expect((await supervisor.fetch(`/api/tokens/${both.id}`, { method: 'DELETE' })).status).toBe(200)
+    expect((await call('/api/ext/continuity', both.token, entry)).status).toBe(401)
+    expect((await call('/api/ext/joints/welded', both.token, welded)).status).toBe(401)
+    const listed = await supervisor.json<{ id: number, revokedAt: string | null }[]>('/api/tokens')
+    expect(listed.body.find(t => t.id === both.id)?.revokedAt).not.toBeNull()
+    expect(listed.body.find(t => t.id === logOnly.id)?.revokedAt).toBeNull()
+    const audit = await supervisor.json<{ items: { action: string }[] }>(`/api/audit?recordType=api-token&recordId=${both.id}`)
+    expect(audit.body.items.map(e => e.action)).toEqual(expect.arrayContaining(['create', 'revoke']))
+    expect((await call('/api/ext/continuity', logOnly.token, entry)).status).toBe(201)
   })
 
   it('a continuity token logs by stamp; an unknown stamp is a field message; the 61st call in a minute is 429', async () => {
