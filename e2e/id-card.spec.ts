@@ -29,6 +29,7 @@ function scanBackSide(pdf: string): string {
 }
 
 test('the quality manager turns a welder\'s card page on, prints the card, and a phone scanning it sees the welder\'s status', async ({ page, browser }) => {
+  test.setTimeout(120_000) // the PDF and its 300 dpi picture take a while on a busy machine
   await signIn(page, 'supervisor@demo.rootface.test')
   await expect(page).toHaveURL(/\/dashboard$/)
   await page.goto('/welders')
