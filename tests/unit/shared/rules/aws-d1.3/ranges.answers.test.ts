@@ -165,6 +165,7 @@ describe('AWS D1.3 period of effectiveness and Table 4.4 spellings (§B6: six mo
     const r = ok({ code: 'aws-d1.3', check: 'continuity', unit: 'in', input: { lastUse: '2026-01-15', on: '2026-02-01' } })
     const anniversary = dayjs('2026-01-15').add(6, 'month')
     expect([r.current, r.lastCurrentDay, r.lapsesOn]).toEqual([true, anniversary.format('YYYY-MM-DD'), anniversary.add(1, 'day').format('YYYY-MM-DD')])
+    expect(r.convention).toBe('Still current on the six-month anniversary of the last use (month ends clamp: Aug 31 + 6 months = Feb 28 or 29); lapses the day after.')
     expect(r.rule).toBe('A welder\'s qualification remains in effect unless the welder has not engaged in the process for a period exceeding six months.')
     expect(r.reasons).toContainEqual({ clause: 'D1.3 period of effectiveness', text: r.rule, basis: 'partial' })
     expect(ok({ code: 'aws-d1.3', check: 'continuity', unit: 'in', input: { lastUse: '2026-01-15', on: anniversary.add(1, 'day').format('YYYY-MM-DD') } }).current).toBe(false)
