@@ -165,6 +165,7 @@ describe('AWS D1.3 period of effectiveness and Table 4.4 spellings (§B6: six mo
     const r = ok({ code: 'aws-d1.3', check: 'continuity', unit: 'in', input: { lastUse: '2026-01-15', on: '2026-02-01' } })
     const anniversary = dayjs('2026-01-15').add(6, 'month')
     expect([r.current, r.lastCurrentDay, r.lapsesOn]).toEqual([true, anniversary.format('YYYY-MM-DD'), anniversary.add(1, 'day').format('YYYY-MM-DD')])
+    expect(r.convention).toBe('Still current on the six-month anniversary of the last use (month ends clamp: Aug 31 + 6 months = Feb 28 or 29); lapses the day after.')
     expect(r.rule).toBe('A welder\'s qualification remains in effect unless the welder has not engaged in the process for a period exceeding six months.')
     expect(r.reasons).toContainEqual({ clause: 'D1.3 period of effectiveness', text: r.rule, basis: 'partial' })
     expect(ok({ code: 'aws-d1.3', check: 'continuity', unit: 'in', input: { lastUse: '2026-01-15', on: anniversary.add(1, 'day').format('YYYY-MM-DD') } }).current).toBe(false)
@@ -175,5 +176,25 @@ describe('AWS D1.3 period of effectiveness and Table 4.4 spellings (§B6: six mo
   })
   it('an empty position list is refused by the rule itself too (the request schema refuses it first)', () => {
     expect(() => welderRanges(square(0.0747, { testPositions: [] }) as never, { code: 'aws-d1.3', edition: '2008', unit: 'in' })).toThrow('testPositions: give at least one test position')
+  })
+})
+
+describe('AWS D1.3 coverage: how sure each row is (§B5 read: verified; F-No. and coating comparison: partial; code: convention)', () => {
+  const basis = (r: Record<string, unknown>) => (r.reasons as { variable: string, basis: string }[]).map(x => [x.variable, x.basis])
+  it('a vertical SMAW joint with every variable stated', () => {
+    const t3 = { ...test, testPositions: ['3G'] }
+    expect(basis(cv(t3, { ...joint, position: 'V', progression: 'uphill', code: 'aws-d1.3' }))).toEqual([
+      ['code', 'convention'], ['joint', 'verified'], ['process', 'verified'], ['position', 'verified'], ['thickness', 'verified'],
+      ['f-number', 'partial'], ['coating', 'partial'], ['progression', 'verified'],
+    ])
+  })
+  it('pipe, no process, no thickness, over the scope: each row verified', () => {
+    expect(basis(cv(test, { form: 'pipe', weld: 'groove', joint: 'square-groove', position: 'F' })).slice(0, 4)).toEqual([['scope', 'verified'], ['joint', 'verified'], ['process', 'verified'], ['position', 'verified']])
+    expect(basis(cv(test, { form: 'pipe', weld: 'groove', joint: 'square-groove', position: 'F' })).find(x => x[0] === 'thickness')).toEqual(['thickness', 'verified'])
+    expect(basis(cv(test, { ...joint, thickness: 0.25 }))).toEqual([['scope', 'verified']])
+  })
+  it('a two-position arc seam test names both positions joined with +', () => {
+    const r = wr({ process: 'SMAW', form: 'plate', weld: 'fillet', joint: 'arc-seam', testPositions: ['1F', '2F'], couponThickness: 0.0598 })
+    expect(texts(r)[1]).toEqual(['D1.3 Table 4.4', 'arc-seam test in 1F + 2F: F, H.'])
   })
 })
