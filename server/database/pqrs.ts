@@ -14,7 +14,9 @@ import { psiToMpa, totalDeposit, type PqrActuals, type PqrLayer, type PqrResults
 import type { CodeId, Unit } from '#shared/rules/types'
 
 import { pqrColumns, pqrDraftOf, pqrLayersOf, wpqrPieceOf, type PqrRow } from './pqr-columns'
-import type { IsoWpqrRecord } from '#shared/qualification/iso-procedure-support'
+import { isoPieceOf, type IsoWpqrRecord } from '#shared/qualification/iso-procedure-support'
+import { wpqrRanges, type WpqrRanges } from '#shared/rules/iso-15614-1'
+import { RuleRefusal } from '#shared/rules/refusal'
 import { isIsoProcedureCode } from '#shared/vocabulary/records'
 
 export { pqrColumns, pqrDraftOf, pqrLayersOf, type PqrRow }
@@ -80,8 +82,10 @@ export function isoWpqrOf(pqr: PqrRow, layers: PqrLayer[]): IsoWpqrRecord | null
   const text = a.pwht?.trim() ?? ''
   const none = /^(none|no|n\/?a|as[- ]?welded|-)$/i.test(text)
   const hasTemperature = typeof a.pwhtTemperature === 'number'
-  const pwht = hasTemperature ? { done: true, temperature: a.pwhtTemperature!, hours: a.pwhtHours ?? null }
-    : none ? { done: false, temperature: null, hours: null }
+  const pwht = hasTemperature
+    ? { done: true, temperature: a.pwhtTemperature!, hours: a.pwhtHours ?? null }
+    : none
+      ? { done: false, temperature: null, hours: null }
       : text ? { done: true, temperature: null, hours: a.pwhtHours ?? null } : null
   return {
     processes: layers.map(l => l.process), thickness: pqr.couponThickness, form: piece.form, outsideDiameter: piece.outsideDiameter,
@@ -127,6 +131,22 @@ export async function pqrDetail(db: Db, id: number) {
     tensile, bends, signatures: signed, procedures: supports,
     qualifies: qualifies[0] ?? null, qualifiesByProcess: qualifies, specimensNeeded, resultsPass: support[0]?.resultsPass ?? false,
     minimumStrength: base?.minTensilePsi ? minimumStrengthOf(base.minTensilePsi, row.unit as Unit) : null,
+    iso: isoRangesOf(row, layers),
+  }
+}
+
+/** An ISO 15614-1 WPQR's range of qualification (clause 8, from memory), or why it cannot be told; null for other PQRs. */
+function isoRangesOf(row: PqrRow, layers: PqrLayer[]): { ranges: WpqrRanges | null, error: string | null } | null {
+  if (!isIsoProcedureCode(row.code)) return null
+  const record = isoWpqrOf(row, layers)
+  const piece = record ? isoPieceOf({ iso: record }) : null
+  if (!piece) return { ranges: null, error: 'Cannot tell: record the test piece (positions welded, plate or pipe) in mm and °C.' }
+  try {
+    return { ranges: wpqrRanges(piece), error: null }
+  }
+  catch (error) {
+    if (error instanceof RuleRefusal) return { ranges: null, error: `Cannot tell: ${error.message}` }
+    throw error
   }
 }
 

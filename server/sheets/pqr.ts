@@ -44,16 +44,18 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
       ],
     },
     ...(iso ? [iso.piece] : []),
-    ...(iso ? [] : [{
-      heading: 'Position, preheat, PWHT', clause: q.code === 'asme-ix' ? 'QW-405 to QW-407' : undefined,
-      fields: [
-        { label: 'Position of groove', value: orDash(a.position) },
-        { label: 'Progression', value: orDash(a.progression) },
-        { label: 'Preheat', value: temperature(num(a.preheat), unit) },
-        { label: 'Interpass', value: temperature(num(a.interpass), unit) },
-        { label: 'PWHT', value: pwhtTemperature !== null ? `${pwhtTemperature} ${u.temperature}${pwhtHours !== null ? `, held ${pwhtHours} h` : ''}` : orDash(a.pwht ?? 'none recorded') },
-      ],
-    } satisfies SheetBlock]),
+    ...(iso
+      ? []
+      : [{
+        heading: 'Position, preheat, PWHT', clause: q.code === 'asme-ix' ? 'QW-405 to QW-407' : undefined,
+        fields: [
+          { label: 'Position of groove', value: orDash(a.position) },
+          { label: 'Progression', value: orDash(a.progression) },
+          { label: 'Preheat', value: temperature(num(a.preheat), unit) },
+          { label: 'Interpass', value: temperature(num(a.interpass), unit) },
+          { label: 'PWHT', value: pwhtTemperature !== null ? `${pwhtTemperature} ${u.temperature}${pwhtHours !== null ? `, held ${pwhtHours} h` : ''}` : orDash(a.pwht ?? 'none recorded') },
+        ],
+      } satisfies SheetBlock]),
     ...record.layers.map((l, i): SheetBlock => layerBlock(q, l, i, record.layers.length, unit)),
     {
       heading: 'Pass table (values used)', clause: c('electrical'),

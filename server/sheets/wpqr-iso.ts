@@ -46,16 +46,16 @@ export function isoWpqrBlocks(record: PqrRecord): { piece: SheetBlock, ranges: S
   try {
     const r = wpqrRanges(p)
     const rows: Record<string, string> = {
-      process: r.processes.join(' + '),
-      thickness: `${r.thickness.min} to ${r.thickness.max} mm`,
-      diameter: r.diameter ? `${r.diameter.min} mm${r.diameter.max === null ? ' and over' : ` to ${r.diameter.max} mm`}` : 'pipe over 500 mm (plate test)',
-      position: r.positions.join(', '),
-      material: r.materialGroups ? `group ${r.materialGroups.join(', ')}` : 'not recorded',
+      'process': r.processes.join(' + '),
+      'thickness': `${r.thickness.min} to ${r.thickness.max} mm`,
+      'diameter': r.diameter ? `${r.diameter.min} mm${r.diameter.max === null ? ' and over' : ` to ${r.diameter.max} mm`}` : 'pipe over 500 mm (plate test)',
+      'position': r.positions.join(', '),
+      'material': r.materialGroups ? `group ${r.materialGroups.join(', ')}` : 'not recorded',
       'heat-input': r.heatInput ? `${r.heatInput.min ?? '—'} to ${r.heatInput.max ?? '—'} kJ/mm` : 'not limited by the test',
-      preheat: r.preheatMin === null ? 'not recorded' : `${r.preheatMin} °C and over`,
-      interpass: r.interpassMax === null ? 'not recorded' : `up to ${r.interpassMax} °C`,
-      pwht: !r.pwht ? 'not recorded' : !r.pwht.done ? 'as welded' : r.pwht.temperature ? `${r.pwht.temperature.min} to ${r.pwht.temperature.max} °C` : 'as tested',
-      filler: r.filler ? r.filler.designation : 'not recorded',
+      'preheat': r.preheatMin === null ? 'not recorded' : `${r.preheatMin} °C and over`,
+      'interpass': r.interpassMax === null ? 'not recorded' : `up to ${r.interpassMax} °C`,
+      'pwht': !r.pwht ? 'not recorded' : !r.pwht.done ? 'as welded' : r.pwht.temperature ? `${r.pwht.temperature.min} to ${r.pwht.temperature.max} °C` : 'as tested',
+      'filler': r.filler ? r.filler.designation : 'not recorded',
     }
     const words: Record<string, string> = { 'process': 'Process (ISO 4063)', 'thickness': 'Thickness', 'diameter': 'Outside diameter', 'position': 'Positions', 'material': 'Parent metal', 'heat-input': 'Heat input', 'preheat': 'Preheat', 'interpass': 'Interpass', 'pwht': 'PWHT', 'filler': 'Filler' }
     return {

@@ -54,7 +54,7 @@ export function isoPieceOf(p: Pick<SupportPqr, 'iso'>): WpqrTestPiece | null {
   }
 }
 
-type IsoDraft = Pick<ProcedureDraft, 'code' | 'thickness' | 'baseMetals' | 'layers'> & Partial<Pick<ProcedureDraft, 'diameter' | 'preheatMin' | 'interpassMax' | 'pwht' | 'positions' | 'toughnessRequired'>>
+type IsoDraft = { code: string } & Pick<ProcedureDraft, 'thickness' | 'baseMetals' | 'layers'> & Partial<Pick<ProcedureDraft, 'diameter' | 'preheatMin' | 'interpassMax' | 'pwht' | 'positions' | 'toughnessRequired'>>
 
 /** The rules' WPS of an ISO 15609-1 draft (mm, °C; heat input J/mm → kJ/mm), and the designations of its fillers. */
 export function isoWpsOf(draft: IsoDraft): { wps: IsoWps, fillers: string[] } {
@@ -80,8 +80,8 @@ export function isoWpsOf(draft: IsoDraft): { wps: IsoWps, fillers: string[] } {
 }
 
 const fieldOf: Record<string, string> = {
-  process: 'layers.0.process', thickness: 'thickness.groove', diameter: 'diameter', position: 'positions', material: 'baseMetals',
-  'heat-input': 'layers.0.heatInputMax', preheat: 'preheatMin', interpass: 'interpassMax', pwht: 'pwht', filler: 'layers.0.fillers',
+  'process': 'layers.0.process', 'thickness': 'thickness.groove', 'diameter': 'diameter', 'position': 'positions', 'material': 'baseMetals',
+  'heat-input': 'layers.0.heatInputMax', 'preheat': 'preheatMin', 'interpass': 'interpassMax', 'pwht': 'pwht', 'filler': 'layers.0.fillers',
 }
 const asFinding = (x: IsoFinding, prefix: string): SupportFinding => ({
   met: x.state === 'met', clause: x.clause, basis: x.basis, field: fieldOf[x.variable] ?? null,

@@ -81,14 +81,14 @@ export const procedureLayerSchema = z.object({
 }).superRefine((v, ctx) => {
   const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: z.ZodIssueCode.custom, path, message })
   const tungsten = (tungstenProcesses as readonly string[]).includes(v.process)
-  if (v.transfer && !(transferProcesses as readonly string[]).includes(v.process)) issue(['transfer'], 'A transfer mode is stated for GMAW and FCAW (ISO 131, 135, 136, 138) only')
+  if (v.transfer && !(transferProcesses as readonly string[]).includes(v.process)) issue(['transfer'], 'A transfer mode is stated for GMAW and FCAW only')
   if (v.process === 'GMAW' && !v.transfer) issue(['transfer'], 'Pick the GMAW transfer mode')
   if (!v.fillers.length && !(tungsten && v.fillerAdded === false)) issue(['fillers'], 'Add at least one filler metal (or say no filler is added, GTAW)')
   if (v.fillerAdded === false && v.fillers.length) issue(['fillerAdded'], 'Fillers are listed: filler is added')
-  if (!tungsten && v.fillerAdded !== null) issue(['fillerAdded'], 'Filler added or not is stated for GTAW and PAW (ISO 141–145, 15)')
-  if (!tungsten && (v.tungsten.type || v.tungsten.size !== null)) issue(['tungsten', 'type'], 'A tungsten electrode belongs to GTAW or PAW (ISO 141–145, 15)')
-  if (!tungsten && v.consumableInsert) issue(['consumableInsert'], 'A consumable insert belongs to GTAW or PAW (ISO 141–145, 15)')
-  if (!(fluxProcesses as readonly string[]).includes(v.process) && (v.flux.name || v.flux.classification)) issue(['flux', 'name'], 'A flux belongs to SAW (ISO 121, 125)')
+  if (!tungsten && v.fillerAdded !== null) issue(['fillerAdded'], 'Filler added or not is stated for GTAW and PAW')
+  if (!tungsten && (v.tungsten.type || v.tungsten.size !== null)) issue(['tungsten', 'type'], 'A tungsten electrode belongs to GTAW or PAW')
+  if (!tungsten && v.consumableInsert) issue(['consumableInsert'], 'A consumable insert belongs to GTAW or PAW')
+  if (!(fluxProcesses as readonly string[]).includes(v.process) && (v.flux.name || v.flux.classification)) issue(['flux', 'name'], 'A flux belongs to SAW')
 })
 export type ProcedureLayer = z.infer<typeof procedureLayerSchema>
 

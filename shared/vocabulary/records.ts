@@ -43,7 +43,6 @@ export const procedureCodeChoices = procedureCodeIds.map(value => ({ value, labe
 /** Whether a stored procedure or PQR code is the ISO procedure standard (or the ISO code stored before it had its own id). */
 export const isIsoProcedureCode = (code: string) => code === 'iso-15614-1' || code === 'iso-9606-1'
 
-
 /** The welding processes a record may name (the list routes and filters accept these). */
 export const processIds = ['SMAW', 'GTAW', 'GMAW', 'FCAW', 'SAW', 'PAW', 'OFW', 'ESW', 'EGW', 'LLBW'] as const
 

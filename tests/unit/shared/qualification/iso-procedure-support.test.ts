@@ -73,6 +73,6 @@ describe('ISO 15609-1 WPS support in the app (ISO 15614-1:2017 clause 8, from me
       fc.constant({ layers: [{ ...layer, fillers: [{ ...layer.fillers[0]!, classification: 'G 46 4 M21 4Si1' }] }] }), // 8.4.4
       fc.integer({ min: 1, max: 500 }).map(min => ({ diameter: { min, max: null } })), // 8.3.2.2: plate test, pipe WPS
     )
-    fc.assert(fc.property(bad, change => !layeredSupport(draft(change), [wpqr()]).supported), { numRuns: 300 })
+    fc.assert(fc.property(bad, change => !layeredSupport(draft(change as Partial<ProcedureDraft>), [wpqr()]).supported), { numRuns: 300 })
   })
 })
