@@ -85,8 +85,8 @@ const fieldOf: Record<string, string> = {
 }
 const asFinding = (x: IsoFinding, prefix: string): SupportFinding => ({
   met: x.state === 'met', clause: x.clause, basis: x.basis, field: fieldOf[x.variable] ?? null,
-  text: prefix + x.text, ...(x.state === 'by-hand' ? { byHand: true } : {}),
-})
+  text: prefix + x.text, ...(x.state === 'by-hand' ? { byHand: true, state: 'not-checked' } : x.state === 'not-recorded' ? { state: 'not-recorded' } : {}),
+}) as SupportFinding
 
 /** The support check of an ISO 15609-1 WPS (or one stored under the ISO code before ISO 15614-1 had its own id). */
 export function isoSupportCheck(draft: IsoDraft, pqrs: SupportPqr[]): SupportCheck {
@@ -127,9 +127,9 @@ export function isoSupportCheck(draft: IsoDraft, pqrs: SupportPqr[]): SupportChe
   const best = runs.find(r => r.list.every(x => x.state === 'met')) ?? runs.find(r => r.list.every(x => x.state !== 'not-met')) ?? runs[0]!
   const prefix = iso.length > 1 ? `${best.p.number}: ` : ''
   findings.push(...best.list.map(x => asFinding(x, prefix)))
-  if (fillers.length > 1) findings.push({ met: false, byHand: true, clause: 'ISO 15614-1:2017, 8.4.4', basis: 'memory', field: 'layers', text: `Check by hand: the WPS names ${fillers.length} filler designations (${fillers.join('; ')}); only the first is compared.` })
+  if (fillers.length > 1) findings.push({ met: false, byHand: true, state: 'not-checked', clause: 'ISO 15614-1:2017, 8.4.4', basis: 'memory', field: 'layers', text: `Check by hand: the WPS names ${fillers.length} filler designations (${fillers.join('; ')}); only the first is compared.` } as SupportFinding)
   if (draft.thickness?.fillet && (isNumber(draft.thickness.fillet.min) || isNumber(draft.thickness.fillet.max))) {
-    findings.push({ met: false, byHand: true, clause: 'ISO 15614-1:2017, 8.3.2.1', basis: 'memory', field: 'thickness.fillet', text: 'Check by hand: fillet weld thickness and throat ranges (Table 6 notes) are not compared here.' })
+    findings.push({ met: false, byHand: true, state: 'not-checked', clause: 'ISO 15614-1:2017, 8.3.2.1', basis: 'memory', field: 'thickness.fillet', text: 'Check by hand: fillet weld thickness and throat ranges (Table 6 notes) are not compared here.' } as SupportFinding)
   }
   return done(true)
 }
