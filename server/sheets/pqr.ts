@@ -35,11 +35,11 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
       ],
     },
     {
-      heading: 'Base metals', clause: c('base'),
+      heading: iso ? 'Parent metals' : 'Base metals', clause: c('base'),
       fields: [
-        { label: 'Base metal A', value: metalText(record.base) },
-        { label: 'Base metal B', value: record.baseB ? metalText(record.baseB) : `same as A (${metalText(record.base)})` },
-        { label: 'Coupon thickness T', value: length(q.couponThickness, unit) },
+        { label: iso ? 'Parent metal A' : 'Base metal A', value: metalText(record.base) },
+        { label: iso ? 'Parent metal B' : 'Base metal B', value: record.baseB ? metalText(record.baseB) : `same as A (${metalText(record.base)})` },
+        { label: iso ? 'Test piece thickness t' : 'Coupon thickness T', value: length(q.couponThickness, unit) },
         { label: 'Deposit thickness t, all processes', value: length(q.depositThickness, unit) },
       ],
     },

@@ -67,7 +67,8 @@ export async function seedDemoIsoWpqr(tx: Db, today: Date, inspector: { id: numb
       iso: { positions: ['PA'], form: 'plate', outsideDiameter: null, runs: 'multi', materialGroup: '1.2', fillerDesignation: 'ISO 14341-A G 42 4 M21 3Si1', fillerGroup: '1', hardnessTested: false },
     },
   })
-  const [row] = await tx.insert(t.pqrs).values({ ...pqrColumns(draft), status: 'certified' }).returning()
+  const toughness = { testTemperature: -20, specimens: [64, 58, 61].map(energy => ({ location: 'weld metal', energy })) }
+  const [row] = await tx.insert(t.pqrs).values({ ...pqrColumns(draft), status: 'certified', toughness }).returning()
   // Judged as the app judges an ISO WPQR's results (server/database/pqrs.ts judgedResults: the ISO tensile and bend rules, MPa)
   const minimum = psiToMpa(base!.minTensilePsi ?? 0)
   const tensile = [{ label: 'T1', width: 25, thickness: 15, load: 198000, breakLocation: 'base metal' }, { label: 'T2', width: 25, thickness: 15, load: 196500, breakLocation: 'base metal' }]
