@@ -191,3 +191,13 @@ export async function storeFile(db: Db, user: SessionUser, owner: AttachmentOwne
     throw error
   }
 }
+
+/** The welder's photograph (the newest JPEG or PNG "photo" attachment) for a sheet the caller already may read; null when none. */
+export async function welderPhotoDataUrl(db: Db, welderId: number): Promise<string | null> {
+  const [photo] = await db.select({ storageKey: attachments.storageKey, contentType: attachments.contentType }).from(attachments)
+    .where(and(eq(attachments.recordType, 'welder'), eq(attachments.recordId, welderId), eq(attachments.kind, 'photo')))
+    .orderBy(desc(attachments.createdAt), desc(attachments.id)).limit(1)
+  if (!photo || !/^image\/(jpeg|png)$/.test(photo.contentType)) return null
+  const bytes = await readStoredFile(photo.storageKey)
+  return bytes ? `data:${photo.contentType};base64,${Buffer.from(bytes).toString('base64')}` : null
+}

@@ -1,5 +1,6 @@
 import type { pqrs } from './schema'
 import { blankPqrLayer, totalDeposit, type PqrDraft, type PqrLayer } from '../../shared/schemas/pqr'
+import { wpqrPieceSchema, type WpqrPiece } from '../../shared/schemas/procedure-iso'
 import type { Unit } from '../../shared/rules/types'
 
 /** A stored PQR as the form's draft and its layers, and a draft as columns: pure (relative imports only, for the seed scripts). */
@@ -46,6 +47,14 @@ export function pqrColumns(draft: PqrDraft) {
   }
 }
 
+/** The ISO 15614-1 test piece kept in a WPQR's actuals (null on ASME/AWS PQRs, or when it does not read). */
+export function wpqrPieceOf(row: Pick<PqrRow, 'actuals'>): WpqrPiece | null {
+  const a = obj(row.actuals)
+  if (!a.iso) return null
+  const parsed = wpqrPieceSchema.safeParse(a.iso)
+  return parsed.success ? parsed.data : null
+}
+
 /** A stored PQR as the form's draft. */
 export function pqrDraftOf(row: PqrRow): PqrDraft {
   const a = obj(row.actuals)
@@ -54,6 +63,10 @@ export function pqrDraftOf(row: PqrRow): PqrDraft {
     number: row.number, testDate: row.testDate, code: row.code as PqrDraft['code'], edition: row.edition, unit: row.unit as Unit,
     couponThickness: row.couponThickness, baseMetalId: row.baseMetalId ?? 0, baseMetalBId: row.baseMetalBId, welderId: row.welderId,
     toughnessRequired: row.toughnessRequired, labReportNumber: row.labReportNumber, layers: pqrLayersOf(row),
-    actuals: { position: str(a.position), progression, preheat: num(a.preheat), interpass: num(a.interpass), pwht: str(a.pwht), pwhtTemperature: num(a.pwhtTemperature), pwhtHours: num(a.pwhtHours) },
+    actuals: {
+      position: str(a.position), progression, preheat: num(a.preheat), interpass: num(a.interpass), pwht: str(a.pwht), pwhtTemperature: num(a.pwhtTemperature), pwhtHours: num(a.pwhtHours),
+      // ISO 15614-1 only: present on WPQRs, absent on every other record (so their drafts read as before).
+      ...(wpqrPieceOf(row) ? { iso: wpqrPieceOf(row) } : {}),
+    },
   }
 }

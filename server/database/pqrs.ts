@@ -13,7 +13,11 @@ import { tensileOf } from '#shared/qualification/tensile-acceptance'
 import { psiToMpa, totalDeposit, type PqrActuals, type PqrLayer, type PqrResults } from '#shared/schemas/pqr'
 import type { CodeId, Unit } from '#shared/rules/types'
 
-import { pqrColumns, pqrDraftOf, pqrLayersOf, type PqrRow } from './pqr-columns'
+import { pqrColumns, pqrDraftOf, pqrLayersOf, wpqrPieceOf, type PqrRow } from './pqr-columns'
+import { isoPieceOf, type IsoWpqrRecord } from '#shared/qualification/iso-procedure-support'
+import { wpqrRanges, type WpqrRanges } from '#shared/rules/iso-15614-1'
+import { RuleRefusal } from '#shared/rules/refusal'
+import { isIsoProcedureCode } from '#shared/vocabulary/records'
 
 export { pqrColumns, pqrDraftOf, pqrLayersOf, type PqrRow }
 
@@ -64,9 +68,31 @@ export async function supportPqrs(db: Db, ids: number[]): Promise<(SupportPqr & 
         pNumber: pNumber ?? null, pNumberB: pNumberB ?? pNumber ?? null, status: pqr.status,
         resultsPass: t.length > 0 && b.length > 0 && t.every(s => s.accepted) && b.every(s => s.accepted),
         preheat: actuals.preheat ?? null, pwht: actuals.pwht ?? null, pwhtTemperature: actuals.pwhtTemperature ?? null, testPosition: actuals.position ?? null,
+        iso: isoWpqrOf(pqr, layers),
       }
     })
   })
+}
+
+/** An ISO 15614-1 WPQR as the ISO support check reads it (mm and °C records only; null for every other PQR). */
+export function isoWpqrOf(pqr: PqrRow, layers: PqrLayer[]): IsoWpqrRecord | null {
+  const piece = wpqrPieceOf(pqr)
+  if (!piece || !isIsoProcedureCode(pqr.code) || pqr.unit !== 'mm') return null
+  const a = (pqr.actuals ?? {}) as PqrActuals
+  const text = a.pwht?.trim() ?? ''
+  const none = /^(none|no|n\/?a|as[- ]?welded|-)$/i.test(text)
+  const hasTemperature = typeof a.pwhtTemperature === 'number'
+  const pwht = hasTemperature
+    ? { done: true, temperature: a.pwhtTemperature!, hours: a.pwhtHours ?? null }
+    : none
+      ? { done: false, temperature: null, hours: null }
+      : text ? { done: true, temperature: null, hours: a.pwhtHours ?? null } : null
+  return {
+    processes: layers.map(l => l.process), thickness: pqr.couponThickness, form: piece.form, outsideDiameter: piece.outsideDiameter,
+    runs: piece.runs, positions: piece.positions, materialGroup: piece.materialGroup,
+    heatInputs: layers.map(l => layerHeatInput(pqr, l)), impactTested: pqr.toughnessRequired, hardnessTested: piece.hardnessTested,
+    preheat: a.preheat ?? null, interpass: a.interpass ?? null, pwht, filler: piece.fillerDesignation, fillerGroup: piece.fillerGroup,
+  }
 }
 
 export async function findPqr(db: Db, id: number) {
@@ -105,6 +131,22 @@ export async function pqrDetail(db: Db, id: number) {
     tensile, bends, signatures: signed, procedures: supports,
     qualifies: qualifies[0] ?? null, qualifiesByProcess: qualifies, specimensNeeded, resultsPass: support[0]?.resultsPass ?? false,
     minimumStrength: base?.minTensilePsi ? minimumStrengthOf(base.minTensilePsi, row.unit as Unit) : null,
+    iso: isoRangesOf(row, layers),
+  }
+}
+
+/** An ISO 15614-1 WPQR's range of qualification (clause 8, from memory), or why it cannot be told; null for other PQRs. */
+function isoRangesOf(row: PqrRow, layers: PqrLayer[]): { ranges: WpqrRanges | null, error: string | null } | null {
+  if (!isIsoProcedureCode(row.code)) return null
+  const record = isoWpqrOf(row, layers)
+  const piece = record ? isoPieceOf({ iso: record }) : null
+  if (!piece) return { ranges: null, error: 'Cannot tell: record the test piece (positions welded, plate or pipe) in mm and °C.' }
+  try {
+    return { ranges: wpqrRanges(piece), error: null }
+  }
+  catch (error) {
+    if (error instanceof RuleRefusal) return { ranges: null, error: `Cannot tell: ${error.message}` }
+    throw error
   }
 }
 
@@ -126,7 +168,9 @@ export function specimensRequired(row: Pick<PqrRow, 'code' | 'edition' | 'unit' 
 /** The tensile and bend rows as the rules judge them: strength from load and area, bends by the code's bend rule. */
 export function judgedResults(row: Pick<PqrRow, 'id' | 'code' | 'unit'>, results: PqrResults, minimumStrength: number) {
   const unit = row.unit as Unit
-  const code = row.code as CodeId
+  // ISO 15614-1 WPQRs: tensile strength against the parent metal's minimum and bends to ISO 5173 with the 3 mm open
+  // imperfection limit (7.4.2, from memory), the same judgement the ISO 9606-1 rules carry.
+  const code = (isIsoProcedureCode(row.code) ? 'iso-9606-1' : row.code) as CodeId
   const tensile = results.tensile.map((s) => {
     const judged = tensileOf({ width: s.width, thickness: s.thickness, load: s.load, minimumStrength, unit, code })
     return { ...s, pqrId: row.id, strength: judged.strength, accepted: judged.accepted }

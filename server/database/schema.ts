@@ -107,7 +107,7 @@ export const procedures = pgTable('procedures', {
   index('procedures_processes_idx').using('gin', t.processes),
   check('procedures_layers_check', sql`jsonb_typeof(${t.layers}) = 'array'`),
   check('procedures_status_check', sql`${t.status} in ('draft', 'approved', 'superseded')`),
-  check('procedures_code_check', sql`${t.code} in ('asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1')`),
+  check('procedures_code_check', sql`${t.code} in ('asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1', 'iso-15614-1')`),
   check('procedures_revision_check', sql`${t.revision} >= 0`),
   check('procedures_thickness_check', sql`${t.thicknessMin} is null or ${t.thicknessMax} is null or ${t.thicknessMin} <= ${t.thicknessMax}`),
   unitCheck('procedures_unit_check', t.unit),

@@ -25,12 +25,13 @@ export function codeLine(code: string, edition: string) {
 
 /** A procedure's code line: a WPS or PQR recorded with the ISO code is ISO 15609-1 / ISO 15614-1, never the welder standard. */
 export function procedureCodeLine(code: string, edition: string, record: 'wps' | 'pqr') {
+  if (code === 'iso-15614-1') return record === 'wps' ? `ISO 15609-1 (WPS), qualified to ISO 15614-1:${edition}` : `ISO 15614-1:${edition} (WPQR)`
   return code === 'iso-9606-1' ? `${record === 'wps' ? 'ISO 15609-1 (WPS), qualified to ISO 15614-1' : 'ISO 15614-1 (WPQR)'} (recorded under the ISO code, ${edition})` : codeLine(code, edition)
 }
 
 /** A procedure's caution: the ISO procedure standard's words for a WPS or PQR recorded with the ISO code. */
 export function procedureCaution(code: string, edition: string) {
-  return code === 'iso-9606-1' ? iso15614Caution : caution(code, edition)
+  return code === 'iso-9606-1' || code === 'iso-15614-1' ? iso15614Caution : caution(code, edition)
 }
 
 export function caution(code: string, edition: string) {

@@ -99,10 +99,15 @@ function blockContent(block: SheetBlock) {
 
 function titleBand(sheet: SheetModel, anchor?: string) {
   const statusColor = /draft|failed|recorded|superseded/.test(sheet.status) ? warn : accent
+  // The welder's photograph (ISO 9606-1 certificates), as identification beside the title.
+  const photo = sheet.photo
+    ? [{ stack: [{ image: sheet.photo.dataUrl, fit: [56, 70] }, { text: sheet.photo.caption, style: 'small', margin: [0, 1, 0, 0] }], border: [false, false, false, false], margin: [0, 0, 8, 0] }]
+    : []
   return {
     table: {
-      widths: ['*', 'auto'],
+      widths: [...(photo.length ? ['auto'] : []), '*', 'auto'],
       body: [[
+        ...photo,
         {
           stack: [
             { text: sheet.kindTitle.toUpperCase(), style: 'kind', ...(anchor ? { id: anchor } : {}) },

@@ -5,6 +5,7 @@ import type { PqrRecord } from '../database/sheet-records'
 import { procedureCaution, certification, procedureCodeLine as codeLine, groupClause, isCode, reasonsBlock, signedParts } from './common'
 import { dash, length, list, orDash, printable, rangeText, temperature, yesNo } from './format'
 import { unitLabels } from '#shared/qualification/procedure-units'
+import { isoWpqrBlocks } from './wpqr-iso'
 
 const metalText = (m: { specification: string, grade: string, pNumber: string, groupNumber: number | null } | null) =>
   m ? `${printable(m.specification)} ${printable(m.grade)}, P-No. ${printable(m.pNumber)}${m.groupNumber ? ` Group ${m.groupNumber}` : ''}` : dash
@@ -20,6 +21,7 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
   const processes = [...new Set(record.layers.map(l => l.process))]
   const pwhtHours = num(a.pwhtHours)
   const pwhtTemperature = num(a.pwhtTemperature)
+  const iso = isoWpqrBlocks(record)
   const blocks: SheetBlock[] = [
     {
       heading: 'Record',
@@ -27,30 +29,33 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
         { label: 'Test date', value: q.testDate },
         { label: 'Code', value: codeLine(q.code, q.edition, 'pqr') },
         { label: 'Processes', value: processes.join(' + ') },
-        { label: 'Welder of the coupon', value: record.welder ? `${printable(record.welder.name)} (${printable(record.welder.stamp)})` : 'not recorded', clause: q.code === 'asme-ix' ? 'QW-301.2' : undefined },
+        { label: iso ? 'Welder of the test piece' : 'Welder of the coupon', value: record.welder ? `${printable(record.welder.name)} (${printable(record.welder.stamp)})` : 'not recorded', clause: q.code === 'asme-ix' ? 'QW-301.2' : undefined },
         { label: 'Laboratory report', value: orDash(q.labReportNumber) },
         { label: 'Supports WPS', value: list(record.supports.filter(s => s.status !== 'draft').map(s => `${s.number} rev. ${s.revision} (${s.status})`)) },
       ],
     },
     {
-      heading: 'Base metals', clause: c('base'),
+      heading: iso ? 'Parent metals' : 'Base metals', clause: c('base'),
       fields: [
-        { label: 'Base metal A', value: metalText(record.base) },
-        { label: 'Base metal B', value: record.baseB ? metalText(record.baseB) : `same as A (${metalText(record.base)})` },
-        { label: 'Coupon thickness T', value: length(q.couponThickness, unit) },
+        { label: iso ? 'Parent metal A' : 'Base metal A', value: metalText(record.base) },
+        { label: iso ? 'Parent metal B' : 'Base metal B', value: record.baseB ? metalText(record.baseB) : `same as A (${metalText(record.base)})` },
+        { label: iso ? 'Test piece thickness t' : 'Coupon thickness T', value: length(q.couponThickness, unit) },
         { label: 'Deposit thickness t, all processes', value: length(q.depositThickness, unit) },
       ],
     },
-    {
-      heading: 'Position, preheat, PWHT', clause: q.code === 'asme-ix' ? 'QW-405 to QW-407' : undefined,
-      fields: [
-        { label: 'Position of groove', value: orDash(a.position) },
-        { label: 'Progression', value: orDash(a.progression) },
-        { label: 'Preheat', value: temperature(num(a.preheat), unit) },
-        { label: 'Interpass', value: temperature(num(a.interpass), unit) },
-        { label: 'PWHT', value: pwhtTemperature !== null ? `${pwhtTemperature} ${u.temperature}${pwhtHours !== null ? `, held ${pwhtHours} h` : ''}` : orDash(a.pwht ?? 'none recorded') },
-      ],
-    },
+    ...(iso ? [iso.piece] : []),
+    ...(iso
+      ? []
+      : [{
+        heading: 'Position, preheat, PWHT', clause: q.code === 'asme-ix' ? 'QW-405 to QW-407' : undefined,
+        fields: [
+          { label: 'Position of groove', value: orDash(a.position) },
+          { label: 'Progression', value: orDash(a.progression) },
+          { label: 'Preheat', value: temperature(num(a.preheat), unit) },
+          { label: 'Interpass', value: temperature(num(a.interpass), unit) },
+          { label: 'PWHT', value: pwhtTemperature !== null ? `${pwhtTemperature} ${u.temperature}${pwhtHours !== null ? `, held ${pwhtHours} h` : ''}` : orDash(a.pwht ?? 'none recorded') },
+        ],
+      } satisfies SheetBlock]),
     ...record.layers.map((l, i): SheetBlock => layerBlock(q, l, i, record.layers.length, unit)),
     {
       heading: 'Pass table (values used)', clause: c('electrical'),
@@ -86,11 +91,11 @@ export function pqrSheet(record: PqrRecord, shop: string, origin: string): Sheet
     },
   })
   blocks.push(toughnessBlock(q.toughnessRequired, q.toughness, unit, c('toughness')))
-  blocks.push(...qualifiedBlocks(record))
+  blocks.push(...(iso ? [iso.ranges] : qualifiedBlocks(record)))
 
   return {
-    kind: 'pqr', kindTitle: 'Procedure qualification record (PQR)', shopName: shop, number: q.number, revision: null,
-    subtitle: `${processes.join(' + ')}, coupon ${length(q.couponThickness, unit)}, tested ${q.testDate}`,
+    kind: 'pqr', kindTitle: iso ? 'Welding procedure qualification record (WPQR, ISO 15614-1)' : 'Procedure qualification record (PQR)', shopName: shop, number: q.number, revision: null,
+    subtitle: `${processes.join(' + ')}, ${iso ? 'test piece' : 'coupon'} ${length(q.couponThickness, unit)}, tested ${q.testDate}`,
     codeLine: codeLine(q.code, q.edition, 'pqr'), unit, status: q.status,
     banner: q.status === 'failed' ? 'FAILED · qualifies nothing' : q.status === 'recorded' ? 'NOT CERTIFIED' : null,
     blocks, statement: certification(q.code, q.edition, 'coupon', 'pqr'), ...signedParts(record.signed, origin), caution: procedureCaution(q.code, q.edition),
@@ -115,7 +120,7 @@ function layerBlock(q: PqrRecord['pqr'], l: Layer, i: number, count: number, uni
   const heat = heatOf(q, l)
   const fields: SheetField[] = [
     { label: 'Process and transfer', value: `${l.process}${l.transfer ? ` (${l.transfer})` : ''}` },
-    { label: 'Filler metal', value: l.filler ? `${printable(l.filler.specification)} ${printable(l.filler.classification)}, F-No. ${printable(l.filler.fNumber)}${l.filler.aNumber ? `, A-No. ${printable(l.filler.aNumber)}` : ''}` : 'none', clause: asme ? 'QW-404' : undefined },
+    { label: 'Filler metal', value: l.filler ? `${printable(l.filler.specification)} ${printable(l.filler.classification)}${q.code === 'iso-15614-1' ? '' : `, F-No. ${printable(l.filler.fNumber)}${l.filler.aNumber ? `, A-No. ${printable(l.filler.aNumber)}` : ''}`}` : 'none', clause: asme ? 'QW-404' : undefined },
     { label: 'Filler size', value: l.fillerSize === null ? dash : `Ø ${length(l.fillerSize, unit)}` },
     { label: 'Deposit thickness of this layer', value: length(l.depositThickness, unit), clause: asme ? 'QW-404.30' : undefined },
     { label: 'Current and polarity', value: orDash(l.current) },

@@ -12,7 +12,7 @@ import { renderPdf } from './pdf'
 import { pqrSheet } from './pqr'
 import { wpqSheet } from './wpq'
 import { wpsSheet } from './wps'
-import { attachmentsOf } from '../database/attachments'
+import { attachmentsOf, welderPhotoDataUrl } from '../database/attachments'
 import type { AttachmentRecordType } from '#shared/schemas/attachment'
 
 export { projectPeriod } from '../database/sheet-records'
@@ -60,7 +60,12 @@ export async function pqrSheetOf(db: Db, id: number, origin: string) {
 
 export async function welderTestSheet(db: Db, id: number, origin: string) {
   const record = await loadWelderTest(db, id)
-  return record ? withAttachments(db, wpqSheet(record, await shopName(db), origin), 'welder-test', id) : null
+  if (!record) return null
+  const sheet = await withAttachments(db, wpqSheet(record, await shopName(db), origin), 'welder-test', id)
+  // ISO 9606-1 asks the certificate to identify the welder: the photograph on the welder record, when there is one.
+  if (record.test.code !== 'iso-9606-1') return sheet
+  const dataUrl = await welderPhotoDataUrl(db, record.test.welderId)
+  return dataUrl ? { ...sheet, photo: { dataUrl, caption: `${record.welder.name}` } } : sheet
 }
 
 /**

@@ -27,6 +27,8 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
   const unit = t.unit as Unit
   const asme = t.code === 'asme-ix'
   const k = (clause: string) => (asme ? clause : undefined)
+  const iso = t.code === 'iso-9606-1'
+  const w = (asmeWords: string, isoWords: string) => (iso ? isoWords : asmeWords)
   const processes = depositsOf(t)
   const blocks: SheetBlock[] = [
     {
@@ -41,19 +43,19 @@ export function wpqSheet(record: WelderTestRecord, shop: string, origin: string)
     },
     ...operatorBlocks(t),
     {
-      heading: 'Test coupon as welded', clause: asme ? 'QW-350' : undefined,
+      heading: w('Test coupon as welded', 'Test piece as welded'), clause: asme ? 'QW-350' : iso ? 'ISO 9606-1, 5' : undefined,
       fields: [
-        { label: 'Processes', value: processes.map(d => `${d.process}${d.transfer ? ` (${d.transfer})` : ''}`).join(' + '), clause: k('QW-355') },
-        { label: 'Weld', value: t.weld },
-        { label: 'Coupon form', value: t.form },
-        { label: 'Coupon thickness', value: length(t.couponThickness, unit) },
+        { label: w('Processes', 'Welding process (ISO 4063)'), value: processes.map(d => `${d.process}${d.transfer ? ` (${d.transfer})` : ''}`).join(' + '), clause: k('QW-355') },
+        { label: w('Weld', 'Type of weld'), value: iso ? (t.weld === 'fillet' ? 'fillet weld (FW)' : 'butt weld (BW)') : t.weld },
+        { label: w('Coupon form', 'Product type'), value: iso ? (t.form === 'pipe' ? 'pipe (T)' : 'plate (P)') : t.form },
+        { label: w('Coupon thickness', 'Material thickness t'), value: length(t.couponThickness, unit) },
         { label: processes.length > 1 ? 'Deposit thickness, all processes' : 'Deposit thickness', value: length(t.depositThickness, unit), clause: k('QW-404.30') },
         { label: 'Layers', value: orDash(t.layers) },
         { label: 'Outside diameter', value: t.form === 'pipe' ? length(t.outsideDiameter, unit) : 'plate', clause: k('QW-403.16') },
-        { label: 'Base metal P-No.', value: orDash(t.pNumber), clause: k('QW-403.18') },
-        { label: 'Filler F-No.', value: orDash(t.fNumber), clause: k('QW-404.15') },
+        { label: w('Base metal P-No.', 'Parent metal group'), value: orDash(t.pNumber), clause: k('QW-403.18') },
+        { label: w('Filler F-No.', 'Filler material group'), value: iso && t.fNumber ? `FM${t.fNumber}` : orDash(t.fNumber), clause: k('QW-404.15') },
         { label: 'Backing', value: yesNo(t.backing, 'with backing', 'without backing'), clause: k('QW-402.4') },
-        { label: 'Test positions', value: list(t.positions), clause: k('QW-405.1') },
+        { label: w('Test positions', 'Welding positions (ISO 6947)'), value: list(t.positions), clause: k('QW-405.1') },
         { label: 'Progression', value: orDash(t.progression), clause: k('QW-405.3') },
       ],
     },

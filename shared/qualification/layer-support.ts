@@ -1,5 +1,7 @@
 import { supportCheck, type SupportCheck, type SupportFinding, type SupportPqr } from './procedure-support'
 import type { ProcedureDraft } from '../schemas/procedure'
+import { isIsoProcedureCode } from '../vocabulary/records'
+import { isoSupportCheck } from './iso-procedure-support'
 
 const layerFields: Record<string, string> = { 'process': 'process', 'transfer': 'transfer', 'depositMax': 'depositMax', 'electrical.heatInputMax': 'heatInputMax', 'fillers': 'fillers' }
 
@@ -8,7 +10,9 @@ const layerFields: Record<string, string> = { 'process': 'process', 'transfer': 
  * several): its process, transfer, deposit, heat input and filler against every PQR process; the coupon thickness,
  * toughness and base metals once for the whole WPS. A finding about a layer names the layer and its form field.
  */
-export function layeredSupport(draft: Pick<ProcedureDraft, 'code' | 'edition' | 'unit' | 'thickness' | 'toughnessRequired' | 'baseMetals' | 'layers'> & Partial<Pick<ProcedureDraft, 'diameter' | 'preheatMin' | 'pwht' | 'positions'>>, pqrs: SupportPqr[]): SupportCheck {
+export function layeredSupport(draft: Pick<ProcedureDraft, 'code' | 'edition' | 'unit' | 'thickness' | 'toughnessRequired' | 'baseMetals' | 'layers'> & Partial<Pick<ProcedureDraft, 'diameter' | 'preheatMin' | 'interpassMax' | 'pwht' | 'positions'>>, pqrs: SupportPqr[]): SupportCheck {
+  // ISO 15609-1 / ISO 15614-1: the WPS is compared whole against each WPQR (its processes in order, clause 8.4.1).
+  if (isIsoProcedureCode(draft.code)) return isoSupportCheck(draft, pqrs)
   const runs = draft.layers.map((layer, i) => ({ layer, i, check: supportCheck({
     code: draft.code, edition: draft.edition, unit: draft.unit, process: layer.process, transfer: layer.transfer, thickness: draft.thickness,
     depositMax: layer.depositMax, toughnessRequired: draft.toughnessRequired, baseMetals: draft.baseMetals, fillers: layer.fillers,

@@ -3,8 +3,10 @@ import { codeName } from '../rules/caution'
 import { convertLength } from '../rules/units'
 import type { ToughnessResults } from '../rules/inputs'
 import type { Basis, CodeId, Range, Unit } from '../rules/types'
-import { isoProcedureFindings } from './iso-procedure-support'
-import { iso15614Caution } from '../rules/iso-15614-1'
+import { isoQualifies, isoSupportCheck, type IsoWpqrRecord } from './iso-procedure-support'
+import { isIsoProcedureCode } from '../vocabulary/records'
+
+type ProcedureDraftLike = Parameters<typeof isoSupportCheck>[0]
 
 /** A supporting PQR as the support check needs it (lengths in the PQR's own unit). */
 export interface SupportPqr {
@@ -33,6 +35,8 @@ export interface SupportPqr {
   pwht?: string | null
   pwhtTemperature?: number | null
   testPosition?: string | null
+  /** ISO 15614-1 WPQRs: the test piece and the values the ISO check compares (absent on ASME/AWS PQRs). */
+  iso?: IsoWpqrRecord | null
 }
 
 /** The WPS variables the support check reads; a half-filled form is fine. */
@@ -50,7 +54,7 @@ export interface SupportWps {
   electrical?: { heatInputMax?: number | null }
   preheatMin?: number | null
   pwht?: { required?: boolean } | null
-  positions?: ('F' | 'H' | 'V' | 'O')[] | null
+  positions?: string[] | null
 }
 
 export interface SupportFinding {
@@ -144,6 +148,7 @@ function strip<T extends Record<string, unknown>>(o: T): T {
 
 /** What one PQR qualifies for a procedure, in the WPS's code, edition and unit (Table QW-451.1 and its notes). */
 export function pqrQualifies(pqr: SupportPqr, context: { code: string, edition: string, unit: Unit }, toughness = pqr.toughnessTested): PqrQualifies {
+  if (isIsoProcedureCode(context.code) || isIsoProcedureCode(pqr.code)) return isoQualifies(pqr)
   const record = pqrRecord(pqr, context.unit)
   const result = evaluate({
     code: context.code, check: 'procedure-ranges', unit: context.unit, edition: context.edition,
@@ -159,6 +164,10 @@ export function pqrQualifies(pqr: SupportPqr, context: { code: string, edition: 
  * F-No. of its fillers, plus the base-metal P-No. rule; and what else stops its approval.
  */
 export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck {
+  // An ISO 15609-1 WPS is checked whole (isoSupportCheck), never layer by layer with the ASME/AWS rules.
+  if (isIsoProcedureCode(wps.code)) {
+    return isoSupportCheck({ code: wps.code, thickness: { groove: { min: wps.thickness?.groove?.min ?? null, max: wps.thickness?.groove?.max ?? null }, fillet: { min: null, max: null } }, baseMetals: wps.baseMetals as ProcedureDraftLike['baseMetals'], layers: [], positions: (wps.positions ?? []) as ProcedureDraftLike['positions'], preheatMin: wps.preheatMin ?? null }, pqrs)
+  }
   const findings: SupportFinding[] = []
   const blockers: string[] = []
   const context = { code: wps.code, edition: wps.edition, unit: wps.unit }
@@ -183,14 +192,6 @@ export function supportCheck(wps: SupportWps, pqrs: SupportPqr[]): SupportCheck 
     findings.push({ met: false, clause: 'code', text: `${p.number} was qualified to ${codeName(p.code as CodeId)}; this WPS is written to ${codeName(wps.code as CodeId)}.`, basis: 'convention', field: 'supportingPqrIds' })
   }
   if (sameCode.length === 0) return result(false, null)
-  if (rulesMissing && wps.code === 'iso-9606-1') {
-    // A procedure recorded with the ISO code is an ISO 15609-1 WPS qualified to ISO 15614-1: compared variable by variable
-    // where the record holds the value; the rest, and the approval, stay a check by hand.
-    findings.push(...isoProcedureFindings(wps, sameCode))
-    findings.push({ met: false, clause: 'rules', basis: 'convention', field: null,
-      text: 'ISO 15614-1 ranges are carried from memory: confirm each against the WPQRs by hand and say how when approving.' })
-    return result(false, iso15614Caution)
-  }
   if (rulesMissing) {
     findings.push({ met: false, clause: 'rules', basis: 'convention', field: null,
       text: `Rootface carries no procedure-support rules for ${ruleSet!.title}: check each range against the PQRs by hand and say how when approving.` })

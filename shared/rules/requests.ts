@@ -20,7 +20,9 @@ const day = (what: string) => z.string({ required_error: `${what} is required`, 
   .regex(/^\d{4}-\d{2}-\d{2}$/, `${what} must be a date as YYYY-MM-DD`).refine(isCalendarDay, `${what} is not a calendar date`)
 
 export const codeSchema = z.enum(['asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1'], {
-  errorMap: () => ({ message: 'code must be one of asme-ix, aws-d1.1, aws-d1.3, iso-9606-1' }),
+  errorMap: (_issue, ctx) => ({ message: ctx.data === 'iso-15614-1'
+    ? 'code: ISO 15614-1 qualifies procedures, not welders: a welder test names iso-9606-1'
+    : 'code must be one of asme-ix, aws-d1.1, aws-d1.3, iso-9606-1' }),
 })
 export const checkNames = ['procedure-ranges', 'welder-ranges', 'covers', 'bend', 'radiography', 'continuity', 'heat-input', 'gauge', 'tensile', 'readings', 'wps-support', 'specimens', 'toughness'] as const satisfies readonly CheckName[]
 export const checkSchema = z.enum(checkNames, { errorMap: () => ({ message: `check must be one of ${checkNames.join(', ')}` }) })

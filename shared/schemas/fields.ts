@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { codeIds } from '../vocabulary/records'
+import { codeIds, procedureCodeIds } from '../vocabulary/records'
 
 /** Small field builders shared by the record schemas: form inputs give '' for an empty box, the API gives null. */
 
@@ -103,7 +103,13 @@ export function windowOf(what: string) {
 export const idSchema = z.number({ invalid_type_error: 'must be a record id' }).int('must be a record id').positive('must be a record id').max(2_147_483_647)
 export const versionSchema = z.number({ required_error: 'Send the version you edited', invalid_type_error: 'version must be a whole number' })
   .int('version must be a whole number').positive('version must be a whole number').max(2_147_483_647, 'version is too large')
-export const codeIdSchema = z.enum(codeIds, { errorMap: () => ({ message: 'Pick a code' }) })
+export const codeIdSchema = z.enum(codeIds, { errorMap: (_issue, ctx) => ({ message: ctx.data === 'iso-15614-1'
+  ? 'ISO 15614-1 qualifies procedures, not welders: a welder test names ISO 9606-1'
+  : 'Pick a code' }) })
+/** The code of a WPS or PQR/WPQR: ISO 9606-1 (the welder standard) is refused with a message naming ISO 15614-1. */
+export const procedureCodeIdSchema = z.enum(procedureCodeIds, { errorMap: (_issue, ctx) => ({ message: ctx.data === 'iso-9606-1'
+  ? 'ISO 9606-1 qualifies welders, not procedures: a WPS or WPQR names ISO 15614-1'
+  : 'Pick a code' }) })
 export const unitIdSchema = z.enum(['in', 'mm'], { errorMap: () => ({ message: 'Pick in or mm' }) })
 export const transferIdSchema = z.enum(['short-circuit', 'globular', 'spray', 'pulse'], { errorMap: () => ({ message: 'Pick a transfer mode' }) })
 export const editionSchema = z.string({ required_error: 'Enter the edition' }).trim().regex(/^\d{4}$/, 'Enter the edition year, e.g. 2023')

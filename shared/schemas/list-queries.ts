@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { calendarDate } from './fields'
 import { listQuerySchema, processSchema } from './list'
-import { codeIds, procedureStatuses, pqrStatuses, welderStatuses, welderTestStatuses } from '../vocabulary/records'
+import { anyCodeIds, procedureStatuses, pqrStatuses, welderStatuses, welderTestStatuses } from '../vocabulary/records'
 import { isoProcessIds } from '../vocabulary/iso'
 
 // The query of each list route: its sort columns and filters. The route validates with it; its table sends it.
@@ -15,7 +15,7 @@ const welderProcess = z.union([processSchema, z.enum(isoProcessIds)])
 export const procedureListQuerySchema = listQuerySchema(['number', 'title', 'process', 'status', 'updatedAt']).extend({
   status: z.enum(procedureStatuses).optional(),
   process: processSchema.optional(),
-  code: z.enum(codeIds).optional(),
+  code: z.enum(anyCodeIds).optional(),
   pNumber,
   thickness: z.coerce.number().positive().max(1000).optional(),
 })
@@ -24,7 +24,7 @@ export type ProcedureListQuery = z.infer<typeof procedureListQuerySchema>
 export const pqrListQuerySchema = listQuerySchema(['number', 'testDate', 'process', 'status', 'couponThickness']).extend({
   status: z.enum(pqrStatuses).optional(),
   process: processSchema.optional(),
-  code: z.enum(codeIds).optional(),
+  code: z.enum(anyCodeIds).optional(),
   pNumber,
 })
 export type PqrListQuery = z.infer<typeof pqrListQuerySchema>

@@ -1,7 +1,8 @@
 import { z } from 'zod'
-import { processSchema } from './list'
+import { isIsoProcedureCode } from '../vocabulary/records'
+import { isoProcedureRefine, procedureProcessSchema, wpqrPieceSchema } from './procedure-iso'
 import {
-  codeIdSchema, daySchema, editionSchema, optionalNumber, pickedId, optionalText, requiredNumber, requiredText, transferIdSchema,
+  procedureCodeIdSchema, daySchema, editionSchema, optionalNumber, pickedId, optionalText, requiredNumber, requiredText, transferIdSchema,
   unitIdSchema, versionSchema,
 } from './fields'
 
@@ -20,13 +21,15 @@ export const pqrActualsSchema = z.object({
   pwht: optionalText('PWHT', 120),
   pwhtTemperature: optionalNumber('PWHT temperature', { max: 2000 }),
   pwhtHours: optionalNumber('PWHT time', { positive: true, max: 1000 }),
+  /** ISO 15614-1 only: the WPQR test piece (positions, plate/pipe, runs, parent group, filler); absent on ASME/AWS PQRs. */
+  iso: wpqrPieceSchema.nullable(),
 }).partial()
 export type PqrActuals = z.infer<typeof pqrActualsSchema>
 
 /** One layer of the coupon as welded: its process, filler, the values actually used and the deposit of the process. */
 export const pqrLayerSchema = z.object({
   name: requiredText('the layer (root, fill, cap...)', 40),
-  process: processSchema,
+  process: procedureProcessSchema,
   transfer: transferIdSchema.nullable().default(null),
   fillerMetalId: pickedId('the filler metal').nullable().default(null),
   fillerSize: optionalNumber('Filler size', { positive: true, max: 100 }),
@@ -45,15 +48,15 @@ export const pqrLayerSchema = z.object({
   flux: optionalText('Flux and electrode–flux class', 80),
 }).superRefine((v, ctx) => {
   if (v.process === 'GMAW' && !v.transfer) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'Pick the GMAW transfer mode' })
-  if (v.transfer && v.process !== 'GMAW' && v.process !== 'FCAW') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'A transfer mode is stated for GMAW and FCAW only' })
-  if (v.fillerMetalId === null && v.process !== 'GTAW' && v.process !== 'PAW') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['fillerMetalId'], message: 'Pick the filler metal' })
+  if (v.transfer && !['GMAW', 'FCAW', '131', '135', '136', '138'].includes(v.process)) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['transfer'], message: 'A transfer mode is stated for GMAW and FCAW (ISO 131, 135, 136, 138) only' })
+  if (v.fillerMetalId === null && !['GTAW', 'PAW', '141', '142', '143', '145', '15'].includes(v.process)) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['fillerMetalId'], message: 'Pick the filler metal' })
 })
 export type PqrLayer = z.infer<typeof pqrLayerSchema>
 
 export const pqrDraftSchema = z.object({
   number: requiredText('the PQR number', 40).regex(/^[A-Za-z0-9][A-Za-z0-9 ._/-]*$/, 'Letters, digits, space, . _ / - only'),
   testDate: daySchema,
-  code: codeIdSchema,
+  code: procedureCodeIdSchema,
   edition: editionSchema,
   unit: unitIdSchema,
   couponThickness: requiredNumber('the coupon thickness', { positive: true }),
@@ -71,6 +74,12 @@ export const pqrDraftSchema = z.object({
   if (deposits.every(d => d !== null) && deposits.reduce((a, b) => a! + b!, 0)! > v.couponThickness * (1 + 1e-9)) {
     ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['layers'], message: 'The deposits together cannot be thicker than the coupon' })
   }
+  const iso = isIsoProcedureCode(v.code)
+  isoProcedureRefine(iso, v.layers.map(l => l.process), v.actuals.iso?.positions ?? null, ctx, ['layers', 'process'])
+  if (v.code === 'iso-15614-1' && v.unit !== 'mm') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['unit'], message: 'ISO 15614-1 records are kept in millimetres and °C' })
+  if (iso && !v.actuals.iso) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['actuals', 'iso', 'positions'], message: 'ISO 15614-1: give the test piece (positions welded, plate or pipe)' })
+  if (iso && v.actuals.iso && !v.actuals.iso.positions.length) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['actuals', 'iso', 'positions'], message: 'Pick the ISO 6947 position(s) the test piece was welded in' })
+  if (!iso && v.actuals.iso) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['actuals', 'iso', 'positions'], message: 'The ISO test piece belongs to ISO 15614-1 records only' })
   v.layers.forEach((l, i) => {
     if (l.depositThickness !== null && l.depositThickness > v.couponThickness) {
       ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['layers', i, 'depositThickness'], message: 'The deposit cannot be thicker than the coupon' })

@@ -1,8 +1,10 @@
 import { z } from 'zod'
 import type { procedureStatuses } from '../vocabulary/records'
-import { processSchema } from './list'
+import { isIsoProcedureCode } from '../vocabulary/records'
+import { isoPositions, isoProcessIds } from '../vocabulary/iso'
+import { procedureProcessSchema, isoProcedureRefine } from './procedure-iso'
 import {
-  codeIdSchema, editionSchema, idSchema, optionalNumber, optionalText, rangeOf, requiredText, transferIdSchema, unitIdSchema,
+  procedureCodeIdSchema, editionSchema, idSchema, optionalNumber, optionalText, rangeOf, requiredText, transferIdSchema, unitIdSchema,
   versionSchema, windowOf,
 } from './fields'
 
@@ -35,10 +37,15 @@ export const procedureFillerSchema = z.object({
 })
 export type ProcedureFiller = z.infer<typeof procedureFillerSchema>
 
-/** Processes that weld with a non-consumable tungsten electrode (tungsten, filler added or not, consumable insert). */
-export const tungstenProcesses = ['GTAW', 'PAW'] as const
-/** Processes fed by a wire whose speed sets the current (wire feed speed, contact tip). */
-export const wireProcesses = ['GMAW', 'FCAW', 'SAW', 'EGW', 'ESW'] as const
+/** Processes that weld with a non-consumable tungsten electrode (tungsten, filler added or not, consumable insert); ISO 4063 141–145 and 15. */
+export const tungstenProcesses = ['GTAW', 'PAW', '141', '142', '143', '145', '15'] as const
+/** Processes fed by a wire whose speed sets the current (wire feed speed, contact tip); ISO 4063 114, 121, 125, 131–138. */
+export const wireProcesses = ['GMAW', 'FCAW', 'SAW', 'EGW', 'ESW', '114', '121', '125', '131', '135', '136', '138'] as const
+/** Processes whose metal transfer mode is stated (GMAW, FCAW; ISO 4063 131, 135, 136, 138). */
+export const transferProcesses = ['GMAW', 'FCAW', '131', '135', '136', '138'] as const
+/** Processes that weld under a flux (SAW; ISO 4063 121, 125). */
+export const fluxProcesses = ['SAW', '121', '125'] as const
+export { isoPositions, isoProcessIds }
 export const layerNameSuggestions = ['root', 'hot pass', 'fill', 'cap', 'all passes', 'back weld'] as const
 
 /**
@@ -48,7 +55,7 @@ export const layerNameSuggestions = ['root', 'hot pass', 'fill', 'cap', 'all pas
 export const procedureLayerSchema = z.object({
   name: requiredText('the layer (root, hot pass, fill, cap)', 40),
   passes: optionalText('Passes', 20),
-  process: processSchema,
+  process: procedureProcessSchema,
   transfer: transferIdSchema.nullable().default(null),
   fillers: z.array(procedureFillerSchema).max(4, 'At most 4 filler metals a layer'),
   fillerAdded: z.boolean().nullable().default(null),
@@ -74,14 +81,14 @@ export const procedureLayerSchema = z.object({
 }).superRefine((v, ctx) => {
   const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: z.ZodIssueCode.custom, path, message })
   const tungsten = (tungstenProcesses as readonly string[]).includes(v.process)
-  if (v.transfer && v.process !== 'GMAW' && v.process !== 'FCAW') issue(['transfer'], 'A transfer mode is stated for GMAW and FCAW only')
+  if (v.transfer && !(transferProcesses as readonly string[]).includes(v.process)) issue(['transfer'], 'A transfer mode is stated for GMAW and FCAW only')
   if (v.process === 'GMAW' && !v.transfer) issue(['transfer'], 'Pick the GMAW transfer mode')
   if (!v.fillers.length && !(tungsten && v.fillerAdded === false)) issue(['fillers'], 'Add at least one filler metal (or say no filler is added, GTAW)')
   if (v.fillerAdded === false && v.fillers.length) issue(['fillerAdded'], 'Fillers are listed: filler is added')
   if (!tungsten && v.fillerAdded !== null) issue(['fillerAdded'], 'Filler added or not is stated for GTAW and PAW')
   if (!tungsten && (v.tungsten.type || v.tungsten.size !== null)) issue(['tungsten', 'type'], 'A tungsten electrode belongs to GTAW or PAW')
   if (!tungsten && v.consumableInsert) issue(['consumableInsert'], 'A consumable insert belongs to GTAW or PAW')
-  if (v.process !== 'SAW' && (v.flux.name || v.flux.classification)) issue(['flux', 'name'], 'A flux belongs to SAW')
+  if (!(fluxProcesses as readonly string[]).includes(v.process) && (v.flux.name || v.flux.classification)) issue(['flux', 'name'], 'A flux belongs to SAW')
 })
 export type ProcedureLayer = z.infer<typeof procedureLayerSchema>
 
@@ -102,7 +109,7 @@ export type Pwht = z.infer<typeof pwhtSchema>
 export const procedureDraftSchema = z.object({
   number: requiredText('the WPS number', 40).regex(/^[A-Za-z0-9][A-Za-z0-9 ._/-]*$/, 'Letters, digits, space, . _ / - only'),
   title: requiredText('a title', 200),
-  code: codeIdSchema,
+  code: procedureCodeIdSchema,
   edition: editionSchema,
   unit: unitIdSchema,
   supportingPqrIds: z.array(idSchema).max(10, 'At most 10 supporting PQRs').default([]),
@@ -121,7 +128,8 @@ export const procedureDraftSchema = z.object({
   }),
   /** AWS D1.1: a prequalified WPS, held to the code's prequalification limits instead of a PQR. */
   prequalified: z.boolean().default(false),
-  positions: z.array(z.enum(positionLetters, { errorMap: () => ({ message: 'Positions are F, H, V or O' }) })).min(1, 'Pick at least one position'),
+  /** F, H, V, O for ASME and AWS; ISO 6947 positions (PA–PJ, H-L045, J-L045) for ISO 15614-1 (checked per code below). */
+  positions: z.array(z.enum([...positionLetters, ...isoPositions], { errorMap: () => ({ message: 'Positions are F, H, V or O (ISO: PA–PJ, H-L045, J-L045)' }) })).min(1, 'Pick at least one position'),
   progression: z.enum(['uphill', 'downhill'], { errorMap: () => ({ message: 'Progression is uphill or downhill' }) }).nullable().default(null),
   toughnessRequired: z.boolean().default(false),
   preheatMin: optionalNumber('Preheat minimum', { min: -100, max: 2000 }),
@@ -139,6 +147,8 @@ export const procedureDraftSchema = z.object({
   if (v.positions.includes('V') && !v.progression) {
     ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['progression'], message: 'Vertical welding needs a progression, uphill or downhill' })
   }
+  isoProcedureRefine(isIsoProcedureCode(v.code), v.layers.map(l => l.process), v.positions, ctx, ['layers', 'process'])
+  if (v.code === 'iso-15614-1' && v.unit !== 'mm') ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['unit'], message: 'ISO 15614-1 records are kept in millimetres and °C' })
 })
 export type ProcedureDraft = z.infer<typeof procedureDraftSchema>
 export type ProcedureDraftInput = z.input<typeof procedureDraftSchema>

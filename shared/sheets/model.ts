@@ -55,6 +55,8 @@ export interface SheetModel {
   hash: { value: string, label: string, matchesSigned: boolean | null }
   verify: { code: string, url: string } | null
   caution: string
+  /** The welder's photograph on an ISO 9606-1 certificate (a data: URL of a JPEG or PNG), when one is recorded */
+  photo?: { dataUrl: string, caption: string } | null
 }
 
 /** "KB-W02 rev. 1" or "PQR-K101". */

@@ -29,6 +29,12 @@ export const isoTransferProcesses = ['131', '135', '136', '138'] as const
 /** ISO 6947 positions, in the order results list them (PA–PH, PJ, and the inclined pipe positions). */
 export const isoPositions = ['PA', 'PB', 'PC', 'PD', 'PE', 'PF', 'PG', 'PH', 'PJ', 'H-L045', 'J-L045'] as const
 export type IsoPosition = typeof isoPositions[number]
+/** The ISO 6947 positions in plain words (from memory of ISO 6947). */
+export const isoPositionWords: Record<IsoPosition, string> = {
+  'PA': 'flat', 'PB': 'horizontal-vertical', 'PC': 'horizontal', 'PD': 'horizontal-overhead', 'PE': 'overhead',
+  'PF': 'vertical up', 'PG': 'vertical down', 'PH': 'pipe, vertical up', 'PJ': 'pipe, vertical down',
+  'H-L045': 'pipe inclined 45°, up', 'J-L045': 'pipe inclined 45°, down',
+}
 /** Test positions a butt weld is welded in (ISO 9606-1 Table 9 rows). */
 export const isoButtTestPositions = ['PA', 'PC', 'PE', 'PF', 'PG', 'PH', 'PJ', 'H-L045', 'J-L045'] as const satisfies readonly IsoPosition[]
 /** Test positions a fillet weld is welded in (ISO 9606-1 Table 10 rows; PG, PH, PJ from memory). */

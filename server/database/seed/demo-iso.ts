@@ -3,18 +3,24 @@ import type { Db } from '../client'
 import * as t from '../schema'
 import { canonicalJson, contentHash, currentContentFormat, newVerifyCode, sha256Hex } from '../signing'
 import { columnsOf } from '../welder-test-columns'
-import { pqrLayersOf } from '../pqr-columns'
+import { eq } from 'drizzle-orm'
+import { pqrColumns } from '../pqr-columns'
+import { columnsOf as procedureColumns } from '../procedure-columns'
+import { bendAcceptance } from '../../../shared/qualification/bend-acceptance'
+import { tensileOf } from '../../../shared/qualification/tensile-acceptance'
+import { psiToMpa, blankPqrLayer, pqrDraftSchema } from '../../../shared/schemas/pqr'
+import { blankLayer, blankProcedureDraft, procedureDraftSchema } from '../../../shared/schemas/procedure'
 import type { WelderTestInput } from '../../../shared/schemas/welder-test'
 
 // The demo shop's ISO side (invented): a welder certified to ISO 9606-1 for 135 P BW FM1 S t10 PF ss nb, route 9.3 b),
 // tested 22 months ago, confirmed every five months by the welding coordinator, with two production welds tested in the
-// last six months of the first two years (so the certificate runs two more years). And an ISO 15614-1 WPQR (recorded
-// under the ISO code; read as ISO 15614-1), 135 spray on 15 mm plate in PA with impact tests, values in mm and °C.
+// last six months of the first two years (so the certificate runs two more years). And an ISO 15614-1 WPQR, 135 spray on
+// 15 mm plate in PA with impact tests, values in mm and °C, with the ISO 15609-1 WPS it supports.
 const iso = (d: Date) => format(d, 'yyyy-MM-dd')
 
 export async function seedDemoIso(tx: Db, ctx: { today: Date, supervisor: { id: number, name: string }, inspector: { id: number, name: string } }) {
   const { today, supervisor, inspector } = ctx
-  await seedDemoIsoWpqr(tx, today)
+  await seedDemoIsoWpqr(tx, today, inspector, supervisor)
   const [welder] = await tx.insert(t.welders).values({ name: 'Oda Varga', stamp: 'KB-13', employeeNumber: 'E-2107', status: 'active' }).returning()
   const tested = subMonths(today, 22)
   const input: WelderTestInput = {
@@ -45,16 +51,52 @@ export async function seedDemoIso(tx: Db, ctx: { today: Date, supervisor: { id: 
   }
 }
 
-/** The demo's ISO 15614-1 WPQR, recorded (not yet certified): a draft WPS can be written from it. */
-export async function seedDemoIsoWpqr(tx: Db, today: Date) {
-  const [base] = await tx.select().from(t.baseMetals).limit(1)
-  const [filler] = await tx.select().from(t.fillerMetals).limit(1)
-  const values = {
-    number: 'WPQR-ISO-07', testDate: iso(subMonths(today, 5)), code: 'iso-9606-1', edition: '2017', unit: 'mm', process: 'GMAW', transfer: 'spray',
-    couponThickness: 15, depositThickness: 15, baseMetalId: base!.id, fillerMetalId: filler!.id, toughnessRequired: true,
-    actuals: { amps: 265, volts: 28.5, wireFeed: 9.5, travelSpeed: 320, gas: 'M21 (82Ar-18CO2)', gasFlow: 16, position: 'PA', preheat: 20, interpass: 200 },
-    labReportNumber: 'NK-WP-3318', status: 'recorded', layers: [] as unknown[],
-  }
-  const layers = pqrLayersOf(values as Parameters<typeof pqrLayersOf>[0])
-  await tx.insert(t.pqrs).values({ ...values, layers, processes: [...new Set(layers.map(l => l.process))] })
+/**
+ * The demo's ISO 15614-1:2017 WPQR, certified: 135 on 15 mm plate (group 1.2) in PA with impact tests, values in mm and °C;
+ * and an ISO 15609-1 WPS drafted from it (135, 8 to 30 mm, PA and PF), which the WPQR supports on every variable compared.
+ */
+export async function seedDemoIsoWpqr(tx: Db, today: Date, inspector: { id: number, name: string }, supervisor: { id: number, name: string }) {
+  const [base] = await tx.select().from(t.baseMetals).where(eq(t.baseMetals.specification, 'SA-516')).limit(1)
+  const [filler] = await tx.select().from(t.fillerMetals).where(eq(t.fillerMetals.classification, 'ER70S-6')).limit(1)
+  const layer = { ...blankPqrLayer('135', 'all passes'), transfer: 'spray' as const, fillerMetalId: filler!.id, fillerSize: 1.2, depositThickness: 15, current: 'DCEP' as const, amps: 265, volts: 28.5, wireFeed: 9.5, travelSpeed: 320, heatInput: 1400, gas: 'ISO 14175-M21 (82Ar-18CO2)', gasFlow: 16 }
+  const draft = pqrDraftSchema.parse({
+    number: 'WPQR-ISO-07', testDate: iso(subMonths(today, 5)), code: 'iso-15614-1', edition: '2017', unit: 'mm', couponThickness: 15,
+    baseMetalId: base!.id, baseMetalBId: null, welderId: null, toughnessRequired: true, labReportNumber: 'NK-WP-3318', layers: [layer],
+    actuals: {
+      preheat: 20, interpass: 200, pwht: 'none',
+      iso: { positions: ['PA'], form: 'plate', outsideDiameter: null, runs: 'multi', materialGroup: '1.2', fillerDesignation: 'ISO 14341-A G 42 4 M21 3Si1', fillerGroup: '1', hardnessTested: false },
+    },
+  })
+  const toughness = { testTemperature: -20, specimens: [64, 58, 61].map(energy => ({ location: 'weld metal', energy })) }
+  const [row] = await tx.insert(t.pqrs).values({ ...pqrColumns(draft), status: 'certified', toughness }).returning()
+  // Judged as the app judges an ISO WPQR's results (server/database/pqrs.ts judgedResults: the ISO tensile and bend rules, MPa)
+  const minimum = psiToMpa(base!.minTensilePsi ?? 0)
+  const tensile = [{ label: 'T1', width: 25, thickness: 15, load: 198000, breakLocation: 'base metal' }, { label: 'T2', width: 25, thickness: 15, load: 196500, breakLocation: 'base metal' }]
+  await tx.insert(t.pqrTensileSpecimens).values(tensile.map((s) => {
+    const judged = tensileOf({ ...s, unit: 'mm', minimumStrength: minimum, code: 'iso-9606-1' })
+    return { ...s, pqrId: row!.id, strength: judged.strength, accepted: judged.accepted }
+  }))
+  const bends = [0, 0, 1, 0].map(size => ({ type: 'side', largestIndication: size, atCorner: false }))
+  await tx.insert(t.pqrBendSpecimens).values(bends.map(b => ({ ...b, pqrId: row!.id, accepted: bendAcceptance('iso-9606-1', 'mm', [b]).accepted })))
+  await tx.insert(t.signatures).values({
+    recordType: 'pqr', recordId: row!.id, recordVersion: 1, signerId: inspector.id, signerName: inspector.name,
+    meaning: 'certified', sha256: (await contentHash(tx, 'pqr', row!.id))!, verifyCode: newVerifyCode(), contentFormat: currentContentFormat,
+  })
+
+  const wps = procedureDraftSchema.parse({
+    ...blankProcedureDraft(), number: 'KB-ISO-135-01', title: 'MAG 135 butt welds in plate, group 1.2, 8 to 30 mm', code: 'iso-15614-1', edition: '2017', unit: 'mm',
+    baseMetals: { a: { baseMetalId: base!.id, pNumber: '1.2', groupNumber: null }, b: { baseMetalId: base!.id, pNumber: '1.2', groupNumber: null } },
+    thickness: { groove: { min: 8, max: 30 }, fillet: { min: null, max: null } }, diameter: { min: null, max: null },
+    joints: { type: 'butt', groove: 'single V, 60°, root face 1 mm', grooveAngle: 60, rootOpening: { min: 1, max: 2 }, rootFace: { min: 0, max: 1 }, backing: 'none (single side, root welded from one side)', designation: null },
+    positions: ['PA', 'PF'], progression: null, toughnessRequired: true, preheatMin: 20, interpassMax: 200,
+    pwht: { required: false, temperature: { min: null, max: null }, holdHours: null, note: 'as welded' },
+    layers: [{
+      ...blankLayer('GMAW', 'all passes'), process: '135', transfer: 'spray',
+      fillers: [{ fillerMetalId: null, specification: 'ISO 14341-A', classification: 'G 42 4 M21 3Si1', fNumber: 'FM1', aNumber: null, size: 1.2 }],
+      amps: { min: 240, max: 285, setPoint: 265 }, volts: { min: 27, max: 30, setPoint: 28.5 }, travelSpeed: { min: 280, max: 360, setPoint: 320 },
+      heatInputMax: 1700, gas: { composition: 'ISO 14175-M21 (82Ar-18CO2)', flow: { min: 14, max: 18, setPoint: 16 } },
+    }],
+  })
+  const [procedure] = await tx.insert(t.procedures).values({ ...procedureColumns(wps), revision: 0, status: 'draft', createdBy: supervisor.id }).returning()
+  await tx.insert(t.procedurePqrs).values({ procedureId: procedure!.id, pqrId: row!.id })
 }

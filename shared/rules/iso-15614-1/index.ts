@@ -3,8 +3,8 @@ import { wpqrRanges } from './ranges'
 import { isoWpsSupport } from './support'
 import { RuleRefusal } from '../refusal'
 
-export { wpqrRanges, thicknessRange, diameterRange, positionRange, type WpqrTestPiece, type WpqrRanges } from './ranges'
-export { isoWpsSupport, type IsoWps, type IsoSupport, type IsoFinding } from './support'
+export { wpqrRanges, thicknessRange, diameterRange, positionRange, heatInputRange, pwhtRange, type WpqrTestPiece, type WpqrRanges, type WpqrReason, type WpqrVariable } from './ranges'
+export { isoWpsSupport, againstWpqr, type IsoWps, type IsoSupport, type IsoFinding, type IsoFindingState } from './support'
 
 /**
  * `npm run rules` for the procedure standard: { "code": "iso-15614-1", "check": "wpqr-ranges" | "wps-support", "input": … }.
@@ -21,6 +21,7 @@ export const wpqrSchema = z.object({
   form: z.enum(['plate', 'pipe']),
   thickness: positive('thickness'),
   outsideDiameter: positive('outsideDiameter').optional(),
+  runs: z.enum(['single', 'multi']).optional(),
   positions: z.array(z.string()).min(1, 'positions needs at least one ISO 6947 position'),
   materialGroup: z.string().max(10).optional(),
   heatInputMax: positive('heatInputMax').optional(),
@@ -31,6 +32,7 @@ export const wpqrSchema = z.object({
   interpassMax: temperature('interpassMax').optional(),
   pwht: pwhtSchema.optional(),
   filler: z.string().max(80).optional(),
+  fillerGroup: z.enum(['1', '2', '3', '4', '5', '6']).optional(),
 }).strict()
 
 export const isoWpsSchema = z.object({
@@ -43,7 +45,7 @@ export const isoWpsSchema = z.object({
   heatInput: z.object({ min: positive('heatInput.min').optional(), max: positive('heatInput.max').optional() }).strict().optional(),
   preheatMin: temperature('preheatMin').optional(),
   interpassMax: temperature('interpassMax').optional(),
-  pwht: pwhtSchema.optional(),
+  pwht: z.object({ done: z.boolean(), temperature: z.object({ min: temperature('pwht.temperature.min'), max: temperature('pwht.temperature.max') }).strict().optional(), hours: positive('pwht.hours').optional() }).strict().optional(),
   filler: z.string().max(80).optional(),
 }).strict()
 
@@ -55,7 +57,7 @@ const envelope = z.object({
   input: z.unknown(),
 }).strict()
 
-export const iso15614Caution = 'Computed from ISO 15614-1:2017 as this program carries it (every range from memory of clause 8: confirm against your copy). '
+export const iso15614Caution = 'Computed from ISO 15614-1:2017 (level 2) as this program carries it (every range from memory of clause 8: confirm against your copy). '
   + 'Rootface helps; it does not qualify anyone: the governing code edition, the shop\'s quality manual, the contract and the examiner or examining body have the final word.'
 
 const issues = (error: z.ZodError, prefix: string) => error.issues.map(i => `${[prefix, ...i.path].filter(p => p !== '').join('.')}: ${i.message}`).join('; ')

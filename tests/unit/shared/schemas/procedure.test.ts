@@ -63,7 +63,7 @@ describe('procedureDraftSchema: the WPS draft shared by the form and the route',
     expect(issues(withLayer({ process: 'SMAW', transfer: 'spray' }))['layers.0.transfer']).toBe('A transfer mode is stated for GMAW and FCAW only')
     expect(issues({ ...complete(), positions: ['F', 'V'], progression: null }).progression).toMatch(/uphill or downhill/)
     expect(issues({ ...complete(), positions: [] }).positions).toBe('Pick at least one position')
-    expect(issues({ ...complete(), positions: ['1G'] })['positions.0']).toBe('Positions are F, H, V or O')
+    expect(issues({ ...complete(), positions: ['1G'] })['positions.0']).toBe('Positions are F, H, V or O (ISO: PA–PJ, H-L045, J-L045)')
   })
 
   it('needs at least one filler a layer, with its F-No.; an autogenous GTAW layer says so', () => {

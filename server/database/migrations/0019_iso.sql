@@ -1,0 +1,2 @@
+ALTER TABLE "procedures" DROP CONSTRAINT "procedures_code_check";--> statement-breakpoint
+ALTER TABLE "procedures" ADD CONSTRAINT "procedures_code_check" CHECK ("procedures"."code" in ('asme-ix', 'aws-d1.1', 'aws-d1.3', 'iso-9606-1', 'iso-15614-1'));
