@@ -98,7 +98,7 @@ export async function pqrDetail(db: Db, id: number) {
   const qualifies = support.map(s => pqrQualifies(s, { code: row.code, edition: row.edition, unit: row.unit as Unit }))
   const specimensNeeded = specimensRequired(row)
   return {
-    pqr: { ...row, heatInput: pqrHeatInput(row) },
+    pqr: { ...row, actuals: (row.actuals ?? {}) as PqrActuals, toughness: row.toughness as PqrResults['toughness'], unit: row.unit as Unit, heatInput: pqrHeatInput(row) },
     draft: pqrDraftOf(row),
     layers: layers.map(l => ({ ...l, heatInput: layerHeatInput(row, l), filler: fillers.find(f => f.id === l.fillerMetalId) ?? null })),
     baseMetal: base ?? null, baseMetalB: baseB ?? null, welder: welder ?? null, fillerMetal: fillers.find(f => f.id === row.fillerMetalId) ?? fillers[0] ?? null,

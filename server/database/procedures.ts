@@ -8,6 +8,7 @@ import { supportPqrs } from './pqrs'
 import { auditorMayReadProcedure } from './projects'
 import type { SessionUser } from '../utils/auth'
 import { layeredSupport } from '#shared/qualification/layer-support'
+import type { ReadingValues } from '#shared/schemas/reading'
 import { prequalifiedOfDraft } from '#shared/qualification/prequalified-wps'
 
 import { columnsOf, draftOf, layersOf, obj, str, type ProcedureRow } from './procedure-columns'
@@ -80,7 +81,7 @@ export async function readingsOf(db: Db, procedureId: number, welderId: number |
   }).from(readings).leftJoin(welders, eq(welders.id, readings.welderId)).leftJoin(accounts, eq(accounts.id, readings.recordedBy))
     .where(where).orderBy(desc(readings.takenAt)).limit(200)
   const used = await equipmentOfReadings(db, rows.map(r => r.id))
-  return rows.map(r => ({ ...r, equipment: used.get(r.id) ?? [] }))
+  return rows.map(r => ({ ...r, values: r.values as ReadingValues, equipment: used.get(r.id) ?? [] }))
 }
 
 /**
