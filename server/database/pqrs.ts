@@ -6,6 +6,7 @@ import type { Db } from './client'
 import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures, welders } from './schema'
 import { grantedProjectIds } from './projects'
 import type { SessionUser } from '../utils/auth'
+import { missing } from '../../shared/types/outcome'
 import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
@@ -77,7 +78,7 @@ export async function findPqr(db: Db, id: number) {
 /** One PQR with its metals, results, signatures, the procedures it supports and the ranges it qualifies. */
 export async function pqrDetail(db: Db, id: number) {
   const row = await findPqr(db, id)
-  if (!row) return null
+  if (!row) return missing('PQR')
   const layers = pqrLayersOf(row)
   const fillerIds = [...new Set(layers.map(l => l.fillerMetalId).filter((f): f is number => f !== null))]
   const [[base], [baseB], [welder], fillers, tensile, bends, signed, supports, support] = await Promise.all([

@@ -7,6 +7,7 @@ import { equipmentOfReadings } from './equipment'
 import { supportPqrs } from './pqrs'
 import { auditorMayReadProcedure } from './projects'
 import type { SessionUser } from '../utils/auth'
+import { missing } from '../../shared/types/outcome'
 import { layeredSupport } from '#shared/qualification/layer-support'
 import type { ReadingValues } from '#shared/schemas/reading'
 import { prequalifiedOfDraft } from '#shared/qualification/prequalified-wps'
@@ -71,6 +72,15 @@ export async function procedureDetail(db: Db, row: ProcedureRow) {
     draft: draftOf(row, pqrIds),
     pqrs, support: check, signatures: signed, revisions, prequalified,
   }
+}
+
+/** One WPS as its page reads it; a welder reads approved revisions only, and not the PQR records behind them. */
+export async function procedurePage(db: Db, user: SessionUser, id: number) {
+  const row = await findProcedure(db, id)
+  if (!row || (user.role === 'welder' && row.status !== 'approved')) return missing('Procedure')
+  const detail = await procedureDetail(db, row)
+  if (user.role === 'welder') return { ...detail, pqrs: detail.pqrs.map(p => ({ id: p.id, number: p.number, status: p.status })) }
+  return detail
 }
 
 export async function readingsOf(db: Db, procedureId: number, welderId: number | null) {
