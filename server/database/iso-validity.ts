@@ -8,6 +8,7 @@ import { settle } from '../utils/outcome'
 import { conflict, fieldFailure, missing } from '../../shared/types/outcome'
 import type { SessionUser } from '../utils/auth'
 import type { IsoValidityRecordInput } from '../../shared/schemas/iso-validity'
+import type { isoConfirmers, isoValidityKinds } from '../../shared/vocabulary/iso'
 import { isoValidity, type IsoRoute, type IsoValidityRecord } from '../../shared/rules/iso-9606-1/validity'
 import { designationOf } from './welder-test-columns'
 
@@ -31,7 +32,8 @@ export async function isoValidityOfTest(db: Db, user: SessionUser, id: number, t
     : null
   return {
     testId: id, status: row.status, testDate: row.testDate, route, designation: designationOf(row), validity,
-    records: records.map(r => ({ id: r.id, kind: r.kind, on: r.on, confirmer: r.confirmer, statement: r.statement, reference: r.reference, signerName: r.signerName, sha256: r.sha256, createdAt: r.createdAt })),
+    // kind and confirmer hold ids of shared/vocabulary/iso.ts (the record schema checks them when signed).
+    records: records.map(r => ({ id: r.id, kind: r.kind as keyof typeof isoValidityKinds, on: r.on, confirmer: r.confirmer as keyof typeof isoConfirmers, statement: r.statement, reference: r.reference, signerName: r.signerName, sha256: r.sha256, createdAt: r.createdAt })),
   }
 }
 

@@ -42,7 +42,9 @@ export async function pickPqrs(db: Db, query: PqrPickerQuery) {
   const rows = await db.select({
     id: pqrs.id, number: pqrs.number, testDate: pqrs.testDate, code: pqrs.code, edition: pqrs.edition, unit: pqrs.unit, process: pqrs.process,
     transfer: pqrs.transfer, processes: pqrs.processes, couponThickness: pqrs.couponThickness, status: pqrs.status,
-    pNumber: baseMetals.pNumber, filler: fillerMetals.classification, fNumber: fillerMetals.fNumber,
+    pNumber: baseMetals.pNumber, groupNumber: baseMetals.groupNumber, baseMetalId: pqrs.baseMetalId, baseMetal: baseMetals.specification,
+    baseGrade: baseMetals.grade, fillerMetalId: pqrs.fillerMetalId, fillerSpecification: fillerMetals.specification, filler: fillerMetals.classification,
+    fNumber: fillerMetals.fNumber, aNumber: fillerMetals.aNumber,
   }).from(pqrs).leftJoin(baseMetals, eq(baseMetals.id, pqrs.baseMetalId)).leftJoin(fillerMetals, eq(fillerMetals.id, pqrs.fillerMetalId))
     .where(where).orderBy(asc(pqrs.number)).limit(query.ids ? 50 : query.limit + 1)
   const page = more(rows, query.ids ? 50 : query.limit)

@@ -6,6 +6,7 @@ import type { Db } from './client'
 import { baseMetals, fillerMetals, pqrBendSpecimens, pqrs, pqrTensileSpecimens, procedurePqrs, procedures, projectProcedures, signatures, welders } from './schema'
 import { grantedProjectIds } from './projects'
 import type { SessionUser } from '../utils/auth'
+import { missing } from '../../shared/types/outcome'
 import { evaluate } from '#shared/rules'
 import { bendAcceptance } from '#shared/qualification/bend-acceptance'
 import { pqrQualifies, type SupportPqr } from '#shared/qualification/procedure-support'
@@ -103,7 +104,7 @@ export async function findPqr(db: Db, id: number) {
 /** One PQR with its metals, results, signatures, the procedures it supports and the ranges it qualifies. */
 export async function pqrDetail(db: Db, id: number) {
   const row = await findPqr(db, id)
-  if (!row) return null
+  if (!row) return missing('PQR')
   const layers = pqrLayersOf(row)
   const fillerIds = [...new Set(layers.map(l => l.fillerMetalId).filter((f): f is number => f !== null))]
   const [[base], [baseB], [welder], fillers, tensile, bends, signed, supports, support] = await Promise.all([
@@ -124,7 +125,7 @@ export async function pqrDetail(db: Db, id: number) {
   const qualifies = support.map(s => pqrQualifies(s, { code: row.code, edition: row.edition, unit: row.unit as Unit }))
   const specimensNeeded = specimensRequired(row)
   return {
-    pqr: { ...row, heatInput: pqrHeatInput(row) },
+    pqr: { ...row, actuals: (row.actuals ?? {}) as PqrActuals, toughness: row.toughness as PqrResults['toughness'], unit: row.unit as Unit, heatInput: pqrHeatInput(row) },
     draft: pqrDraftOf(row),
     layers: layers.map(l => ({ ...l, heatInput: layerHeatInput(row, l), filler: fillers.find(f => f.id === l.fillerMetalId) ?? null })),
     baseMetal: base ?? null, baseMetalB: baseB ?? null, welder: welder ?? null, fillerMetal: fillers.find(f => f.id === row.fillerMetalId) ?? fillers[0] ?? null,

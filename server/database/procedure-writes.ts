@@ -2,7 +2,7 @@ import { and, eq, inArray, max, ne } from 'drizzle-orm'
 import type { Db } from './client'
 import { pqrs, procedurePqrs, procedures, projectProcedures, readings, signatures, welders } from './schema'
 import { contentHash, currentContentFormat, newVerifyCode } from './signing'
-import { columnsOf, draftOf, findProcedure, layersOf, prequalifiedOf, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
+import { columnsOf, draftOf, findProcedure, layersOf, prequalifiedOf, readingsOf, supportingPqrIdsOf, supportOf, type ProcedureRow } from './procedures'
 import { recordAudit } from './audit'
 import { checkReadingEquipment, keepReadingEquipment } from './equipment'
 import { todayIso } from '../utils/today'
@@ -177,6 +177,15 @@ export function readingWindow(row: ProcedureRow, layerIndex = 0) {
     volts: pick(layer.volts), amps: pick(layer.amps), wireFeedSpeed: pick(layer.wireFeed),
     travelSpeed: pick(layer.travelSpeed), ctwd: pick(layer.ctwd), gasFlow: pick(layer.gas.flow),
   }).filter(([, v]) => v !== undefined))
+}
+
+/** The readings kept against a WPS with its windows per layer; a welder reads their own, of approved revisions only. */
+export async function readingsPage(db: Db, user: SessionUser, id: number) {
+  const row = await findProcedure(db, id)
+  if (!row || (user.role === 'welder' && row.status !== 'approved')) return missing('Procedure')
+  const items = await readingsOf(db, id, user.role === 'welder' ? (user.welderId ?? -1) : null)
+  const layers = layersOf(row).map((l, i) => ({ index: i, name: l.name, process: l.process, window: readingWindow(row, i) }))
+  return { window: readingWindow(row), layers, unit: row.unit, items }
 }
 
 /**

@@ -7,7 +7,9 @@ import { equipmentOfReadings } from './equipment'
 import { supportPqrs } from './pqrs'
 import { auditorMayReadProcedure } from './projects'
 import type { SessionUser } from '../utils/auth'
+import { missing } from '../../shared/types/outcome'
 import { layeredSupport } from '#shared/qualification/layer-support'
+import type { ReadingValues } from '#shared/schemas/reading'
 import { prequalifiedOfDraft } from '#shared/qualification/prequalified-wps'
 
 import { columnsOf, draftOf, layersOf, obj, str, type ProcedureRow } from './procedure-columns'
@@ -72,6 +74,15 @@ export async function procedureDetail(db: Db, row: ProcedureRow) {
   }
 }
 
+/** One WPS as its page reads it; a welder reads approved revisions only, and not the PQR records behind them. */
+export async function procedurePage(db: Db, user: SessionUser, id: number) {
+  const row = await findProcedure(db, id)
+  if (!row || (user.role === 'welder' && row.status !== 'approved')) return missing('Procedure')
+  const detail = await procedureDetail(db, row)
+  if (user.role === 'welder') return { ...detail, pqrs: detail.pqrs.map(p => ({ id: p.id, number: p.number, status: p.status })) }
+  return detail
+}
+
 export async function readingsOf(db: Db, procedureId: number, welderId: number | null) {
   const where = welderId === null ? eq(readings.procedureId, procedureId) : and(eq(readings.procedureId, procedureId), eq(readings.welderId, welderId))
   const rows = await db.select({
@@ -80,7 +91,7 @@ export async function readingsOf(db: Db, procedureId: number, welderId: number |
   }).from(readings).leftJoin(welders, eq(welders.id, readings.welderId)).leftJoin(accounts, eq(accounts.id, readings.recordedBy))
     .where(where).orderBy(desc(readings.takenAt)).limit(200)
   const used = await equipmentOfReadings(db, rows.map(r => r.id))
-  return rows.map(r => ({ ...r, equipment: used.get(r.id) ?? [] }))
+  return rows.map(r => ({ ...r, values: r.values as ReadingValues, equipment: used.get(r.id) ?? [] }))
 }
 
 /**

@@ -2,6 +2,9 @@ import { sql } from 'drizzle-orm'
 import {
   type AnyPgColumn, bigint, boolean, check, customType, date, doublePrecision, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, uniqueIndex,
 } from 'drizzle-orm/pg-core'
+import type { Role } from '../../shared/utils/roles'
+import type { TrialJointKind } from '../../shared/vocabulary/trial-joints'
+import type { EquipmentKind, equipmentStates } from '../../shared/vocabulary/equipment-kinds'
 
 // Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
 const created = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow()
@@ -37,7 +40,7 @@ export const accounts = pgTable('accounts', {
   id: serial('id').primaryKey(),
   email: text('email').notNull(),
   name: text('name').notNull(),
-  role: text('role').notNull(),
+  role: text('role').notNull().$type<Role>(),
   passwordHash: text('password_hash'),
   welderId: integer('welder_id').references(() => welders.id),
   active: boolean('active').notNull().default(true),
@@ -406,7 +409,7 @@ export const signoffRequests = pgTable('signoff_requests', {
   recordType: text('record_type').notNull(),
   recordId: integer('record_id').notNull(),
   // What is asked: an inspector to certify, or a supervisor to approve
-  meaning: text('meaning').notNull(),
+  meaning: text('meaning').notNull().$type<'approved' | 'certified' | 'witnessed'>(),
   requestedBy: integer('requested_by').notNull().references(() => accounts.id),
   requestedOf: integer('requested_of').references(() => accounts.id),
   note: text('note'),
@@ -576,7 +579,7 @@ export const trialSeries = pgTable('trial_series', {
   baseMetalId: integer('base_metal_id').references(() => baseMetals.id),
   thickness: doublePrecision('thickness').notNull(),
   gauge: text('gauge'),
-  joint: text('joint').notNull(),
+  joint: text('joint').notNull().$type<TrialJointKind>(),
   rootGap: doublePrecision('root_gap'),
   position: text('position').notNull(),
   progression: text('progression'),
@@ -671,12 +674,12 @@ export const qualificationRevocations = pgTable('qualification_revocations', {
 // as an attachment of record type 'equipment').
 export const equipment = pgTable('equipment', {
   id: serial('id').primaryKey(),
-  kind: text('kind').notNull(),
+  kind: text('kind').notNull().$type<EquipmentKind>(),
   // The shop's own tag for it (asset number), unique.
   tag: text('tag').notNull(),
   description: text('description'),
   serialNumber: text('serial_number'),
-  state: text('state').notNull().default('in-service'),
+  state: text('state').notNull().default('in-service').$type<typeof equipmentStates[number]>(),
   calibratedOn: date('calibrated_on', { mode: 'string' }),
   intervalMonths: integer('interval_months'),
   notes: text('notes'),

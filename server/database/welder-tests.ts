@@ -116,6 +116,7 @@ export async function loadWelderTest(db: Db, id: number) {
   const exam = found.test.radiography as ExamRecord | null
   return {
     ...found.test,
+    unit: found.test.unit as 'in' | 'mm',
     processes: depositsOf(found.test),
     radiography: exam?.kind === 'radiography' ? { indications: exam.indications, reportNumber: exam.reportNumber } : null,
     macro: exam?.kind === 'macro-fracture' ? { accepted: exam.accepted, notes: exam.notes } : null,

@@ -6,6 +6,7 @@ import type { WelderListQuery } from '../../shared/schemas/list-queries'
 import type { Db } from './client'
 import { accounts, continuityEntries, welders, welderTests } from './schema'
 import type { WelderInput, WelderPatch } from '../../shared/schemas/welder'
+import type { welderStatuses } from '../../shared/vocabulary/records'
 import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
 import { auditorMayReadWelder } from './projects'
@@ -109,5 +110,6 @@ export async function welderPage(db: Db, user: SessionUser, id: number) {
   if (!history) return missing('Welder')
   const today = todayIso()
   const standings = (await standingsOf(db, [id], today)).get(id) ?? []
-  return { ...history, standings, today }
+  // The roster's status column holds one of welderStatuses (shared/vocabulary/records.ts; the roster schema checks it).
+  return { ...history, welder: { ...history.welder, status: history.welder.status as typeof welderStatuses[number] }, standings, today }
 }

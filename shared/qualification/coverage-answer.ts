@@ -11,7 +11,7 @@ export interface CoverageAnswer {
   procedures: { id: number, number: string, revision: number, title: string, code: string, covered: boolean, reasons: Finding[] }[]
   welders: {
     able: WelderAnswer[]
-    lapsed: Omit<WelderAnswer, 'reasons'>[]
+    lapsed: Pick<WelderAnswer, 'id' | 'name' | 'stamp' | 'standing'>[]
     lapsedCount: number
     notCovered: WelderAnswer[]
     notCoveredCount: number

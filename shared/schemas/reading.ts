@@ -21,3 +21,14 @@ export const readingSchema = z.object({
   { message: 'Enter at least one reading', path: ['volts'] })
 export type ReadingInput = z.input<typeof readingSchema>
 export type Reading = z.infer<typeof readingSchema>
+
+/** What a stored reading keeps (readings.values): the values, each parameter checked against the WPS window, the heat input. */
+export interface ReadingValues {
+  readings: Record<string, number>
+  checks: { parameter: string, value: number, within: boolean, text: string }[]
+  heatInput: { value: number, perUnit: string, limit: number | null, within: boolean, clause: string, text: string } | null
+  reference: string | null
+  layer?: number
+  layerName?: string
+  process?: string
+}

@@ -5,7 +5,5 @@ import { pqrDetail } from '../../database/pqrs'
 export default defineEventHandler(async (event) => {
   await requireRole(event, staff)
   const { id } = await validParams(event, idParamSchema)
-  const detail = await pqrDetail(await useDb(), id)
-  if (!detail) throw httpError(missing('PQR'))
-  return detail
+  return orThrow(await pqrDetail(await useDb(), id))
 })
