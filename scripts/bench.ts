@@ -166,8 +166,10 @@ function postgres(url: string): Target {
     u.pathname = `/${db}`
     return u.toString()
   }
-  const seeded = `rootface_large_x${String(scale).replace('.', '_')}`
-  const copy = `rootface_bench_${process.pid}`
+  // Named after the database in the URL, so several people measuring on one server keep their own copies.
+  const base = new URL(url).pathname.replace(/^\//, '') || 'postgres'
+  const seeded = `${base === 'postgres' ? 'rootface' : base}_large_x${String(scale).replace('.', '_')}`
+  const copy = `${base === 'postgres' ? 'rootface' : base}_bench_${process.pid}`
   const admin = async <T>(work: (client: pg.Client) => Promise<T>) => {
     const client = new pg.Client({ connectionString: url })
     await client.connect()
