@@ -67,11 +67,9 @@ function verdictsFor(joint: ResolvedJoint) {
 }
 
 type Kind = 'able' | 'lapsed' | 'undecided' | 'not-covered'
-interface WelderRow {
-  welder_id: number, kind: Kind, total: number, name: string, stamp: string, shown_key: string, shown_test: number, test_ids: number[] | string | null
-  chain_code: string, chain_edition: string, chain_test_date: string, chain_last_use: string | null, chain_lapses_on: string, chain_rule: string
-  revoked_on: string | null, revoked_reason: string | null, revoked_by: string | null, queued: boolean
-}
+type WelderRow = Record<'name' | 'stamp' | 'shown_key' | 'chain_code' | 'chain_edition' | 'chain_test_date' | 'chain_lapses_on' | 'chain_rule', string>
+  & Record<'chain_last_use' | 'revoked_on' | 'revoked_reason' | 'revoked_by', string | null>
+  & { welder_id: number, kind: Kind, total: number, shown_test: number, test_ids: number[] | string | null, queued: boolean }
 
 /**
  * Every active welder with a certified welder test of the process and a kept standing for it, graded in SQL from the
