@@ -124,7 +124,8 @@ export async function seedLargeShop(db: Db, today = new Date(), scale = 1) {
     const welderCount = (i: number) => (i === 0 ? 16 : 10)
     await batches(projectIds.flatMap((projectId, i) => Array.from({ length: welderCount(i) }, (_, k) => ({ projectId, welderId: welderIds[(i * 16 + k) % welderIds.length]! }))), 1000, chunk => tx.insert(t.projectWelders).values(chunk))
     await batches(projectIds.flatMap((projectId, i) => Array.from({ length: 3 }, (_, k) => ({ projectId, procedureId: procedureIds[(i * 3 + k) % procedureIds.length]! }))), 1000, chunk => tx.insert(t.projectProcedures).values(chunk))
-    await seedLargeJoints(tx as unknown as Db, projectIds.map((id, i) => ({ id, welderIds: Array.from({ length: welderCount(i) }, (_, k) => welderIds[(i * 16 + k) % welderIds.length]!), procedureIds: Array.from({ length: 3 }, (_, k) => procedureIds[(i * 3 + k) % procedureIds.length]!) })), day, int)
+    // SEED_LARGE_JOINTS=false leaves the weld registers empty (a quicker seed when only the qualification figures are wanted).
+    if (process.env.SEED_LARGE_JOINTS !== 'false') await seedLargeJoints(tx as unknown as Db, projectIds.map((id, i) => ({ id, welderIds: Array.from({ length: welderCount(i) }, (_, k) => welderIds[(i * 16 + k) % welderIds.length]!), procedureIds: Array.from({ length: 3 }, (_, k) => procedureIds[(i * 3 + k) % procedureIds.length]!) })), day, int)
   })
 }
 

@@ -6,6 +6,7 @@ import { rangeFilterPlan } from '../../shared/qualification/range-filters'
 import type { CodeId } from '../../shared/rules/types'
 import { refreshStandings } from './standings'
 import { coverageTestColumns, droppedSql, parseArray, refreshQualifiedRanges } from './qualified-ranges'
+import { welderListsFromRanges } from './coverage-coupons'
 import { revocationClause } from '../../shared/qualification/revocation'
 
 type Rows<T> = { rows: T[] }
@@ -30,6 +31,16 @@ export interface CoverageOptions {
   listed?: number
 }
 
+/** The approved WPSs with a layer of the process (the transfer of that layer). */
+export async function approvedProcedures(db: Db, process: string): Promise<ProcedureRow[]> {
+  const procedures = await db.execute(sql`
+    select id, number, revision, title, code, edition, unit, ${process}::text as process,
+           coalesce((select l->>'transfer' from jsonb_array_elements(layers) l where l->>'process' = ${process} limit 1), transfer) as transfer,
+           p_number_a, p_number_b, thickness_min, thickness_max, diameter_min, positions, f_numbers
+    from procedures where status = 'approved' and (process = ${process} or ${process} = any(processes)) order by number, revision`) as unknown as Rows<ProcedureRow>
+  return procedures.rows.map(p => ({ ...p, positions: parseArray(p.positions), f_numbers: parseArray(p.f_numbers) }))
+}
+
 /**
  * The candidates for "who can weld this joint?": the approved WPSs with a layer of the process, and the active welders with
  * a certified test of it (a combination coupon with that process's own deposit, QW-452.1(b)) joined with their kept standing
@@ -43,11 +54,7 @@ export interface CoverageOptions {
 export async function coverageCandidates(db: Db, joint: ResolvedJoint, options: CoverageOptions = {}): Promise<CoverageCandidates> {
   const process = joint.process
   await refreshStandings(db)
-  const procedures = await db.execute(sql`
-    select id, number, revision, title, code, edition, unit, ${process}::text as process,
-           coalesce((select l->>'transfer' from jsonb_array_elements(layers) l where l->>'process' = ${process} limit 1), transfer) as transfer,
-           p_number_a, p_number_b, thickness_min, thickness_max, diameter_min, positions, f_numbers
-    from procedures where status = 'approved' and (process = ${process} or ${process} = any(processes)) order by number, revision`) as unknown as Rows<ProcedureRow>
+  const procedures = await approvedProcedures(db, process)
   const prefilter = options.prefilter !== false
   if (prefilter) await refreshQualifiedRanges(db)
   const candidates = sql`
@@ -107,7 +114,7 @@ export async function coverageCandidates(db: Db, joint: ResolvedJoint, options: 
     welders.set(id, candidate)
   }
   return {
-    procedures: procedures.rows.map(p => ({ ...p, positions: parseArray(p.positions), f_numbers: parseArray(p.f_numbers) })),
+    procedures,
     welders: [...welders.values()],
     candidateCount: candidateCount ?? welders.size,
     ruledOut,
@@ -116,37 +123,67 @@ export async function coverageCandidates(db: Db, joint: ResolvedJoint, options: 
 
 /**
  * Who can weld this joint today: the approved WPSs that cover it and the active welders whose certified tests cover it and
- * who are current, each with the findings behind the answer. The rules judge only the candidates the stored ranges leave
- * (see coverageCandidates); `prefilter: false` judges every candidate (the property test compares the two).
+ * who are current, each with the findings behind the answer. By default the stored ranges answer it: each distinct coupon
+ * judged once by the rules, the welders graded in SQL (welderListsFromRanges); `prefilter: false` (or stored rows that
+ * cannot be trusted yet) judges every candidate's every test (the property test compares the two).
  */
 export async function whoCanWeld(db: Db, joint: ResolvedJoint, today: string, options: CoverageOptions = {}) {
+  const listed = options.listed ?? notCoveredListed
   const started = performance.now()
-  const rows = await coverageCandidates(db, joint, options)
+  if (options.prefilter !== false) {
+    await refreshStandings(db)
+    await refreshQualifiedRanges(db)
+    const procedureRows = await approvedProcedures(db, joint.process)
+    const procedures = judgeProcedures(procedureRows, joint)
+    const fast = await welderListsFromRanges(db, joint, today, { lapsed: 100, undecided: 100, notCovered: listed })
+    if (fast) {
+      const total = performance.now() - started
+      const welders = fast.counts.able + fast.counts.lapsed + fast.counts.undecided + fast.counts['not-covered']
+      // candidates: welders judged; coupons: their distinct coupons; judged: coupons the rules judged in this request (the
+      // others' verdicts were kept from an earlier request for the same joint); ruledOut: coupons the stored ranges ruled out
+      const timing = { queryMs: round(total - fast.rulesMs), rulesMs: round(fast.rulesMs), candidates: welders, coupons: fast.coupons, judged: fast.judgedCoupons, ruledOut: fast.ruledOut }
+      return answerOf(today, joint, timing, procedures, {
+        able: fast.lists.able, lapsed: fast.lists.lapsed, lapsedCount: fast.counts.lapsed, notCovered: fast.lists['not-covered'],
+        notCoveredCount: fast.counts['not-covered'], undecided: fast.lists.undecided, undecidedCount: fast.counts.undecided,
+      }, listed)
+    }
+  }
+  const rows = await coverageCandidates(db, joint, { ...options, prefilter: false })
   const queried = performance.now()
   const procedures = judgeProcedures(rows.procedures, joint)
   const welders = judgeWelders(rows.welders, joint, today)
   const judged = performance.now()
-  const timing = { queryMs: Math.round((queried - started) * 10) / 10, rulesMs: Math.round((judged - queried) * 10) / 10, candidates: rows.welders.length, ruledOut: rows.ruledOut }
+  const timing = { queryMs: round(queried - started), rulesMs: round(judged - queried), candidates: rows.welders.length, coupons: 0, judged: 0, ruledOut: 0 }
   const lapsed = welders.filter(w => w.covered && !w.current)
   const notCovered = welders.filter(w => w.answer === 'not-covered')
   const undecided = welders.filter(w => w.answer === 'cannot-tell')
-  // Welders the stored ranges left out are not covered; they are counted, and the first of them judged for the list.
-  const notCoveredCount = rows.candidateCount - welders.filter(w => w.answer !== 'not-covered').length
+  return answerOf(today, joint, timing, procedures, {
+    able: welders.filter(w => w.covered && w.current), lapsed, lapsedCount: lapsed.length, notCovered, notCoveredCount: notCovered.length,
+    undecided, undecidedCount: undecided.length,
+  }, listed)
+}
+
+const round = (ms: number) => Math.round(ms * 10) / 10
+
+type Line = ReturnType<typeof judgeWelders>[number]
+interface Lists { able: Line[], lapsed: Line[], lapsedCount: number, notCovered: Line[], notCoveredCount: number, undecided: Line[], undecidedCount: number }
+
+function answerOf(today: string, joint: ResolvedJoint, timing: { queryMs: number, rulesMs: number, candidates: number, coupons: number, judged: number, ruledOut: number }, procedures: ReturnType<typeof judgeProcedures>, l: Lists, listed: number) {
   return {
     today, joint, timing,
     procedures: procedures.sort((a, b) => Number(b.covered) - Number(a.covered)),
     welders: {
       // Covered and current today: may weld it (with a WPS that covers it)
-      able: welders.filter(w => w.covered && w.current),
+      able: l.able,
       // Covered by their tests, but the process has lapsed: renewal needed first (names and dates only)
-      lapsed: lapsed.slice(0, 100).map(({ id, name, stamp, standing }) => ({ id, name, stamp, standing })),
-      lapsedCount: lapsed.length,
+      lapsed: l.lapsed.slice(0, 100).map(({ id, name, stamp, standing }) => ({ id, name, stamp, standing })),
+      lapsedCount: l.lapsedCount,
       // Tested in the process but no test covers the joint: the findings that are not met
-      notCovered: notCovered.slice(0, options.listed ?? notCoveredListed).map(w => ({ ...w, reasons: w.reasons.filter(r => r.state === 'not-met' || (r.state === undefined && !r.met)) })),
-      notCoveredCount,
+      notCovered: l.notCovered.slice(0, listed).map(w => ({ ...w, reasons: w.reasons.filter(r => r.state === 'not-met' || (r.state === undefined && !r.met)) })),
+      notCoveredCount: l.notCoveredCount,
       // A variable the joint states was not recorded on their tests (or the reverse): cannot tell until it is recorded
-      undecided: undecided.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => !r.met) })),
-      undecidedCount: undecided.length,
+      undecided: l.undecided.slice(0, 100).map(w => ({ ...w, reasons: w.reasons.filter(r => !r.met) })),
+      undecidedCount: l.undecidedCount,
     },
   }
 }

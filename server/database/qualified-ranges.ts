@@ -1,6 +1,7 @@
+import { createHash } from 'node:crypto'
 import { sql, type SQL } from 'drizzle-orm'
 import type { Db } from './client'
-import { qualifiedRanges } from './schema'
+import { qualifiedCoupons, qualifiedRanges } from './schema'
 import { coverageTestInput, type TestRow } from '../../shared/qualification/joint-coverage'
 import { deriveQualifiedRanges, QUALIFIED_RANGES_RULES_VERSION } from '../../shared/qualification/qualified-ranges'
 import type { DropCondition, RangeFilterPlan } from '../../shared/qualification/range-filters'
@@ -17,6 +18,13 @@ export const coverageTestColumns = (process: SQL) => sql`t.id, t.test_date::text
   case when d.e is null then t.transfer else d.e->>'transfer' end as transfer, t.form, t.weld, t.coupon_thickness,
   case when d.e is null then t.deposit_thickness else (d.e->>'depositThickness')::float8 end as deposit_thickness, t.layers,
   t.outside_diameter, t.p_number, t.f_number, t.backing, t.positions, t.progression`
+
+/**
+ * One digest per distinct coupon as the covers rule reads it: the code, edition and unit with the rules input (the same
+ * string judgeWelders memoises on). Two tests with the same key get the same verdict for any joint.
+ */
+export const couponKey = (code: string, edition: string, unit: string, input: unknown) =>
+  createHash('sha1').update(`${code}|${edition}|${unit}|${JSON.stringify(input)}`).digest('base64url')
 
 const chunked = <T>(list: T[], size: number) => Array.from({ length: Math.ceil(list.length / size) }, (_, i) => list.slice(i * size, (i + 1) * size))
 
@@ -36,18 +44,24 @@ export async function refreshQualifiedRanges(db: Db) {
       if (!ids.length) return true
       const list = `{${ids.join(',')}}`
       const tests = await tx.execute(sql`
-        select ${coverageTestColumns(sql`p.process`)}, t.welder_id
+        select ${coverageTestColumns(sql`p.process`)}, t.welder_id, t.qualified_as
         from welder_tests t
           cross join lateral (select distinct x as process from unnest(array[t.process] || t.processes) x) p
           left join lateral (select e from jsonb_array_elements(t.deposits) e where e->>'process' = p.process limit 1) d on true
-        where t.id = any(${list}::int[]) and t.status = 'certified'`) as unknown as Rows<TestRow & { welder_id: number }>
+        where t.id = any(${list}::int[]) and t.status = 'certified'`) as unknown as Rows<TestRow & { welder_id: number, qualified_as: string }>
       await tx.execute(sql`delete from qualified_ranges where test_id = any(${list}::int[])`)
-      const rows = tests.rows.map(t => ({
-        testId: Number(t.id), process: t.process, welderId: Number(t.welder_id), code: t.code, edition: t.edition, unit: t.unit,
-        rulesVersion: QUALIFIED_RANGES_RULES_VERSION,
-        ...deriveQualifiedRanges({ code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit, process: t.process, weld: t.weld as 'groove' | 'fillet', input: coverageTestInput({ ...t, positions: parseArray(t.positions) }) }),
-      }))
-      for (const batch of chunked(rows, 250)) await tx.insert(qualifiedRanges).values(batch)
+      const rows = tests.rows.map((t) => {
+        const input = coverageTestInput({ ...t, positions: parseArray(t.positions) })
+        return {
+          testId: Number(t.id), process: t.process, welderId: Number(t.welder_id), code: t.code, edition: t.edition, unit: t.unit,
+          rulesVersion: QUALIFIED_RANGES_RULES_VERSION, testDate: t.test_date, qualifiedAs: t.qualified_as,
+          input, inputKey: couponKey(t.code, t.edition, t.unit, input),
+          ...deriveQualifiedRanges({ code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit, process: t.process, weld: t.weld as 'groove' | 'fillet', input }),
+        }
+      })
+      const coupons = new Map(rows.map(r => [r.inputKey, { inputKey: r.inputKey, code: r.code, edition: r.edition, unit: r.unit, input: r.input }]))
+      for (const batch of chunked([...coupons.values()], 250)) await tx.insert(qualifiedCoupons).values(batch).onConflictDoNothing()
+      for (const batch of chunked(rows.map(({ input: _input, ...row }) => row), 250)) await tx.insert(qualifiedRanges).values(batch)
       derived += rows.length
       return false
     })

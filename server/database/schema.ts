@@ -904,6 +904,11 @@ export const qualifiedRanges = pgTable('qualified_ranges', {
   backing: boolean('backing'),
   transfer: text('transfer'),
   progression: text('progression'),
+  // The digest of the coupon as the covers rule reads it (qualified_coupons): "Who can weld it?" judges each distinct
+  // coupon once and grades the welders by it in SQL.
+  inputKey: text('input_key'),
+  testDate: date('test_date', { mode: 'string' }),
+  qualifiedAs: text('qualified_as'),
 }, t => [
   primaryKey({ columns: [t.testId, t.process] }),
   index('qualified_ranges_process_idx').on(t.process, t.welderId),
@@ -912,6 +917,16 @@ export const qualifiedRanges = pgTable('qualified_ranges', {
 
 export const qualifiedRangesRefresh = pgTable('qualified_ranges_refresh', {
   testId: integer('test_id').primaryKey(),
+})
+
+// Each distinct coupon once (the code, edition and unit with the rules input of coverageTestInput), under the digest that
+// qualified_ranges.input_key names. Content-addressed: a row never changes; rows no test names any more are harmless.
+export const qualifiedCoupons = pgTable('qualified_coupons', {
+  inputKey: text('input_key').primaryKey(),
+  code: text('code').notNull(),
+  edition: text('edition').notNull(),
+  unit: unit(),
+  input: jsonb('input').notNull(),
 })
 // ---- end perf ----
 

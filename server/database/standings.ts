@@ -172,7 +172,7 @@ export async function standingsBoard(db: Db, query: StandingsQuery, today: strin
 }
 
 // The dashboard lists stop at this many rows (a large shop sees the rest on the continuity page); the counts are whole.
-const listLimit = 200
+const listLimit = 25
 
 /** The staff dashboard: who lapses in the next 30/60/90 days, who has lapsed, the lapse timeline, tests awaiting certification. */
 export async function dashboard(db: Db, today: string) {
@@ -220,7 +220,7 @@ export async function dashboard(db: Db, today: string) {
     id: welderTests.id, testDate: welderTests.testDate, process: welderTests.process, positions: welderTests.positions, form: welderTests.form,
     weld: welderTests.weld, welderId: welders.id, welderName: welders.name, welderStamp: welders.stamp, procedureNumber: procedures.number,
   }).from(welderTests).innerJoin(welders, eq(welders.id, welderTests.welderId)).leftJoin(procedures, eq(procedures.id, welderTests.procedureId))
-    .where(eq(welderTests.status, 'recorded')).orderBy(asc(welderTests.testDate)).limit(100)
+    .where(eq(welderTests.status, 'recorded')).orderBy(asc(welderTests.testDate)).limit(listLimit)
   const [waiting] = await db.select({ n: sql<number>`count(*)::int` }).from(welderTests).where(eq(welderTests.status, 'recorded'))
   const byWeek = new Map(buckets.rows.map(b => [Number(b.week), b]))
   const weeks: LapseWeek[] = Array.from({ length: weeksBack + weeksAhead }, (_, i) => {

@@ -5,7 +5,8 @@ import type { PacketPlan, WelderGap } from './packet'
 
 // The packet as a pdfmake definition, from data alone (no database, no server): it runs in the render worker too.
 
-export interface PacketEntry { sheet: SheetModel, group: string }
+/** One sheet of the packet; `page` is its first packet page when the sheets are merged after the front (packet-merge.ts). */
+export interface PacketEntry { sheet: SheetModel, group: string, page?: number }
 
 export interface PacketDocumentInput {
   plan: PacketPlan
@@ -39,6 +40,29 @@ export function packetDefinition(input: PacketDocumentInput) {
       front(gapContent(plan, gaps), 2, 'not-current'),
       ...entries.map((e, i) => sheetSection(e.sheet, i + 3, tracker, furniture, `sheet-${i}`)),
     ],
+    styles,
+  }
+  return { definition, tracker }
+}
+
+/**
+ * The packet's front alone (cover, index, summary of welders not current), the sheets merged after it: the index prints
+ * each entry's `page`. Its pages are numbered as packet pages, since the front comes first.
+ */
+export function packetFrontDefinition(input: PacketDocumentInput) {
+  const { plan, shop, entries, gaps } = input
+  const tracker = new PageTracker()
+  const front = (content: unknown[], anchor?: string) => ({
+    section: anchor ? [{ text: '', id: anchor }, ...content] : content,
+    header: () => pageHeader(shop, `Project ${plan.project.number}`, `Packet ${plan.project.number}`),
+    footer: (_page: number, pages: number) => {
+      tracker.total = pages
+      return pageFooter(`Project ${plan.project.number} · ${plan.project.name}`, '')
+    },
+  })
+  const definition = {
+    ...documentBase(`Packet ${plan.project.number}`, shop),
+    content: [front(coverContent(input)), front(indexContent(entries)), front(gapContent(plan, gaps), 'not-current')],
     styles,
   }
   return { definition, tracker }
@@ -98,7 +122,7 @@ function indexContent(entries: PacketEntry[]) {
       { text: sheetReference(e.sheet), style: 'cell', bold: true },
       { text: e.sheet.subtitle, style: 'cell' },
       { text: e.sheet.verify ? groupedCode(e.sheet.verify.code) : 'not signed', style: 'cell' },
-      { text: '00', pageReference: `sheet-${i}`, style: 'cell', alignment: 'right' },
+      e.page === undefined ? { text: '00', pageReference: `sheet-${i}`, style: 'cell', alignment: 'right' } : { text: String(e.page), style: 'cell', alignment: 'right' },
     ])
   })
   return [

@@ -33,7 +33,7 @@ async function runPacket(db: Db, packetId: number, projectId: number, user: Sess
     // Attached files (lab and radiography reports, sketches, photos) follow the sheets as appendices.
     const files = await appendicesOf(db, plan)
     const { pdf, pageCount } = files.length ? await appendFiles(new Uint8Array(built.pdf), files) : built
-    console.info(`[rootface] packet ${packetId}: ${sheets} sheets, ${pageCount} pages; sheets read in ${timing.modelsMs} ms, laid out and rendered in ${timing.renderMs} ms`)
+    console.info(`[rootface] packet ${packetId}: ${sheets} sheets, ${pageCount} pages; sheets read in ${timing.modelsMs} ms, ${timing.rendered} rendered in ${timing.renderMs} ms, merged in ${timing.mergeMs} ms`)
     const sha256 = createHash('sha256').update(pdf).digest('hex')
     await packetReady(db, packetId, new Uint8Array(pdf), pageCount, sha256)
   }

@@ -102,35 +102,51 @@ export const coverageTestInput = (t: TestRow) => welderRangesInput(variablesOf(t
  * and whether one of their certified tests of the process covers the joint (the rules' covers check takes a set of
  * tests the same way: covered when one test covers it all). Identical coupons are judged once per request.
  */
-export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: string) {
+export type CouponVerdict = { covered: boolean, answer: CoverAnswer, record: string[], reasons: CoverReason[] }
+
+/**
+ * The covers rule of a coupon's code for this joint, one call per coupon: `judge(code, edition, unit, input)` answers
+ * covered, cannot tell (also when the rules refuse the coupon) or not covered, with the findings.
+ */
+export function couponJudge(joint: ResolvedJoint) {
   const productions = new Map<Unit, ProductionWeld>()
   const productionOf = (unit: Unit) => productions.get(unit) ?? productions.set(unit, productionIn(joint, unit) as unknown as ProductionWeld).get(unit)!
-  type Verdict = { covered: boolean, answer: CoverAnswer, record: string[], reasons: CoverReason[] }
-  const verdicts = new Map<string, Verdict>()
-  const judge = (t: TestRow): Verdict => {
+  return (code: string, edition: string, unit: string, test: WelderTestInput): CouponVerdict => {
+    try {
+      // Stored tests passed the same schemas when they were saved, so the rule is called without re-parsing them.
+      return getRuleSet(code as CodeId).covers({ test, production: productionOf(unit as Unit) }, { code: code as CodeId, edition, unit: unit as Unit })
+    }
+    catch (error) {
+      if (!(error instanceof RuleRefusal)) throw error
+      return { covered: false, answer: 'cannot-tell', record: [], reasons: [{ met: false, state: 'not-recorded', clause: 'rules', text: `Cannot judge this test: ${error.message}`, basis: 'convention' }] }
+    }
+  }
+}
+
+/** One welder's line of the answer from the verdict of the test shown (the covering one, else one that cannot tell, else the newest). */
+export function welderLine(w: Pick<CandidateRow, 'id' | 'name' | 'stamp' | 'chain'>, shown: CouponVerdict, answer: CoverAnswer, testIds: number[], today: string) {
+  const standing = standingOn(w.chain, today)
+  return { id: w.id, name: w.name, stamp: w.stamp, covered: answer === 'covered', answer, record: shown.record, current: standing.standing !== 'lapsed', standing, reasons: shown.reasons, testIds }
+}
+
+export function judgeWelders(rows: CandidateRow[], joint: ResolvedJoint, today: string) {
+  const judgeCoupon = couponJudge(joint)
+  const verdicts = new Map<string, CouponVerdict>()
+  const judge = (t: TestRow): CouponVerdict => {
     const test = coverageTestInput(t)
     const key = `${t.code}|${t.edition}|${t.unit}|${JSON.stringify(test)}`
     const known = verdicts.get(key)
     if (known) return known
-    let verdict: Verdict
-    try {
-      // Stored tests passed the same schemas when they were saved, so the rule is called without re-parsing them.
-      verdict = getRuleSet(t.code as CodeId).covers({ test, production: productionOf(t.unit as Unit) }, { code: t.code as CodeId, edition: t.edition, unit: t.unit as Unit })
-    }
-    catch (error) {
-      if (!(error instanceof RuleRefusal)) throw error
-      verdict = { covered: false, answer: 'cannot-tell', record: [], reasons: [{ met: false, state: 'not-recorded', clause: 'rules', text: `Cannot judge this test: ${error.message}`, basis: 'convention' }] }
-    }
+    const verdict = judgeCoupon(t.code, t.edition, t.unit, test)
     verdicts.set(key, verdict)
     return verdict
   }
   return rows.map((w) => {
-    const standing = standingOn(w.chain, today)
     const judged = w.tests.map(t => ({ id: t.id, ...judge(t) }))
     const covering = judged.find(j => j.covered)
     const telling = judged.find(j => j.answer === 'cannot-tell')
     const shown = covering ?? telling ?? judged[0]!
     const answer: CoverAnswer = covering ? 'covered' : telling ? 'cannot-tell' : 'not-covered'
-    return { id: w.id, name: w.name, stamp: w.stamp, covered: Boolean(covering), answer, record: shown.record, current: standing.standing !== 'lapsed', standing, reasons: shown.reasons, testIds: covering ? [covering.id] : judged.map(j => j.id) }
+    return welderLine(w, shown, answer, covering ? [covering.id] : judged.map(j => j.id), today)
   })
 }

@@ -9,7 +9,7 @@ import { toMicro } from '../rules/units'
  * may change what a welder test qualifies (a table row, a clause, a new variable): at start-up every row stamped with
  * another version is derived again, and until then such a row keeps its test a candidate for every joint.
  */
-export const QUALIFIED_RANGES_RULES_VERSION = 1
+export const QUALIFIED_RANGES_RULES_VERSION = 2
 
 /**
  * One certified test as "Who can weld it?" judges it for one process: the rules input, and the context. The same input
