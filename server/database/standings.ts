@@ -51,7 +51,8 @@ async function recompute(tx: Db, marked: { welderId: number, process: string }[]
     .from(importedTests).where(and(inArray(importedTests.welderId, ids), eq(importedTests.state, 'confirmed')))
   const tests = [
     ...certified.flatMap(({ processes, qualifiedAs, ...t }) => (processes.length ? processes : [t.process]).map(process => ({ ...t, process: standingKey(process, qualifiedAs) }))),
-    ...confirmed.map(t => ({ ...t, id: -t.id, iso: null as unknown })),
+    // Imported history may not name its edition: the kept standing says so rather than guessing one.
+    ...confirmed.map(t => ({ ...t, edition: t.edition ?? 'edition not recorded', id: -t.id, iso: null as unknown })),
   ].filter(t => sameFamily(t.code, processOfKey(t.process)))
     .sort((a, b) => b.testDate.localeCompare(a.testDate) || b.id - a.id)
   const isoIds = [...new Set(tests.filter(t => t.code === 'iso-9606-1').map(t => t.id))]

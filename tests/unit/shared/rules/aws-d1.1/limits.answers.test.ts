@@ -11,7 +11,7 @@ import { ok, refused } from '../helpers'
 type Unit = 'in' | 'mm'
 const pr = (input: Record<string, unknown>, unit: Unit = 'in', edition = '2020') => ok({ code: 'aws-d1.1', check: 'procedure-ranges', unit, edition, input })
 const prNo = (input: Record<string, unknown>, unit: Unit = 'in') => refused({ code: 'aws-d1.1', check: 'procedure-ranges', unit, edition: '2020', input })
-const texts = (r: Record<string, unknown>) => (r.reasons as { clause: string, text: string, basis: string }[]).map(x => [x.clause, x.text, x.basis])
+const texts = (r: Record<string, unknown>) => (r.reasons as { clause: string, text: string, basis: string }[]).map(x => [x.clause, x.text, x.basis] as [string, string, string])
 
 // [unit, T, min, max, specimens with side bends]
 const pqrBands: [Unit, number, number, number | null, boolean][] = [
