@@ -13,8 +13,11 @@ export async function reserveSignIn(db: Db, keys: ThrottleKey[]): Promise<Reserv
     let refusedUntil = null as Date | null
     const taken: string[] = []
     for (const { key, limit } of keys) {
-      await tx.insert(signInFailures).values({ key, failures: 0 }).onConflictDoNothing()
-      const [row] = await tx.select().from(signInFailures).where(eq(signInFailures.key, key)).for('update')
+      // One statement makes the row exist and locks it: an insert that met a row and a select after it could find the row
+      // deleted in between by a concurrent successful sign-in (seen on PostgreSQL with twenty sign-ins at once).
+      const [row] = await tx.insert(signInFailures).values({ key, failures: 0 })
+        .onConflictDoUpdate({ target: signInFailures.key, set: { key: sql`excluded.key` } })
+        .returning()
       const now = new Date()
       if (row!.lockedUntil && row!.lockedUntil > now) {
         refusedUntil = refusedUntil && refusedUntil > row!.lockedUntil ? refusedUntil : row!.lockedUntil
