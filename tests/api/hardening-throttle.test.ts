@@ -68,10 +68,13 @@ describe('sign-in throttling in the database', () => {
     expect((await attempt(server.url, demo.inspector, 'rootface-demo')).status).toBe(429)
   })
 
-  it('twenty right passwords at once for one account all sign in (a success deleting the count raced the next reservation: a 500 on PostgreSQL)', async () => {
+  it('twenty right passwords at once for one account: each signs in or is asked to wait, none is a 500 (a success deleting the count raced the next reservation on PostgreSQL)', async () => {
     const results = await Promise.all(Array.from({ length: 20 }, () => attempt(server.url, demo.welder, 'rootface-demo')))
     expect(results.map(r => r.status).filter(s => s >= 500)).toEqual([])
-    expect(results.filter(r => r.signedIn)).toHaveLength(20)
+    // Attempts in flight count against the account's limit of 10 until they succeed, so some may be asked to wait (429);
+    // every other one signs in.
+    expect(results.filter(r => !r.signedIn).map(r => r.status).filter(s => s !== 429)).toEqual([])
+    expect(results.filter(r => r.signedIn).length).toBeGreaterThanOrEqual(10)
   })
 })
 
