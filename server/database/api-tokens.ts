@@ -5,7 +5,7 @@ import { accounts, apiTokens, welders } from './schema'
 import { logEntry } from './continuity'
 import { recordAudit } from './audit'
 import type { SessionUser } from '../utils/auth'
-import { fieldFailure, missing } from '../../shared/types/outcome'
+import { fieldFailure, isFailure, missing } from '../../shared/types/outcome'
 import type { ApiTokenInput, ExternalContinuityInput } from '../../shared/schemas/joints'
 import type { TokenScope } from '../../shared/vocabulary/joints'
 
@@ -71,4 +71,11 @@ export async function continuityFromSystem(db: Db, user: SessionUser, input: Ext
   const [welder] = await db.select({ id: welders.id }).from(welders).where(eq(welders.stamp, input.stamp))
   if (!welder) return fieldFailure('stamp', 'Not on the roster')
   return logEntry(db, user, { welderId: welder.id, process: input.process, weldedOn: input.weldedOn, reference: input.reference }, today)
+}
+
+/** The same, as a route calls it: every use of the key is audited, refused or not. */
+export async function continuityByKey(db: Db, token: { id: number, name: string, createdBy: number }, user: SessionUser, input: ExternalContinuityInput, today: string) {
+  const result = await continuityFromSystem(db, user, input, today)
+  await auditTokenUse(db, token, 'continuity', isFailure(result) ? { refused: result.fail, stamp: input.stamp } : { stamp: input.stamp, process: input.process, weldedOn: input.weldedOn })
+  return result
 }

@@ -5,12 +5,13 @@ import {
   signatures, welders,
 } from './schema'
 import { recordAudit } from './audit'
+import { auditTokenUse } from './api-tokens'
 import { newVerifyCode } from './signing'
 import type { SessionUser } from '../utils/auth'
 import { allOf, containsPattern, orderOf, pageOf } from '../utils/list'
 import { settle } from '../utils/outcome'
 import { parseWeldLog } from '../utils/weld-log-csv'
-import { fieldFailure, forbidden, frozen, invalid, missing, refused, stale, type Failure, type Outcome } from '../../shared/types/outcome'
+import { fieldFailure, forbidden, frozen, invalid, isFailure, missing, refused, stale, type Failure, type Outcome } from '../../shared/types/outcome'
 import { checkJoint, refusalLines, type AssignedProcedure, type Assignment, type JointCheck, type RegisterJoint, type Refusal } from '../../shared/qualification/joint-check'
 import type { CandidateRow, ProcedureRow, TestRow } from '../../shared/qualification/joint-coverage'
 import { continuityChain } from '../../shared/qualification/process-standing'
@@ -543,6 +544,13 @@ export async function weldedFromSystem(db: Db, user: SessionUser, input: Externa
     return { welderId, process: w.process, layer: w.layer ?? known?.layer ?? null, fNumber: w.fNumber ?? known?.fNumber ?? null }
   })
   return markWelded(db, user, found.projectId, found.id, { weldedOn: input.weldedOn, version: found.version }, today, crew)
+}
+
+/** A joint reported welded by another shop system, as a route calls it: every use of the key is audited, refused or not. */
+export async function weldedByKey(db: Db, token: { id: number, name: string, createdBy: number }, user: SessionUser, input: ExternalWeldedInput, today: string) {
+  const result = await weldedFromSystem(db, user, input, today)
+  await auditTokenUse(db, token, 'joint-welded', isFailure(result) ? { refused: result.fail, project: input.project, mark: input.mark } : { jointId: result.id, posted: result.posted })
+  return result
 }
 
 /**

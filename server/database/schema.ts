@@ -5,6 +5,7 @@ import {
 import type { Role } from '../../shared/utils/roles'
 import type { TrialJointKind } from '../../shared/vocabulary/trial-joints'
 import type { EquipmentKind, equipmentStates } from '../../shared/vocabulary/equipment-kinds'
+import type { MailStatus } from '../../shared/vocabulary/list-filters'
 
 // Lengths are stored in the unit of their record (`unit`: 'in' | 'mm'); the rules evaluate them in that unit.
 const created = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow()
@@ -445,7 +446,7 @@ export const mailMessages = pgTable('mail_messages', {
   subject: text('subject').notNull(),
   text: text('text').notNull(),
   html: text('html').notNull(),
-  status: text('status').notNull().default('queued'),
+  status: text('status').$type<MailStatus>().notNull().default('queued'),
   attempts: integer('attempts').notNull().default(0),
   lastError: text('last_error'),
   // A send claims the row until then; after a failure it is the earliest time of the next attempt.

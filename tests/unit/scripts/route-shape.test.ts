@@ -31,8 +31,6 @@ const publicRoutes: Record<string, string> = {
 const severalCalls: Record<string, string> = {
   'server/api/auth/[...].ts': 'the sign-in throttle wraps the auth library: reserve, then succeed, fail or abandon',
   'server/api/continuity/index.post.ts': 'whether the shop lets a welder log is checked before the body is validated (403 before 400)',
-  'server/api/ext/continuity.post.ts': 'every use of a key is audited, refused or not, after the call',
-  'server/api/ext/joints/welded.post.ts': 'every use of a key is audited, refused or not, after the call',
   'server/api/sheets/continuity/[welderId].get.ts': 'the period is read before the sheet is built in server/sheets/',
 }
 
