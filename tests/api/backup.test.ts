@@ -45,7 +45,7 @@ describe.skipIf(!!process.env.TEST_DATABASE_URL)('backup and restore of the embe
     const restored = await startServer({ dataDir: join(work, 'restored'), env: { NUXT_SEED_DEMO: 'false' } })
     servers.push(restored)
     expect(await tableCounts(restored)).toEqual(before)
-  })
+  }, 120_000) // two servers start and a whole database is restored: over 30 s on a loaded two-core machine
 
   it('db:backup refuses while a server holds the data directory, and works once it has stopped', async () => {
     const server = servers[0]!
